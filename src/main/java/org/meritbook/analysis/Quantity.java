@@ -1,0 +1,28 @@
+package org.meritbook.analysis;
+
+import java.util.Objects;
+
+/**
+ * One named result of an analysis, as results.json and the dossier carry it.
+ *
+ * @param name     the stable results.json name (DESIGN §4), e.g. {@code slope},
+ *                 {@code back_calculated:C5}
+ * @param label    plain-language label for the dossier, e.g. "Slope (sensitivity)"
+ * @param value    the value at full double precision (finite)
+ * @param unit     unit, or null when dimensionless
+ * @param stepId   id of the trail step that computed it
+ * @param interval its confidence interval, or null
+ * @param summary  whether it appears in the dossier's summary of characteristics
+ */
+public record Quantity(String name, String label, double value, String unit, String stepId, Interval interval,
+                       boolean summary) {
+    public Quantity {
+        Objects.requireNonNull(name, "name");
+        Objects.requireNonNull(label, "label");
+        Objects.requireNonNull(stepId, "stepId");
+        if (!Double.isFinite(value)) {
+            // A bare NaN never reaches a dossier: analyses report "not evaluable" as a warning instead.
+            throw new IllegalArgumentException("quantity " + name + " is not finite: " + value);
+        }
+    }
+}

@@ -1,0 +1,10 @@
+package org.meritbook.cli;
+
+public final class Main {
+    private Main() {
+    }
+
+    public static void main(String[] args) {
+        System.out.println("meritbook");
+    }
+}

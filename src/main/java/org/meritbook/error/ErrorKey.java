@@ -1,0 +1,39 @@
+package org.meritbook.error;
+
+/**
+ * Stable keys for every input problem meritbook reports. Tests assert on the key and the
+ * location, never on incidental wording; the wording lives in {@link Problem}.
+ */
+public enum ErrorKey {
+    // study notebook
+    NOTEBOOK_UNREADABLE,
+    NOTEBOOK_SYNTAX,
+    FRONT_MATTER,
+    UNKNOWN_KIND,
+    UNKNOWN_OPTION,
+    MISSING_OPTION,
+    BAD_OPTION_VALUE,
+    DUPLICATE_ID,
+    UNKNOWN_REFERENCE,
+    UNDECLARED_SOURCE,
+    BAD_DATA_REFERENCE,
+    // workbooks
+    FILE_NOT_FOUND,
+    CORRUPT_FILE,
+    ENCRYPTED_FILE,
+    UNSUPPORTED_FORMAT,
+    MISSING_SHEET,
+    MISSING_NAME,
+    MISSING_COLUMN,
+    EMPTY_RANGE,
+    NOT_A_NUMBER,
+    CENSORED_VALUE,
+    FORMULA_WITHOUT_RESULT,
+    BAD_CELL_ADDRESS,
+    // data that cannot support a method
+    TOO_FEW_POINTS,
+    ZERO_VARIANCE,
+    NON_POSITIVE_WEIGHT_BASIS,
+    // outputs
+    OUTPUT_EXISTS
+}

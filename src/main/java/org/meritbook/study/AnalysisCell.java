@@ -1,0 +1,36 @@
+package org.meritbook.study;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * A fenced analysis cell.
+ *
+ * @param id         the cell id ({@code id:} option, or the kind numbered from the second cell on)
+ * @param kind       the analysis kind
+ * @param title      the nearest preceding Markdown heading, or the id when there is none
+ * @param line       the notebook line of the opening fence
+ * @param options    options by name, in notebook order, validated against the kind
+ * @param exclusions the {@code exclude:} entries, parsed
+ */
+public record AnalysisCell(String id, AnalysisKind kind, String title, int line,
+                           Map<String, OptionValue> options, List<Exclusion> exclusions) implements StudyElement {
+    public AnalysisCell {
+        Objects.requireNonNull(id, "id");
+        Objects.requireNonNull(kind, "kind");
+        options = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(options));
+        exclusions = List.copyOf(exclusions);
+    }
+
+    public Optional<OptionValue> option(String name) {
+        return Optional.ofNullable(options.get(name));
+    }
+
+    /** The notebook line of an option, or the cell's line when the option is absent. */
+    public int lineOf(String name) {
+        OptionValue v = options.get(name);
+        return v == null ? line : v.line();
+    }
+}
