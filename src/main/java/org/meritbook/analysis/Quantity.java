@@ -1,6 +1,7 @@
 package org.meritbook.analysis;
 
 import java.util.Objects;
+import org.meritbook.stats.Interval;
 
 /**
  * One named result of an analysis, as results.json and the dossier carry it.

@@ -1,4 +1,4 @@
-package org.meritbook.analysis;
+package org.meritbook.stats;
 
 /**
  * A two-sided confidence interval.
