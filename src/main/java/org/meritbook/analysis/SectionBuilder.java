@@ -1,0 +1,112 @@
+package org.meritbook.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.meritbook.criteria.Verdict;
+import org.meritbook.figures.FigureSpec;
+import org.meritbook.stats.Interval;
+import org.meritbook.study.AnalysisCell;
+import org.meritbook.trail.Step;
+import org.meritbook.trail.StepInput;
+
+/**
+ * Collects one section's quantities and their trail steps in computation order, so that every
+ * quantity is born with its step (ids {@code <section>.<name>}).
+ */
+public final class SectionBuilder {
+    private final AnalysisCell cell;
+    private final List<Setting> settings = new ArrayList<>();
+    private final List<Quantity> quantities = new ArrayList<>();
+    private final List<Step> steps = new ArrayList<>();
+    private final List<FigureSpec> figures = new ArrayList<>();
+    private final List<Verdict> verdicts = new ArrayList<>();
+    private final List<String> warnings = new ArrayList<>();
+
+    public SectionBuilder(AnalysisCell cell) {
+        this.cell = cell;
+    }
+
+    public String stepId(String name) {
+        return cell.id() + "." + name;
+    }
+
+    public SectionBuilder setting(String label, String value) {
+        settings.add(new Setting(label, value));
+        return this;
+    }
+
+    /** An intermediate step that is not itself a reported quantity (a weighted mean, a sum of squares). */
+    public String step(String name, String label, String formula, List<StepInput> inputs, double value, String unit,
+                       String method) {
+        String id = stepId(name);
+        steps.add(new Step(id, label, formula, inputs, value, unit, method));
+        return id;
+    }
+
+    /** A reported quantity together with the step that computed it. */
+    public String quantity(QuantityDraft q) {
+        String id = step(q.name(), q.label(), q.formula(), q.inputs(), q.value(), q.unit(), q.method());
+        quantities.add(new Quantity(q.name(), q.label(), q.value(), q.unit(), id, q.interval(), q.summary()));
+        return id;
+    }
+
+    /** An input that is the value of an earlier step of this section, named by its symbol. */
+    public StepInput ref(String symbol, String stepId) {
+        Step step = steps.stream().filter(s -> s.id().equals(stepId)).findFirst()
+                .orElseThrow(() -> new IllegalStateException("no step " + stepId + " recorded yet"));
+        return StepInput.number(symbol, step.value(), step.unit(), stepId);
+    }
+
+    public SectionBuilder figure(FigureSpec figure) {
+        figures.add(figure);
+        return this;
+    }
+
+    public SectionBuilder verdict(Verdict verdict) {
+        verdicts.add(verdict);
+        return this;
+    }
+
+    public SectionBuilder warning(String text) {
+        warnings.add(text);
+        return this;
+    }
+
+    public SectionResult build(DataTable table) {
+        return new SectionResult(cell.id(), cell.kind(), cell.title(), settings, quantities, steps, table, figures,
+                verdicts, warnings);
+    }
+
+    /**
+     * A quantity about to be recorded.
+     *
+     * @param name     results.json name
+     * @param label    plain-language label
+     * @param formula  plain-notation formula
+     * @param inputs   named inputs with sources
+     * @param value    value
+     * @param unit     unit or null
+     * @param method   reference or null
+     * @param interval confidence interval or null
+     * @param summary  shown in the dossier's summary
+     */
+    public record QuantityDraft(String name, String label, String formula, List<StepInput> inputs, double value,
+                                String unit, String method, Interval interval, boolean summary) {
+        public static QuantityDraft of(String name, String label, String formula, List<StepInput> inputs,
+                                       double value, String unit) {
+            return new QuantityDraft(name, label, formula, inputs, value, unit, null, null, false);
+        }
+
+        public QuantityDraft withInterval(Interval ci) {
+            return new QuantityDraft(name, label, formula, inputs, value, unit, method, ci, summary);
+        }
+
+        public QuantityDraft inSummary() {
+            return new QuantityDraft(name, label, formula, inputs, value, unit, method, interval, true);
+        }
+
+        public QuantityDraft withMethod(String reference) {
+            return new QuantityDraft(name, label, formula, inputs, value, unit, reference, interval, summary);
+        }
+    }
+}

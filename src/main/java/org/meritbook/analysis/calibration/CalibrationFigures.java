@@ -1,0 +1,149 @@
+package org.meritbook.analysis.calibration;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.meritbook.analysis.SectionBuilder;
+import org.meritbook.figures.FigureSpec;
+import org.meritbook.figures.FigureSpec.Series;
+import org.meritbook.figures.FigureSpec.Style;
+import org.meritbook.stats.LineFit;
+
+/**
+ * The calibration figures as data: fit with 95 % confidence and prediction bands, standardized
+ * residuals, and back-calculated % deviation with the tolerance band. Curves are evaluated here so
+ * that the figure renderer never fits anything.
+ */
+final class CalibrationFigures {
+    /** Points along the fitted curve and bands. */
+    private static final int GRID = 60;
+    /**
+     * Deviation band drawn until acceptance profiles set it: ±15 % is the usual limit for
+     * calibration standards (ICH M10 bioanalytical method validation, §3.2.5, from memory);
+     * a default to confirm locally.
+     */
+    static final double DEVIATION_BAND_PERCENT = 15.0;
+
+    private CalibrationFigures() {
+    }
+
+    static void addTo(SectionBuilder section, String id, CalibrationData data, LineFit fit) {
+        String xTitle = titled(data.xColumn().name(), data.xUnit());
+        String yTitle = titled(data.yColumn().name(), data.yUnit());
+        section.figure(fitFigure(id, data, fit, xTitle, yTitle));
+        section.figure(residualFigure(id, data, fit, xTitle));
+        section.figure(deviationFigure(id, data, fit, xTitle));
+    }
+
+    private static FigureSpec fitFigure(String id, CalibrationData data, LineFit fit, String xTitle, String yTitle) {
+        double[] grid = grid(data);
+        int m = grid.length;
+        double[] line = new double[m];
+        double[] cLow = new double[m];
+        double[] cHigh = new double[m];
+        double[] pLow = new double[m];
+        double[] pHigh = new double[m];
+        for (int i = 0; i < m; i++) {
+            line[i] = fit.predict(grid[i]);
+            double c = fit.confidenceHalfWidth(grid[i], CalibrationAnalysis.LEVEL);
+            double p = fit.predictionHalfWidth(grid[i], CalibrationAnalysis.LEVEL);
+            cLow[i] = line[i] - c;
+            cHigh[i] = line[i] + c;
+            pLow[i] = line[i] - p;
+            pHigh[i] = line[i] + p;
+        }
+        List<Series> series = new ArrayList<>();
+        series.add(new Series("Standards", Style.POINTS, data.usedX(), data.usedY()));
+        addExcluded(series, data, false, fit);
+        series.add(new Series("Fitted line", Style.LINE, grid, line));
+        series.add(new Series("95 % confidence band", Style.DASHED, grid, cLow));
+        series.add(new Series("95 % confidence band (upper)", Style.DASHED, grid, cHigh));
+        series.add(new Series("95 % prediction band", Style.DOTTED, grid, pLow));
+        series.add(new Series("95 % prediction band (upper)", Style.DOTTED, grid, pHigh));
+        return new FigureSpec(id + ".fit", "Calibration: standards, fitted line and 95 % bands", xTitle, yTitle,
+                series);
+    }
+
+    private static FigureSpec residualFigure(String id, CalibrationData data, LineFit fit, String xTitle) {
+        double[] x = data.usedX();
+        double[] span = {min(x), max(x)};
+        List<Series> series = new ArrayList<>();
+        series.add(new Series("Standardized residuals", Style.POINTS, x, fit.standardizedResiduals()));
+        series.add(new Series("Zero", Style.REFERENCE, span, new double[] {0, 0}));
+        series.add(new Series("±" + (int) CalibrationAnalysis.RESIDUAL_FLAG + " (flag)", Style.DOTTED, span,
+                new double[] {CalibrationAnalysis.RESIDUAL_FLAG, CalibrationAnalysis.RESIDUAL_FLAG}));
+        series.add(new Series("−" + (int) CalibrationAnalysis.RESIDUAL_FLAG, Style.DOTTED, span,
+                new double[] {-CalibrationAnalysis.RESIDUAL_FLAG, -CalibrationAnalysis.RESIDUAL_FLAG}));
+        return new FigureSpec(id + ".residuals", "Standardized residuals against concentration", xTitle,
+                "Standardized residual e·√w / s(y/x)", series);
+    }
+
+    private static FigureSpec deviationFigure(String id, CalibrationData data, LineFit fit, String xTitle) {
+        List<Double> xs = new ArrayList<>();
+        List<Double> ds = new ArrayList<>();
+        for (CalibrationPoint p : data.used()) {
+            if (p.x() != 0) {
+                xs.add(p.x());
+                ds.add((fit.inverse(p.y()) - p.x()) / p.x() * 100.0);
+            }
+        }
+        double[] x = xs.stream().mapToDouble(Double::doubleValue).toArray();
+        double[] span = {min(data.usedX()), max(data.usedX())};
+        double band = DEVIATION_BAND_PERCENT;
+        List<Series> series = new ArrayList<>();
+        series.add(new Series("Deviation of back-calculated standards", Style.POINTS, x,
+                ds.stream().mapToDouble(Double::doubleValue).toArray()));
+        addExcluded(series, data, true, fit);
+        series.add(new Series("Zero", Style.REFERENCE, span, new double[] {0, 0}));
+        series.add(new Series("±" + (int) band + " % band", Style.DOTTED, span, new double[] {band, band}));
+        series.add(new Series("−" + (int) band + " %", Style.DOTTED, span, new double[] {-band, -band}));
+        return new FigureSpec(id + ".deviation", "Back-calculated concentration: % deviation from nominal", xTitle,
+                "Deviation (%)", series);
+    }
+
+    private static void addExcluded(List<Series> series, CalibrationData data, boolean asDeviation, LineFit fit) {
+        List<double[]> pts = new ArrayList<>();
+        for (CalibrationPoint p : data.points()) {
+            if (!p.used() && Double.isFinite(p.x()) && Double.isFinite(p.y()) && (!asDeviation || p.x() != 0)) {
+                pts.add(new double[] {p.x(), asDeviation ? (fit.inverse(p.y()) - p.x()) / p.x() * 100.0 : p.y()});
+            }
+        }
+        if (!pts.isEmpty()) {
+            series.add(new Series("Excluded (see reasons)", Style.EXCLUDED_POINTS,
+                    pts.stream().mapToDouble(a -> a[0]).toArray(), pts.stream().mapToDouble(a -> a[1]).toArray()));
+        }
+    }
+
+    /**
+     * Evenly spaced concentrations over the calibrated span only: bands are not drawn where the
+     * calibration says nothing (and a 1/y weight is undefined where the line goes negative).
+     */
+    private static double[] grid(CalibrationData data) {
+        double lo = min(data.usedX());
+        double hi = max(data.usedX());
+        double[] g = new double[GRID];
+        for (int i = 0; i < GRID; i++) {
+            g[i] = lo + (hi - lo) * i / (GRID - 1);
+        }
+        return g;
+    }
+
+    private static String titled(String name, String unit) {
+        return unit == null ? name : name + " (" + unit + ")";
+    }
+
+    private static double min(double[] v) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double d : v) {
+            m = Math.min(m, d);
+        }
+        return m;
+    }
+
+    private static double max(double[] v) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (double d : v) {
+            m = Math.max(m, d);
+        }
+        return m;
+    }
+}

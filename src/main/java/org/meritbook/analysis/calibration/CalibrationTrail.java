@@ -1,0 +1,161 @@
+package org.meritbook.analysis.calibration;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.meritbook.analysis.SectionBuilder;
+import org.meritbook.analysis.SectionBuilder.QuantityDraft;
+import org.meritbook.stats.LineFit;
+import org.meritbook.stats.LineModel;
+import org.meritbook.stats.Weighting;
+import org.meritbook.trail.StepInput;
+
+/**
+ * Records a straight-line calibration as named quantities, each with the formula and the inputs it
+ * came from (raw inputs with their cell addresses, derived ones by step id).
+ */
+final class CalibrationTrail {
+    private static final String LS_REFERENCE =
+            "weighted least squares; Draper & Smith, Applied Regression Analysis, ch. 1 and 9";
+
+    private final SectionBuilder section;
+    private final CalibrationData data;
+    private final LineFit fit;
+    private final boolean origin;
+    private final String xUnit;
+    private final String yUnit;
+
+    CalibrationTrail(SectionBuilder section, CalibrationData data, LineFit fit) {
+        this.section = section;
+        this.data = data;
+        this.fit = fit;
+        this.origin = fit.model() == LineModel.THROUGH_ORIGIN;
+        this.xUnit = data.xUnit();
+        this.yUnit = data.yUnit();
+    }
+
+    void record() {
+        String points = recordPoints();
+        String t = section.step("t", "Student t quantile, two-sided 95 %", "t = t(0.975; df), df = n − "
+                        + (origin ? "1" : "2"),
+                List.of(StepInput.number("df", fit.degreesOfFreedom(), null, points)), fit.tQuantile(
+                        CalibrationAnalysis.LEVEL), null, "Student t distribution (Apache Commons Math)");
+        String xMean = origin ? null : section.step("x_mean_w", "Weighted mean concentration",
+                "x̄w = Σwᵢxᵢ / Σwᵢ", List.of(from("x, w", points)), fit.weightedMeanX(), xUnit, null);
+        String yMean = origin ? null : section.step("y_mean_w", "Weighted mean response",
+                "ȳw = Σwᵢyᵢ / Σwᵢ", List.of(from("y, w", points)), fit.weightedMeanY(), yUnit, null);
+        String sxx = section.step("sxx", "Weighted sum of squares of concentration",
+                origin ? "Sxx = Σwᵢxᵢ²" : "Sxx = Σwᵢ(xᵢ − x̄w)²",
+                origin ? List.of(from("x, w", points)) : List.of(from("x, w", points), section.ref("x̄w", xMean)),
+                fit.sxx(), squared(xUnit), null);
+        String slopeUnit = ratioUnit(yUnit, xUnit);
+        String slope = section.quantity(QuantityDraft.of("slope", "Slope (sensitivity)",
+                        origin ? "b = Σwᵢxᵢyᵢ / Σwᵢxᵢ²" : "b = Σwᵢ(xᵢ − x̄w)(yᵢ − ȳw) / Sxx",
+                        origin ? List.of(from("x, y, w", points), section.ref("Sxx", sxx))
+                                : List.of(from("x, y, w", points), section.ref("x̄w", xMean), section.ref("ȳw", yMean),
+                                section.ref("Sxx", sxx)),
+                        fit.slope(), slopeUnit)
+                .withInterval(fit.slopeInterval(CalibrationAnalysis.LEVEL)).withMethod(LS_REFERENCE).inSummary());
+        String intercept = null;
+        if (!origin) {
+            intercept = section.quantity(QuantityDraft.of("intercept", "Intercept", "a = ȳw − b·x̄w",
+                            List.of(section.ref("ȳw", yMean), section.ref("b", slope), section.ref("x̄w", xMean)), fit.intercept(), yUnit)
+                    .withInterval(fit.interceptInterval(CalibrationAnalysis.LEVEL)).withMethod(LS_REFERENCE));
+        }
+        String s = section.quantity(QuantityDraft.of("residual_sd", "Residual standard deviation s(y/x)",
+                origin ? "s(y/x) = √(Σwᵢ(yᵢ − b·xᵢ)² / (n − 1))" : "s(y/x) = √(Σwᵢ(yᵢ − a − b·xᵢ)² / (n − 2))",
+                origin ? List.of(from("x, y, w", points), section.ref("b", slope))
+                        : List.of(from("x, y, w", points), section.ref("a", intercept), section.ref("b", slope)),
+                fit.residualSd(), yUnit).inSummary());
+        String slopeSe = section.quantity(QuantityDraft.of("slope_se", "Standard error of the slope",
+                "s(b) = s(y/x) / √Sxx", List.of(section.ref("s(y/x)", s), section.ref("Sxx", sxx)), fit.slopeSe(),
+                slopeUnit));
+        section.step("slope_ci_half_width", "Half-width of the 95 % confidence interval of the slope",
+                "Δb = t · s(b); interval b ± Δb", List.of(section.ref("t", t), section.ref("s(b)", slopeSe)),
+                fit.tQuantile(CalibrationAnalysis.LEVEL) * fit.slopeSe(), slopeUnit, null);
+        if (!origin) {
+            String interceptSe = section.quantity(QuantityDraft.of("intercept_se",
+                    "Standard error of the intercept", "s(a) = s(y/x) · √(1/Σwᵢ + x̄w² / Sxx)",
+                    List.of(section.ref("s(y/x)", s), section.ref("x̄w", xMean), section.ref("Sxx", sxx),
+                            from("w", points)),
+                    fit.interceptSe(), yUnit));
+            section.step("intercept_ci_half_width", "Half-width of the 95 % confidence interval of the intercept",
+                    "Δa = t · s(a); interval a ± Δa", List.of(section.ref("t", t), section.ref("s(a)", interceptSe)),
+                    fit.tQuantile(CalibrationAnalysis.LEVEL) * fit.interceptSe(), yUnit, null);
+            section.quantity(QuantityDraft.of("r", "Correlation coefficient r",
+                    "r = Σwᵢ(xᵢ − x̄w)(yᵢ − ȳw) / √(Sxx · Σwᵢ(yᵢ − ȳw)²)",
+                    List.of(from("x, y, w", points), section.ref("Sxx", sxx)), fit.r(), null));
+        }
+        section.quantity(QuantityDraft.of("r_squared",
+                origin ? "Coefficient of determination r² (uncentred, through origin)" : "Coefficient of determination r²",
+                origin ? "r² = Σwᵢŷᵢ² / Σwᵢyᵢ²" : "r² = r·r",
+                List.of(from("x, y, w", points), section.ref("b", slope)), fit.rSquared(), null).inSummary());
+        recordBackCalculation(intercept, slope);
+    }
+
+    /** One step listing every point used, with cell addresses, and every point left out with its reason. */
+    private String recordPoints() {
+        List<StepInput> inputs = new ArrayList<>();
+        Weighting w = fit.weighting();
+        double[] weights = fit.weights();
+        int k = 0;
+        for (CalibrationPoint p : data.points()) {
+            if (p.used()) {
+                k++;
+                inputs.add(StepInput.number("x" + k, p.x(), xUnit, p.xCell().ref().address()));
+                inputs.add(StepInput.number("y" + k, p.y(), yUnit, p.yCell().ref().address()));
+                if (w != Weighting.NONE) {
+                    inputs.add(StepInput.number("w" + k, weights[k - 1], null,
+                            w.notation() + ", normalised to mean 1"));
+                }
+            } else {
+                inputs.add(StepInput.text("excluded " + p.yCell().ref().address(), p.exclusionReason(),
+                        "notebook exclude"));
+            }
+        }
+        return section.quantity(QuantityDraft.of("n", "Number of calibration points in the fit",
+                "n = points in the range not excluded", inputs, fit.n(), null));
+    }
+
+    private void recordBackCalculation(String intercept, String slope) {
+        for (CalibrationPoint p : data.points()) {
+            if (!Double.isFinite(p.x()) || !Double.isFinite(p.y())) {
+                continue;
+            }
+            String yAddress = p.yCell().ref().address();
+            List<StepInput> in = new ArrayList<>();
+            in.add(StepInput.number("y", p.y(), yUnit, yAddress));
+            if (intercept != null) {
+                in.add(section.ref("a", intercept));
+            }
+            in.add(section.ref("b", slope));
+            double back = fit.inverse(p.y());
+            String backId = section.quantity(QuantityDraft.of("back_calculated:" + p.label(),
+                    "Back-calculated concentration, " + yAddress + (p.used() ? "" : " (excluded)"),
+                    intercept != null ? "x̂ = (y − a) / b" : "x̂ = y / b", in, back, xUnit));
+            if (p.x() != 0) {
+                section.quantity(QuantityDraft.of("deviation_percent:" + p.label(),
+                        "Deviation from nominal, " + yAddress + (p.used() ? "" : " (excluded)"),
+                        "%dev = (x̂ − x) / x × 100",
+                        List.of(section.ref("x̂", backId), StepInput.number("x", p.x(), xUnit, p.xCell().ref().address())),
+                        (back - p.x()) / p.x() * 100.0, "%"));
+            }
+        }
+    }
+
+    /** A reference to the data set listed in a step (not a single number). */
+    private static StepInput from(String name, String stepId) {
+        return StepInput.text(name, "the points listed in " + stepId, stepId);
+    }
+
+    static String ratioUnit(String numerator, String denominator) {
+        if (numerator == null || denominator == null) {
+            return numerator == null && denominator == null ? null
+                    : (numerator == null ? "1/(" + denominator + ")" : numerator);
+        }
+        return numerator + " per " + denominator;
+    }
+
+    private static String squared(String unit) {
+        return unit == null ? null : "(" + unit + ")²";
+    }
+}

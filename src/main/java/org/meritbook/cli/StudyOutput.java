@@ -1,0 +1,58 @@
+package org.meritbook.cli;
+
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.List;
+import org.meritbook.analysis.SectionResult;
+import org.meritbook.criteria.Verdict;
+import org.meritbook.pipeline.AtomicFiles;
+import org.meritbook.pipeline.StudyResults;
+import org.meritbook.pipeline.StudyRunner;
+import org.meritbook.revision.InputFile;
+import org.meritbook.revision.ResultsJson;
+import org.meritbook.trail.TrailMarkdown;
+import org.meritbook.trail.TrailSection;
+
+/** Shared by {@code run} and {@code demo}: run a notebook and write its outputs into out/&lt;study&gt;/. */
+final class StudyOutput {
+    private StudyOutput() {
+    }
+
+    static int runAndWrite(Path notebook, Path outRoot, PrintWriter out) {
+        StudyResults results = StudyRunner.withBuiltInAnalyses().run(notebook);
+        String base = baseName(notebook);
+        Path folder = outRoot.resolve(base);
+        byte[] json = ResultsJson.toBytes(results);
+        AtomicFiles.write(folder.resolve("results.json"), json);
+        AtomicFiles.write(folder.resolve("trail.md"), trail(results).getBytes(StandardCharsets.UTF_8));
+        out.println("meritbook: " + results.study().frontMatter().title() + ", revision "
+                + results.study().frontMatter().revision());
+        for (SectionResult s : results.sections()) {
+            out.println("  " + s.id() + ": " + s.quantities().size() + " quantities, " + s.warnings().size()
+                    + " warning" + (s.warnings().size() == 1 ? "" : "s"));
+        }
+        out.println("  wrote " + folder.resolve("results.json"));
+        out.println("  wrote " + folder.resolve("trail.md"));
+        out.flush();
+        boolean failed = results.sections().stream().flatMap(s -> s.verdicts().stream())
+                .anyMatch(v -> v.outcome() == Verdict.Outcome.FAIL);
+        return failed ? Main.ACCEPTANCE_FAILED : Main.DONE;
+    }
+
+    static String baseName(Path notebook) {
+        String name = notebook.getFileName().toString();
+        return name.endsWith(".md") ? name.substring(0, name.length() - 3) : name;
+    }
+
+    static String trail(StudyResults results) {
+        List<String> preamble = new java.util.ArrayList<>();
+        preamble.add("Revision " + results.study().frontMatter().revision() + ".");
+        for (InputFile f : results.inputs()) {
+            preamble.add("Input `" + f.path() + "` (" + f.alias() + "): SHA-256 " + f.sha256());
+        }
+        List<TrailSection> sections = results.sections().stream()
+                .map(s -> new TrailSection(s.id(), s.title(), s.steps())).toList();
+        return TrailMarkdown.render(results.study().frontMatter().title(), preamble, sections);
+    }
+}

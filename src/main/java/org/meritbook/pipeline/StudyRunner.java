@@ -1,0 +1,113 @@
+package org.meritbook.pipeline;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.meritbook.analysis.Analysis;
+import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.DataAccess;
+import org.meritbook.analysis.SectionResult;
+import org.meritbook.analysis.calibration.CalibrationAnalysis;
+import org.meritbook.error.ErrorKey;
+import org.meritbook.error.InputException;
+import org.meritbook.revision.InputFile;
+import org.meritbook.revision.Sha256;
+import org.meritbook.study.AnalysisCell;
+import org.meritbook.study.AnalysisKind;
+import org.meritbook.study.SourceFile;
+import org.meritbook.study.Study;
+import org.meritbook.study.StudyParser;
+import org.meritbook.workbook.DataBlock;
+import org.meritbook.workbook.WorkbookReader;
+
+/**
+ * Runs a study notebook: parse, read the blocks each cell names, run the analyses in notebook
+ * order, and checksum the inputs. A plain function of the notebook and the workbooks it names.
+ */
+public final class StudyRunner {
+    private final Map<AnalysisKind, Analysis> analyses;
+
+    public StudyRunner(Map<AnalysisKind, Analysis> analyses) {
+        this.analyses = new EnumMap<>(analyses);
+    }
+
+    /** The analyses this version implements. */
+    public static StudyRunner withBuiltInAnalyses() {
+        return new StudyRunner(Map.of(AnalysisKind.CALIBRATION, new CalibrationAnalysis()));
+    }
+
+    public StudyResults run(Path notebook) {
+        return run(StudyParser.parse(notebook));
+    }
+
+    public StudyResults run(Study study) {
+        checkKindsAvailable(study);
+        Map<String, Set<String>> rangesBySource = new LinkedHashMap<>();
+        List<SectionResult> sections = new ArrayList<>();
+        try (WorkbookReader reader = new WorkbookReader()) {
+            DataAccess access = reference -> {
+                SourceFile source = study.sources().get(reference.source());
+                DataBlock block = reader.read(source.path(), reference);
+                rangesBySource.computeIfAbsent(source.alias(), k -> new LinkedHashSet<>())
+                        .add(block.sheet() + "!" + block.range());
+                return block;
+            };
+            AnalysisContext context = new AnalysisContext(study, access);
+            for (AnalysisCell cell : study.cells()) {
+                sections.add(analyses.get(cell.kind()).run(cell, context));
+            }
+        }
+        return new StudyResults(study, inputs(study, rangesBySource), sections, SoftwareInventory.components());
+    }
+
+    /** Fails before any work when a cell names a kind this version cannot run yet. */
+    private void checkKindsAvailable(Study study) {
+        List<String> available = analyses.keySet().stream().map(AnalysisKind::keyword).sorted().toList();
+        List<org.meritbook.error.Problem> problems = new ArrayList<>();
+        for (AnalysisCell cell : study.cells()) {
+            if (!analyses.containsKey(cell.kind())) {
+                problems.add(new org.meritbook.error.Problem(ErrorKey.UNKNOWN_KIND,
+                        study.file().getFileName() + " line " + cell.line(),
+                        "an analysis kind this version runs (" + String.join(", ", available) + ")",
+                        "'" + cell.kind().keyword() + "', which is planned but not available yet",
+                        "Keep the cell in a ```text block until a version that runs it."));
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new InputException(problems);
+        }
+    }
+
+    private static List<InputFile> inputs(Study study, Map<String, Set<String>> rangesBySource) {
+        List<InputFile> inputs = new ArrayList<>();
+        inputs.add(file("notebook", study.file().getFileName().toString(), study.file(), List.of()));
+        for (SourceFile source : study.sources().values()) {
+            if (!Files.isRegularFile(source.path())) {
+                throw new InputException(ErrorKey.FILE_NOT_FOUND,
+                        study.file().getFileName() + " line " + source.line(),
+                        "the workbook '" + source.written() + "' declared as source '" + source.alias() + "'",
+                        "no such file at " + source.path().toAbsolutePath().normalize(),
+                        "Correct the path under sources: (it is relative to the notebook's folder).");
+            }
+            inputs.add(file(source.alias(), source.written(), source.path(),
+                    List.copyOf(rangesBySource.getOrDefault(source.alias(), Set.of()))));
+        }
+        return inputs;
+    }
+
+    private static InputFile file(String alias, String written, Path path, List<String> ranges) {
+        try {
+            return new InputFile(alias, written, Sha256.of(path), Files.size(path), ranges);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
