@@ -22,8 +22,9 @@ import java.util.Objects;
  *
  * <p>Numerics: the weighted means are taken in two passes with a correction term (the mean of
  * the deviations from a first estimate is added back), and every sum is formed from centred
- * values, never as Σx² − n·x̄²; this keeps about 13 significant digits on NIST's Norris data,
- * where the textbook one-pass formulas lose many.
+ * values, never as Σx² − n·x̄², which cancels catastrophically when the data sit far from zero.
+ * Measured: at least 12.8 significant digits on every certified value of NIST's Norris data and
+ * 14.5 on NoInt1/NoInt2 (see the tests).
  */
 public final class LeastSquares {
 
