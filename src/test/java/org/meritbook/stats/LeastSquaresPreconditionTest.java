@@ -1,0 +1,116 @@
+package org.meritbook.stats;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * Data that cannot support a straight line are refused before any result exists (DESIGN.md,
+ * section 7: too few points, zero variance, a non-positive value under 1/x weighting).
+ */
+class LeastSquaresPreconditionTest {
+
+    private static final double[] X = {1, 2, 3, 4};
+    private static final double[] Y = {2.1, 3.9, 6.2, 7.8};
+
+    private static IllegalArgumentException refused(double[] x, double[] y, Weighting w, LineModel model) {
+        return assertThrows(IllegalArgumentException.class, () -> LeastSquares.fitLine(x, y, w, model));
+    }
+
+    @Test
+    void tooFewPoints() {
+        refused(new double[] {1, 2}, new double[] {1, 2}, Weighting.NONE, LineModel.WITH_INTERCEPT);
+        refused(new double[] {1}, new double[] {1}, Weighting.NONE, LineModel.THROUGH_ORIGIN);
+        // Two points are enough through the origin (one residual degree of freedom).
+        LineFit two = LeastSquares.fitLine(new double[] {1, 2}, new double[] {1.1, 1.9}, Weighting.NONE, LineModel.THROUGH_ORIGIN);
+        assertEquals(1, two.degreesOfFreedom());
+    }
+
+    @Test
+    void lengthsDiffer() {
+        refused(X, new double[] {1, 2, 3}, Weighting.NONE, LineModel.WITH_INTERCEPT);
+    }
+
+    @Test
+    void notFinite() {
+        refused(new double[] {1, 2, Double.NaN, 4}, Y, Weighting.NONE, LineModel.WITH_INTERCEPT);
+        refused(X, new double[] {1, Double.POSITIVE_INFINITY, 3, 4}, Weighting.NONE, LineModel.WITH_INTERCEPT);
+        refused(X, new double[] {1, 2, 3, Double.NaN}, Weighting.INVERSE_X, LineModel.THROUGH_ORIGIN);
+    }
+
+    @Test
+    void zeroVarianceInX() {
+        IllegalArgumentException e = refused(new double[] {2, 2, 2}, new double[] {1, 2, 3}, Weighting.INVERSE_Y,
+                LineModel.WITH_INTERCEPT);
+        assertTrue(e.getMessage().contains("x"), e.getMessage());
+        refused(new double[] {0, 0, 0}, new double[] {1, 2, 3}, Weighting.NONE, LineModel.THROUGH_ORIGIN);
+    }
+
+    @Test
+    void constantResponse() {
+        refused(X, new double[] {5, 5, 5, 5}, Weighting.NONE, LineModel.WITH_INTERCEPT);
+        refused(X, new double[] {0, 0, 0, 0}, Weighting.NONE, LineModel.THROUGH_ORIGIN);
+    }
+
+    @Test
+    void nonPositiveBasisUnderWeighting() {
+        IllegalArgumentException e = refused(new double[] {0, 1, 2, 3}, Y, Weighting.INVERSE_X, LineModel.WITH_INTERCEPT);
+        assertTrue(e.getMessage().contains("point 0"), e.getMessage());
+        refused(X, new double[] {2, -1, 3, 4}, Weighting.INVERSE_Y2, LineModel.WITH_INTERCEPT);
+        // The same data are fine unweighted.
+        LeastSquares.fitLine(new double[] {0, 1, 2, 3}, Y, Weighting.NONE, LineModel.WITH_INTERCEPT);
+    }
+
+    @Test
+    void nullArguments() {
+        assertThrows(NullPointerException.class, () -> LeastSquares.fitLine(null, Y, Weighting.NONE, LineModel.WITH_INTERCEPT));
+        assertThrows(NullPointerException.class, () -> LeastSquares.fitLine(X, Y, null, LineModel.WITH_INTERCEPT));
+    }
+
+    @Test
+    void levelOutsideTheUnitInterval() {
+        LineFit fit = LeastSquares.fitLine(X, Y, Weighting.NONE, LineModel.WITH_INTERCEPT);
+        assertThrows(IllegalArgumentException.class, () -> fit.tQuantile(1));
+        assertThrows(IllegalArgumentException.class, () -> fit.slopeInterval(0));
+        assertThrows(IllegalArgumentException.class, () -> fit.confidenceHalfWidth(2, Double.NaN));
+    }
+
+    @Test
+    void noWeightOutsideTheBasisDomain() {
+        LineFit fit = LeastSquares.fitLine(X, Y, Weighting.INVERSE_X, LineModel.WITH_INTERCEPT);
+        assertThrows(IllegalArgumentException.class, () -> fit.weightAt(0));
+        assertThrows(IllegalArgumentException.class, () -> fit.predictionHalfWidth(-1, 0.95));
+    }
+
+    @Test
+    void zeroSlopeCannotBeInverted() {
+        // x symmetric about its mean with a symmetric response: Sxy = 0 exactly.
+        LineFit flat = LeastSquares.fitLine(new double[] {1, 2, 3}, new double[] {1, 2, 1}, Weighting.NONE,
+                LineModel.WITH_INTERCEPT);
+        assertEquals(0, flat.slope());
+        assertThrows(IllegalStateException.class, () -> flat.inverse(1.5));
+    }
+
+    @Test
+    void recordRejectsInconsistentValues() {
+        LineFit ok = LeastSquares.fitLine(X, Y, Weighting.NONE, LineModel.WITH_INTERCEPT);
+        double[] w = {1, 1, 1, 1.5}; // does not average 1
+        assertThrows(IllegalArgumentException.class, () -> new LineFit(ok.model(), ok.weighting(), ok.n(),
+                ok.degreesOfFreedom(), ok.x(), ok.y(), w, ok.slope(), ok.intercept(), ok.slopeSe(),
+                ok.interceptSe(), ok.slopeInterceptCovariance(), ok.r(), ok.rSquared(), ok.adjustedRSquared(),
+                ok.residualSd(), ok.weightedMeanX(), ok.weightedMeanY(), ok.sxx(), ok.ssRegression(),
+                ok.ssResidual(), ok.fitted(), ok.residuals(), ok.standardizedResiduals()));
+        assertThrows(IllegalArgumentException.class, () -> new LineFit(ok.model(), ok.weighting(), ok.n(),
+                ok.degreesOfFreedom() + 1, ok.x(), ok.y(), ok.weights(), ok.slope(), ok.intercept(), ok.slopeSe(),
+                ok.interceptSe(), ok.slopeInterceptCovariance(), ok.r(), ok.rSquared(), ok.adjustedRSquared(),
+                ok.residualSd(), ok.weightedMeanX(), ok.weightedMeanY(), ok.sxx(), ok.ssRegression(),
+                ok.ssResidual(), ok.fitted(), ok.residuals(), ok.standardizedResiduals()));
+        assertThrows(IllegalArgumentException.class, () -> new LineFit(ok.model(), ok.weighting(), ok.n(),
+                ok.degreesOfFreedom(), ok.x(), ok.y(), ok.weights(), Double.NaN, ok.intercept(), ok.slopeSe(),
+                ok.interceptSe(), ok.slopeInterceptCovariance(), ok.r(), ok.rSquared(), ok.adjustedRSquared(),
+                ok.residualSd(), ok.weightedMeanX(), ok.weightedMeanY(), ok.sxx(), ok.ssRegression(),
+                ok.ssResidual(), ok.fitted(), ok.residuals(), ok.standardizedResiduals()));
+    }
+}

@@ -1,0 +1,80 @@
+package org.meritbook.stats;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * Ordinary least squares against NIST StRD certified values (linear regression category,
+ * https://www.itl.nist.gov/div898/strd/). Every figure must agree on at least 9 significant
+ * digits (log relative error ≥ 9).
+ */
+class NistStrdTest {
+
+    private static final double MIN_LRE = 9;
+
+    // Source: NIST StRD Norris.dat (lower difficulty, y = B0 + B1·x, 36 observations), certified values.
+    @Test
+    void norrisWithIntercept() {
+        NistLinearDataset nist = NistLinearDataset.load("Norris");
+        LineFit fit = LeastSquares.fitLine(nist.x(), nist.y(), Weighting.NONE, LineModel.WITH_INTERCEPT);
+
+        assertDigits("B0", fit.intercept(), nist.estimate("B0"));
+        assertDigits("B1", fit.slope(), nist.estimate("B1"));
+        assertDigits("sd(B0)", fit.interceptSe(), nist.standardDeviation("B0"));
+        assertDigits("sd(B1)", fit.slopeSe(), nist.standardDeviation("B1"));
+        assertCommon(nist, fit);
+    }
+
+    // Source: NIST StRD NoInt1.dat (average difficulty, y = B1·x, 11 observations), certified values;
+    // NIST certifies the uncentred R² for the no-intercept model.
+    @Test
+    void noInt1ThroughOrigin() {
+        assertThroughOrigin(NistLinearDataset.load("NoInt1"));
+    }
+
+    // Source: NIST StRD NoInt2.dat (average difficulty, y = B1·x, 3 observations), certified values.
+    @Test
+    void noInt2ThroughOrigin() {
+        assertThroughOrigin(NistLinearDataset.load("NoInt2"));
+    }
+
+    // Source: NIST StRD Norris.dat and NoInt2.dat, the data lines as printed in the files.
+    @Test
+    void parserReadsTheStatedDataLinesInTheNamedColumnOrder() {
+        NistLinearDataset norris = NistLinearDataset.load("Norris");
+        assertEquals(36, norris.x().length);
+        assertEquals(0.2, norris.x()[0]);
+        assertEquals(0.1, norris.y()[0]);
+        assertEquals(337.4, norris.x()[1]);
+        assertEquals(338.8, norris.y()[1]);
+        NistLinearDataset noInt2 = NistLinearDataset.load("NoInt2");
+        assertEquals(3, noInt2.x().length);
+        assertEquals(6, noInt2.x()[2]);
+        assertEquals(4, noInt2.y()[2]);
+        assertEquals(2, noInt2.residualDf());
+    }
+
+    private static void assertThroughOrigin(NistLinearDataset nist) {
+        LineFit fit = LeastSquares.fitLine(nist.x(), nist.y(), Weighting.NONE, LineModel.THROUGH_ORIGIN);
+        assertDigits("B1", fit.slope(), nist.estimate("B1"));
+        assertDigits("sd(B1)", fit.slopeSe(), nist.standardDeviation("B1"));
+        assertEquals(0, fit.intercept());
+        assertCommon(nist, fit);
+    }
+
+    private static void assertCommon(NistLinearDataset nist, LineFit fit) {
+        assertEquals(nist.residualDf(), fit.degreesOfFreedom(), "residual degrees of freedom");
+        assertDigits("residual SD", fit.residualSd(), nist.residualSd());
+        assertDigits("R-squared", fit.rSquared(), nist.rSquared());
+        assertDigits("regression SS", fit.ssRegression(), nist.ssRegression());
+        assertDigits("residual SS", fit.ssResidual(), nist.ssResidual());
+    }
+
+    private static void assertDigits(String what, double computed, double certified) {
+        double lre = Lre.of(computed, certified);
+        assertTrue(lre >= MIN_LRE, () -> what + ": computed " + computed + ", certified " + certified
+                + ", only " + String.format(java.util.Locale.ROOT, "%.1f", lre) + " digits agree");
+    }
+}
