@@ -33,7 +33,9 @@ final class CellIds {
             OptionValue explicit = d.options().options().get(OptionRules.ID);
             String id = explicit != null ? explicit.text() : n == 1 ? d.kind().keyword() : d.kind().keyword() + "-" + n;
             int idLine = explicit != null ? explicit.line() : d.line();
-            Integer first = firstLine.putIfAbsent(id, idLine);
+            // A rejected id is already reported; its stand-in must not add a duplicate of its own.
+            boolean badId = d.options().rejected().contains(OptionRules.ID);
+            Integer first = badId ? null : firstLine.putIfAbsent(id, idLine);
             if (first != null) {
                 problems.add(ErrorKey.DUPLICATE_ID, idLine, "a cell id used once",
                         Problems.quote(id) + " at line " + first + " and again at line " + idLine,

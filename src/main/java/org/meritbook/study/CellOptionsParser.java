@@ -11,7 +11,6 @@ import java.util.stream.Stream;
 import org.meritbook.error.ErrorKey;
 import org.yaml.snakeyaml.nodes.MappingNode;
 import org.yaml.snakeyaml.nodes.Node;
-import org.yaml.snakeyaml.nodes.ScalarNode;
 
 /**
  * Reads the YAML body of one analysis cell and checks it against its kind: option names, required
@@ -21,7 +20,7 @@ import org.yaml.snakeyaml.nodes.ScalarNode;
 final class CellOptionsParser {
 
     /** The options of one cell as read; unusable options are reported and left out. */
-    record Result(Map<String, OptionValue> options, List<Exclusion> exclusions) {
+    record Result(Map<String, OptionValue> options, List<Exclusion> exclusions, Set<String> rejected) {
     }
 
     private final Map<String, SourceFile> sources;
@@ -41,13 +40,13 @@ final class CellOptionsParser {
         YamlSnippet yaml = new YamlSnippet(bodyLine, ErrorKey.NOTEBOOK_SYNTAX, problems);
         Optional<Node> root = body.isBlank() ? Optional.empty() : yaml.compose(body);
         if (root.isEmpty() && !body.isBlank()) {
-            return new Result(Map.of(), List.of()); // syntax error reported; missing options would only add noise
+            return new Result(Map.of(), List.of(), Set.of()); // syntax error reported; missing options would only add noise
         }
         if (root.isPresent() && !(root.get() instanceof MappingNode)) {
             problems.add(ErrorKey.NOTEBOOK_SYNTAX, yaml.lineOf(root.get()), "options as 'name: value' lines",
-                    root.get() instanceof ScalarNode s ? Problems.quote(s.getValue()) : "a list",
+                    YamlSnippet.describe(root.get()),
                     "Write one option per line, e.g. 'data: runs!Calibration!A4:C25'.");
-            return new Result(Map.of(), List.of());
+            return new Result(Map.of(), List.of(), Set.of());
         }
         Map<String, OptionValue> options = new LinkedHashMap<>();
         root.ifPresent(r -> yaml.entries((MappingNode) r).values()
@@ -56,6 +55,7 @@ final class CellOptionsParser {
         List<String> allowed = Stream.concat(kind.requiredOptions().stream(), kind.optionalOptions().stream()).toList();
         Map<String, OptionValue> kept = new LinkedHashMap<>();
         List<Exclusion> exclusions = new ArrayList<>();
+        Set<String> rejected = new HashSet<>();
         for (Map.Entry<String, OptionValue> option : options.entrySet()) {
             String name = option.getKey();
             OptionValue value = option.getValue();
@@ -68,6 +68,7 @@ final class CellOptionsParser {
             if (name.equals(OptionRules.EXCLUDE)) {
                 exclusions.addAll(new ExclusionParser(problems).parse(value));
             } else if (!checkValue(name, value)) {
+                rejected.add(name);
                 continue;
             }
             kept.put(name, value);
@@ -79,7 +80,7 @@ final class CellOptionsParser {
                     "no " + Problems.list(missing),
                     "Add " + Problems.list(missing.stream().map(m -> "'" + m + ": ...'").toList()) + " to the cell.");
         }
-        return new Result(kept, exclusions);
+        return new Result(kept, exclusions, Set.copyOf(rejected));
     }
 
     /** Checks one option value by its name; false when it was reported. */
@@ -97,7 +98,7 @@ final class CellOptionsParser {
 
     private boolean checkScalar(String name, OptionValue value, List<String> choices, List<String> shown) {
         if (!value.isScalar()) {
-            problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "a single value for '" + name + "'", "a list or a map",
+            problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "a single value for '" + name + "'", Problems.describe(value),
                     "Write '" + name + ": <value>' on one line.");
             return false;
         }
@@ -128,7 +129,7 @@ final class CellOptionsParser {
         List<String> choices = OptionRules.METHOD_CHOICES;
         if (!(value.value() instanceof List) || value.list().isEmpty()) {
             problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "a list of methods from " + Problems.list(choices),
-                    value.isScalar() ? Problems.quote(value.text()) : value.value() instanceof List ? "an empty list" : "a map",
+                    value.value() instanceof List ? "an empty list" : Problems.describe(value),
                     "Write the methods as a list, e.g. 'methods: [blank, response-sd]'.");
             return false;
         }
@@ -138,7 +139,7 @@ final class CellOptionsParser {
             String text = item.isScalar() ? item.text() : null;
             if (text == null || !choices.contains(text)) {
                 problems.add(ErrorKey.BAD_OPTION_VALUE, item.line(), "a detection-limit method, one of " + Problems.list(choices),
-                        text == null ? "a list or a map" : Problems.quote(text),
+                        Problems.describe(item),
                         "Choose methods from the list" + (text == null ? "" : Suggestion.hint(text, choices)) + ".");
                 ok = false;
             } else if (!seen.add(text)) {
@@ -154,7 +155,7 @@ final class CellOptionsParser {
         if (!(value.value() instanceof Map)) {
             problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(),
                     "'" + name + ":' followed by indented " + Problems.list(set.required()) + " lines",
-                    value.isScalar() ? Problems.quote(value.text()) : "a list",
+                    Problems.describe(value),
                     "Indent 'data: source!Sheet!A1:B9' and 'column: <header>' under '" + name + ":'.");
             return false;
         }

@@ -19,7 +19,7 @@ public final class DataReferences {
         String where = "notebook line " + value.line();
         if (!value.isScalar()) {
             throw new InputException(ErrorKey.BAD_DATA_REFERENCE, where, DataReferenceParser.ACCEPTED,
-                    "a list or a map", "Write the reference on one line after 'data:'.");
+                    Problems.describe(value), "Write the reference on one line after 'data:'.");
         }
         DataReferenceParser.Parsed parsed = DataReferenceParser.parse(value.text(), value.line());
         if (!parsed.ok()) {

@@ -31,8 +31,7 @@ final class ExclusionParser {
             return out; // "exclude:" with nothing under it excludes nothing
         }
         if (!(exclude.value() instanceof List)) {
-            problems.add(ErrorKey.BAD_OPTION_VALUE, exclude.line(), SHAPE, exclude.isScalar()
-                    ? Problems.quote(exclude.text()) : "a map", "Write one '- cell: ...' entry per excluded cell, each with 'reason: ...'.");
+            problems.add(ErrorKey.BAD_OPTION_VALUE, exclude.line(), SHAPE, Problems.describe(exclude), "Write one '- cell: ...' entry per excluded cell, each with 'reason: ...'.");
             return out;
         }
         Map<String, Integer> seen = new HashMap<>();
@@ -55,7 +54,7 @@ final class ExclusionParser {
     private Exclusion entry(OptionValue entry) {
         if (!(entry.value() instanceof Map)) {
             problems.add(ErrorKey.BAD_OPTION_VALUE, entry.line(), SHAPE,
-                    entry.isScalar() ? Problems.quote(entry.text()) : "a list",
+                    Problems.describe(entry),
                     "Write the entry as 'cell: Sheet!C17' and, indented below it, 'reason: ...'.");
             return null;
         }
@@ -89,7 +88,7 @@ final class ExclusionParser {
                 || !DataReferenceParser.row(m.group(4))) {
             problems.add(ErrorKey.BAD_OPTION_VALUE, cell.line(),
                     "one cell as Sheet!A1 (a sheet name with spaces in quotes: \"'Day 1'!C5\")",
-                    written == null ? "a list or a map" : Problems.quote(written),
+                    Problems.describe(cell),
                     "Write the sheet, '!', then the cell, e.g. Calibration!C17; quote the whole value when the sheet name is quoted.");
             return null;
         }
@@ -100,7 +99,7 @@ final class ExclusionParser {
     private String reason(OptionValue reason, int entryLine) {
         if (reason == null || !reason.isScalar() || reason.text().isBlank()) {
             problems.add(ErrorKey.BAD_OPTION_VALUE, reason == null ? entryLine : reason.line(),
-                    "a reason for the exclusion", reason == null ? "no reason" : reason.isScalar() ? "an empty reason" : "a list or a map",
+                    "a reason for the exclusion", reason == null ? "no reason" : reason.isScalar() ? "an empty reason" : Problems.describe(reason),
                     "Say why the point is left out, e.g. 'reason: Injection failure recorded in run log'.");
             return null;
         }

@@ -62,9 +62,13 @@ final class FrontMatterParser {
             return new Result(null, Map.of(), text.lineCount() + 1);
         }
         YamlSnippet yaml = new YamlSnippet(2, ErrorKey.FRONT_MATTER, problems);
-        Optional<Node> root = close == 2 ? Optional.empty() : yaml.compose(text.joined(2, close - 1));
+        boolean blank = close == 2 || text.joined(2, close - 1).isBlank();
+        Optional<Node> root = blank ? Optional.empty() : yaml.compose(text.joined(2, close - 1));
+        if (root.isEmpty() && !blank) {
+            return new Result(null, Map.of(), close + 1); // syntax error reported; a "missing title" would be noise
+        }
         if (root.isPresent() && !(root.get() instanceof MappingNode)) {
-            problems.add(ErrorKey.FRONT_MATTER, yaml.lineOf(root.get()), "'key: value' lines", "a single value or a list",
+            problems.add(ErrorKey.FRONT_MATTER, yaml.lineOf(root.get()), "'key: value' lines", YamlSnippet.describe(root.get()),
                     "Write the front matter as 'title: ...', 'method: ...' lines.");
             return new Result(null, Map.of(), close + 1);
         }
@@ -94,7 +98,7 @@ final class FrontMatterParser {
             return null;
         }
         if (!(e.value() instanceof ScalarNode s)) {
-            problems.add(ErrorKey.FRONT_MATTER, e.line(), "a single text value for '" + key + "'", "a list or a map",
+            problems.add(ErrorKey.FRONT_MATTER, e.line(), "a single text value for '" + key + "'", YamlSnippet.describe(e.value()),
                     "Write '" + key + ": <text>' on one line.");
             return null;
         }
@@ -145,7 +149,7 @@ final class FrontMatterParser {
             boolean empty = declared.value() instanceof ScalarNode s && s.getValue().isBlank();
             if (!empty) {
                 problems.add(ErrorKey.FRONT_MATTER, declared.line(), "'sources:' followed by 'alias: workbook path' lines",
-                        "a single value or a list", "Indent one 'alias: file.xlsx' line per workbook under 'sources:'.");
+                        YamlSnippet.describe(declared.value()), "Indent one 'alias: file.xlsx' line per workbook under 'sources:'.");
             }
             return out;
         }
@@ -163,7 +167,7 @@ final class FrontMatterParser {
         }
         if (!(e.value() instanceof ScalarNode s) || s.getValue().isBlank()) {
             problems.add(ErrorKey.FRONT_MATTER, e.line(), "a workbook path for source '" + e.name() + "'",
-                    e.value() instanceof ScalarNode ? "nothing" : "a list or a map",
+                    YamlSnippet.describe(e.value()),
                     "Write '" + e.name() + ": <file>.xlsx' with the path relative to the notebook's folder.");
             return Optional.empty();
         }

@@ -51,6 +51,14 @@ final class Problems {
         return String.join(", ", words);
     }
 
+    /** How an option value of the wrong shape is shown in a message. */
+    static String describe(OptionValue value) {
+        if (value.isScalar()) {
+            return value.text().isBlank() ? "nothing" : quote(value.text());
+        }
+        return value.value() instanceof java.util.List ? "a list" : "a map";
+    }
+
     /** Raw text found in the notebook is quoted, so blanks and punctuation stay visible. */
     static String quote(String text) {
         return "'" + text + "'";

@@ -48,15 +48,26 @@ final class YamlSnippet {
         } catch (MarkedYAMLException e) {
             Mark mark = e.getProblemMark() != null ? e.getProblemMark() : e.getContextMark();
             int line = mark == null ? firstLine : lineOf(mark);
-            String problem = e.getProblem() == null ? "invalid YAML" : e.getProblem().strip();
-            problems.add(syntaxKey, line, "valid YAML ('name: value', one per line)", problem,
+            String found = "a YAML error" + (e.getProblem() == null ? "" : ": " + e.getProblem().strip());
+            if (e.getContext() != null && e.getContextMark() != null && e.getContextMark() != mark) {
+                found += " (" + e.getContext().strip() + " at line " + lineOf(e.getContextMark()) + ")";
+            }
+            problems.add(syntaxKey, line, "valid YAML ('name: value', one per line)", found,
                     "Correct the YAML on this line; put quotes around a value that starts with a quote,"
                             + " '!', '&', '*' or '{', or contains ': ' (e.g. cell: \"'Day 1'!C5\").");
             return Optional.empty();
         } catch (YAMLException e) {
-            problems.add(syntaxKey, firstLine, "valid YAML", e.getMessage(), "Correct the YAML.");
+            problems.add(syntaxKey, firstLine, "valid YAML", "a YAML error: " + e.getMessage(), "Correct the YAML.");
             return Optional.empty();
         }
+    }
+
+    /** How a node that has the wrong shape is shown in a message. */
+    static String describe(Node node) {
+        if (node instanceof ScalarNode s) {
+            return s.getValue().isBlank() ? "nothing" : Problems.quote(s.getValue());
+        }
+        return node instanceof SequenceNode ? "a list" : "a map";
     }
 
     int lineOf(Node node) {
