@@ -75,13 +75,16 @@ final class BodyParser {
                 checkNotMisspeltKind(fence, word, fenceLine);
                 continue;
             }
-            if (fence.getClosingFenceLength() == null) {
+            boolean closed = fence.getClosingFenceLength() != null;
+            if (!closed) {
+                // The cell swallowed the rest of the notebook; its "options" would only yield follow-on errors.
                 problems.add(ErrorKey.NOTEBOOK_SYNTAX, fenceLine, "a closing fence for the " + word + " cell",
                         "the end of the notebook", "Close the cell with a line of " + fence.getOpeningFenceLength() + " '"
                                 + fence.getFenceCharacter() + "' after its options.");
             }
             narrative(narrativeFrom, fenceLine - 1).ifPresent(n -> parts.add(new NarrativePart(n)));
-            CellOptionsParser.Result read = options.parse(kind.get(), fence.getLiteral(), fenceLine + 1, fenceLine);
+            CellOptionsParser.Result read = closed ? options.parse(kind.get(), fence.getLiteral(), fenceLine + 1, fenceLine)
+                    : CellOptionsParser.Result.EMPTY;
             parts.add(new CellPart(new CellIds.Draft(kind.get(), fenceLine, heading, read)));
             narrativeFrom = lastLine + 1;
             heading = null; // a heading titles the cells after it up to the next cell only

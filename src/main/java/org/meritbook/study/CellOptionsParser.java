@@ -21,6 +21,7 @@ final class CellOptionsParser {
 
     /** The options of one cell as read; unusable options are reported and left out. */
     record Result(Map<String, OptionValue> options, List<Exclusion> exclusions, Set<String> rejected) {
+        static final Result EMPTY = new Result(Map.of(), List.of(), Set.of());
     }
 
     private final Map<String, SourceFile> sources;
@@ -40,13 +41,13 @@ final class CellOptionsParser {
         YamlSnippet yaml = new YamlSnippet(bodyLine, ErrorKey.NOTEBOOK_SYNTAX, problems);
         Optional<Node> root = body.isBlank() ? Optional.empty() : yaml.compose(body);
         if (root.isEmpty() && !body.isBlank()) {
-            return new Result(Map.of(), List.of(), Set.of()); // syntax error reported; missing options would only add noise
+            return Result.EMPTY; // syntax error reported; missing options would only add noise
         }
         if (root.isPresent() && !(root.get() instanceof MappingNode)) {
             problems.add(ErrorKey.NOTEBOOK_SYNTAX, yaml.lineOf(root.get()), "options as 'name: value' lines",
                     YamlSnippet.describe(root.get()),
                     "Write one option per line, e.g. 'data: runs!Calibration!A4:C25'.");
-            return new Result(Map.of(), List.of(), Set.of());
+            return Result.EMPTY;
         }
         Map<String, OptionValue> options = new LinkedHashMap<>();
         root.ifPresent(r -> yaml.entries((MappingNode) r).values()
