@@ -28,6 +28,20 @@ public record AnalysisCell(String id, AnalysisKind kind, String title, int line,
         return Optional.ofNullable(options.get(name));
     }
 
+    /** The cell's {@code data:} reference, when it has one. */
+    public Optional<DataReference> dataReference() {
+        return option("data").map(DataReferences::parse);
+    }
+
+    /**
+     * The {@code data:} reference of a nested data set ({@code blanks}, {@code spikes},
+     * {@code low-samples}), when the cell has that set.
+     */
+    public Optional<DataReference> dataReference(String dataSet) {
+        return option(dataSet).filter(v -> v.value() instanceof Map)
+                .flatMap(v -> Optional.ofNullable(v.map().get("data"))).map(DataReferences::parse);
+    }
+
     /** The notebook line of an option, or the cell's line when the option is absent. */
     public int lineOf(String name) {
         OptionValue v = options.get(name);
