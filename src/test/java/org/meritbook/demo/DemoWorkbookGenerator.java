@@ -1,7 +1,8 @@
 package org.meritbook.demo;
 
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.OutputStream;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.nio.file.Files;
@@ -9,10 +10,14 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Instant;
 import java.time.LocalDate;
+import java.time.LocalDateTime;
 import java.util.Date;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Random;
+import java.util.zip.ZipEntry;
+import java.util.zip.ZipInputStream;
+import java.util.zip.ZipOutputStream;
 import org.apache.poi.ooxml.POIXMLProperties;
 import org.apache.poi.ss.SpreadsheetVersion;
 import org.apache.poi.ss.usermodel.CellStyle;
@@ -44,6 +49,9 @@ public final class DemoWorkbookGenerator {
 
     /** The committed workbook's file name (the notebook's {@code sources:} entry names it). */
     public static final String FILE_NAME = "hmf-honey-validation.xlsx";
+
+    /** Date of every zip entry, the same as the core properties' created/modified. */
+    static final LocalDateTime ENTRY_TIME = LocalDateTime.of(2026, 11, 20, 9, 0);
 
     /** Fixed so the committed file can be regenerated exactly. */
     static final long SEED = 20261109L;
@@ -108,14 +116,35 @@ public final class DemoWorkbookGenerator {
         Path target = folder.resolve(FILE_NAME);
         // Written beside the target and moved, so a failed run never leaves half a file.
         Path tmp = folder.resolve(FILE_NAME + ".tmp");
-        try (XSSFWorkbook wb = build(); OutputStream out = Files.newOutputStream(tmp)) {
-            wb.write(out);
+        try (XSSFWorkbook wb = build()) {
+            ByteArrayOutputStream poi = new ByteArrayOutputStream();
+            wb.write(poi);
+            Files.write(tmp, withFixedEntryTimes(poi.toByteArray()));
         } catch (IOException | RuntimeException e) {
             Files.deleteIfExists(tmp);
             throw e;
         }
         Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
         return target;
+    }
+
+    /**
+     * Rewrites the package with every zip entry dated {@link #ENTRY_TIME}: POI stamps entries with
+     * the current time, so without this each regeneration would change the committed file's bytes.
+     */
+    static byte[] withFixedEntryTimes(byte[] xlsx) throws IOException {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try (ZipInputStream in = new ZipInputStream(new ByteArrayInputStream(xlsx));
+                ZipOutputStream zip = new ZipOutputStream(out)) {
+            for (ZipEntry entry = in.getNextEntry(); entry != null; entry = in.getNextEntry()) {
+                ZipEntry copy = new ZipEntry(entry.getName());
+                copy.setTimeLocal(ENTRY_TIME); // local DOS time as given, independent of the time zone
+                zip.putNextEntry(copy);
+                in.transferTo(zip);
+                zip.closeEntry();
+            }
+        }
+        return out.toByteArray();
     }
 
     /** Builds the workbook in memory; same seed, same cells. */

@@ -1,5 +1,6 @@
 package org.meritbook.demo;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -54,6 +55,13 @@ class DemoWorkbookTest {
             assertEquals(committed.get(i), regenerated.get(i), hint);
         }
         assertEquals(committed.size(), regenerated.size(), hint);
+    }
+
+    @Test
+    void twoRunsWriteIdenticalBytes(@TempDir Path tmp) throws IOException {
+        byte[] first = Files.readAllBytes(DemoWorkbookGenerator.write(tmp.resolve("first")));
+        byte[] second = Files.readAllBytes(DemoWorkbookGenerator.write(tmp.resolve("second")));
+        assertArrayEquals(first, second, "regenerating must not change the committed file's bytes");
     }
 
     @Test
