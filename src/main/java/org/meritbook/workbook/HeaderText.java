@@ -42,6 +42,9 @@ record HeaderText(String header, String name, String unit) {
         if (l.header().isEmpty()) {
             return u;
         }
+        if (l.header().matches("\\(.*\\)|\\[.*]")) {
+            return parse(u.header() + " " + l.header()); // a row of units under the names
+        }
         String unit = l.unit() != null ? l.unit() : u.unit();
         return new HeaderText(u.header() + " " + l.header(), u.name() + " " + l.name(), unit);
     }
