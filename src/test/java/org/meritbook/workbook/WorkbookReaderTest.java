@@ -324,6 +324,36 @@ class WorkbookReaderTest {
     }
 
     @Test
+    void sheetNameWithSpacesAndQuotedNameFormula() {
+        Path f = Fixtures.xlsx(dir, "lab.xlsx", wb -> {
+            Sheet s = wb.createSheet("Day 2 runs");
+            row(s, 1, "Run", "Result");
+            row(s, 2, 1.0, 0.521);
+            Name n = wb.createName();
+            n.setNameName("SecondDay");
+            n.setRefersToFormula("'Day 2 runs'!$A$1:$B$2");
+        });
+        DataBlock byRange = read(f, Fixtures.ref("Day 2 runs", "A1:B2"));
+        DataBlock byName = read(f, Fixtures.ref("SecondDay", null));
+        assertEquals("Day 2 runs!B2", col(byRange, "Result").values().get(0).ref().address());
+        assertEquals(col(byRange, "Result").values(), col(byName, "Result").values());
+    }
+
+    @Test
+    void nameThatIsAlsoASheetIsReadAsTheNameAndSaysSo() {
+        Path f = Fixtures.xlsx(dir, "lab.xlsx", wb -> {
+            Fixtures.calibration(wb);
+            Name n = wb.createName();
+            n.setNameName("Calibration");
+            n.setRefersToFormula("Calibration!$B$4:$C$8");
+        });
+        DataBlock b = read(f, Fixtures.ref("Calibration", null));
+        assertEquals("B4:C8", b.range());
+        assertTrue(b.decisions().contains("'Calibration' names a defined name and also a sheet; the defined name was "
+                + "read (order: defined name, table, sheet)"), b.decisions().toString());
+    }
+
+    @Test
     void excelTableGivesHeaderAndDataArea() {
         Path f = Fixtures.xlsx(dir, "lab.xlsx", wb -> {
             XSSFSheet s = (XSSFSheet) wb.createSheet("Recovery");
