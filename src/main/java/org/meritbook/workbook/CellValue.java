@@ -34,7 +34,18 @@ public record CellValue(CellRef ref, Kind kind, double number, String raw, Strin
         }
     }
 
+    /** Start of the note on a formula cell the workbook was saved without a computed value for. */
+    public static final String NO_CACHED_RESULT = "no cached result of formula ";
+
     public boolean isNumber() {
         return kind == Kind.NUMBER;
+    }
+
+    /**
+     * True for a formula cell saved without its computed value (a file written by a program that
+     * does not calculate): the reader cannot know the number, so the value is TEXT holding the formula.
+     */
+    public boolean isFormulaWithoutResult() {
+        return kind == Kind.TEXT && note != null && note.startsWith(NO_CACHED_RESULT);
     }
 }

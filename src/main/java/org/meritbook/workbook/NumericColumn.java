@@ -3,6 +3,7 @@ package org.meritbook.workbook;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Objects;
 import java.util.function.Predicate;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
@@ -25,6 +26,7 @@ public final class NumericColumn {
      * @throws InputException listing every non-numeric, censored or blank cell
      */
     public static double[] values(Path file, Column column, Predicate<CellRef> skip) {
+        Objects.requireNonNull(skip, "skip");
         double[] out = new double[column.values().size()];
         List<Problem> problems = new ArrayList<>();
         for (int i = 0; i < out.length; i++) {
@@ -44,6 +46,11 @@ public final class NumericColumn {
         return out;
     }
 
+    /** Every cell must be a number; nothing is excluded. */
+    public static double[] values(Path file, Column column) {
+        return values(file, column, ref -> false);
+    }
+
     private static Problem problem(Path file, Column column, CellValue v) {
         String where = file.getFileName() + ", " + v.ref().address();
         String expected = "a number in column '" + column.header() + "'";
@@ -55,8 +62,24 @@ public final class NumericColumn {
             case CENSORED -> new Problem(ErrorKey.CENSORED_VALUE, where, expected,
                     "the censored result '" + v.raw() + "'",
                     "This method needs measured values; report the measured value, or " + exclude + ".");
-            default -> new Problem(ErrorKey.NOT_A_NUMBER, where, expected, "the text '" + v.raw() + "'",
-                    "Correct the cell, or " + exclude + ".");
+            default -> v.isFormulaWithoutResult()
+                    ? new Problem(ErrorKey.FORMULA_WITHOUT_RESULT, where, expected,
+                            "the formula " + v.raw() + " saved without its result",
+                            "Open the workbook in Excel, let it calculate and save it, or " + exclude + ".")
+                    : new Problem(ErrorKey.NOT_A_NUMBER, where, expected, found(v),
+                            "Correct the cell, or " + exclude + ".");
         };
+    }
+
+    /** Names what the cell holds, so "#DIV/0!" reads as an error value and a date as a date. */
+    private static String found(CellValue v) {
+        String note = v.note() == null ? "" : v.note();
+        if (note.contains(Notes.ERROR)) {
+            return "the error value '" + v.raw() + "'";
+        }
+        if (note.contains(Notes.DATE)) {
+            return "the date '" + v.raw() + "'";
+        }
+        return "the text '" + v.raw() + "'";
     }
 }

@@ -1,0 +1,146 @@
+package org.meritbook.workbook;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.apache.poi.ss.usermodel.Name;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.ss.usermodel.Workbook;
+import org.apache.poi.xssf.usermodel.XSSFSheet;
+import org.apache.poi.xssf.usermodel.XSSFTable;
+import org.apache.poi.xssf.usermodel.XSSFTableColumn;
+
+/** An .xlsx, .xlsm or .xls workbook read by POI, held in memory. */
+final class PoiWorkbook implements SourceWorkbook {
+    private final Workbook workbook;
+    private final PoiCells cells;
+    private final List<String> openingDecisions;
+
+    PoiWorkbook(Workbook workbook, List<String> openingDecisions) {
+        this.workbook = workbook;
+        this.cells = new PoiCells(workbook);
+        this.openingDecisions = List.copyOf(openingDecisions);
+    }
+
+    @Override
+    public List<String> sheetNames() {
+        List<String> names = new ArrayList<>();
+        for (Sheet s : workbook) {
+            names.add(s.getSheetName());
+        }
+        return names;
+    }
+
+    @Override
+    public Optional<Grid> sheet(String name) {
+        for (Sheet s : workbook) {
+            if (s.getSheetName().equalsIgnoreCase(name.strip())) {
+                return Optional.of(new PoiGrid(s, cells));
+            }
+        }
+        return Optional.empty();
+    }
+
+    @Override
+    public List<String> definedNames() {
+        return userNames().stream().map(Name::getNameName).distinct().toList();
+    }
+
+    @Override
+    public Optional<NamedRange> definedName(String name) {
+        List<Name> matches = userNames().stream().filter(n -> n.getNameName().equalsIgnoreCase(name.strip())).toList();
+        // A workbook-wide name wins over one scoped to a sheet, as in Excel outside that sheet.
+        Optional<Name> chosen = matches.stream().filter(n -> n.getSheetIndex() < 0).findFirst()
+                .or(() -> matches.stream().findFirst());
+        return chosen.map(PoiWorkbook::namedRange);
+    }
+
+    private List<Name> userNames() {
+        return workbook.getAllNames().stream()
+                .filter(n -> !n.getNameName().startsWith("_xlnm.") && !n.isFunctionName())
+                .map(Name.class::cast)
+                .toList();
+    }
+
+    /** Splits "'My sheet'!$A$4:$C$25" into sheet and range; anything else is not one range. */
+    static NamedRange namedRange(Name n) {
+        String f = n.getRefersToFormula() == null ? "" : n.getRefersToFormula().strip();
+        if (f.startsWith("=")) {
+            f = f.substring(1);
+        }
+        String sheet;
+        String rest;
+        if (f.startsWith("'")) {
+            int i = 1;
+            StringBuilder sb = new StringBuilder();
+            while (i < f.length()) {
+                char ch = f.charAt(i);
+                if (ch == '\'' && i + 1 < f.length() && f.charAt(i + 1) == '\'') {
+                    sb.append('\'');
+                    i += 2;
+                } else if (ch == '\'') {
+                    break;
+                } else {
+                    sb.append(ch);
+                    i++;
+                }
+            }
+            sheet = sb.toString();
+            rest = i + 1 < f.length() && f.charAt(i + 1) == '!' ? f.substring(i + 2) : null;
+        } else {
+            int bang = f.indexOf('!');
+            sheet = bang < 0 ? null : f.substring(0, bang);
+            rest = bang < 0 ? null : f.substring(bang + 1);
+        }
+        if (sheet == null || rest == null || rest.isEmpty() || sheet.contains("#REF") || rest.contains("#REF")
+                || rest.contains(",") || rest.contains("!") || sheet.contains("[")) {
+            return new NamedRange(n.getNameName(), f, null, null);
+        }
+        return new NamedRange(n.getNameName(), f, sheet, rest.contains(":") ? rest : rest + ":" + rest);
+    }
+
+    @Override
+    public List<String> tableNames() {
+        return tables().stream().map(XSSFTable::getName).toList();
+    }
+
+    @Override
+    public Optional<TableRange> table(String name) {
+        String want = name.strip();
+        return tables().stream()
+                .filter(t -> want.equalsIgnoreCase(t.getName()) || want.equalsIgnoreCase(t.getDisplayName()))
+                .findFirst()
+                .map(t -> new TableRange(t.getName(), t.getSheetName(),
+                        new Area(t.getStartCellReference().getRow(), t.getStartCellReference().getCol(),
+                                t.getEndCellReference().getRow(), t.getEndCellReference().getCol()),
+                        t.getHeaderRowCount(), t.getTotalsRowCount(),
+                        t.getColumns().stream().map(XSSFTableColumn::getName).toList()));
+    }
+
+    private List<XSSFTable> tables() {
+        List<XSSFTable> all = new ArrayList<>();
+        for (Sheet s : workbook) {
+            if (s instanceof XSSFSheet x) {
+                all.addAll(x.getTables());
+            }
+        }
+        return all;
+    }
+
+    @Override
+    public List<String> openingDecisions() {
+        return openingDecisions;
+    }
+
+    @Override
+    public void close() {
+        try {
+            // Opened from bytes in memory: closing releases memory and cannot write to the user's file.
+            workbook.close();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
