@@ -68,7 +68,10 @@ record CalibrationData(DataBlock block, Column xColumn, Column yColumn, List<Cal
         for (int i = 0; i < rows; i++) {
             CellValue xc = xColumn.values().get(i);
             CellValue yc = yColumn.values().get(i);
-            points.add(new CalibrationPoint(yc.ref().a1(), xc, yc, xy[0][i], xy[1][i], rowReason[i]));
+            // Excluded points keep their values when numeric, so the table and figures can show them.
+            double x = xc.isNumber() ? xc.number() : xy[0][i];
+            double y = yc.isNumber() ? yc.number() : xy[1][i];
+            points.add(new CalibrationPoint(yc.ref().a1(), xc, yc, x, y, rowReason[i]));
         }
         return new CalibrationData(block, xColumn, yColumn, points);
     }

@@ -112,6 +112,10 @@ final class CalibrationTrail {
                         "notebook exclude"));
             }
         }
+        String block = data.block().sheet() + "!" + data.block().range();
+        for (String decision : data.block().decisions()) {
+            inputs.add(StepInput.text("reading " + block, decision, data.block().file().getFileName().toString()));
+        }
         return section.quantity(QuantityDraft.of("n", "Number of calibration points in the fit",
                 "n = points in the range not excluded", inputs, fit.n(), null));
     }

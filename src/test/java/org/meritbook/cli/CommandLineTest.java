@@ -1,0 +1,144 @@
+package org.meritbook.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.OutputStream;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+/** Exit codes and messages as a user meets them (DESIGN §6 and §7). */
+class CommandLineTest {
+    @TempDir
+    Path dir;
+
+    private record Outcome(int code, String out, String err) {
+    }
+
+    private static Outcome execute(String... args) {
+        CommandLine cl = Main.commandLine();
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        cl.setOut(new PrintWriter(out));
+        cl.setErr(new PrintWriter(err));
+        int code = cl.execute(args);
+        return new Outcome(code, out.toString(), err.toString());
+    }
+
+    /** A small workbook: Cal!A1:B6 with header "Conc (mg/L)", "Area"; one text entry when asked. */
+    private Path workbook(String badEntry) throws Exception {
+        Path file = dir.resolve("runs.xlsx");
+        try (XSSFWorkbook wb = new XSSFWorkbook(); OutputStream os = Files.newOutputStream(file)) {
+            Sheet s = wb.createSheet("Cal");
+            Row h = s.createRow(0);
+            h.createCell(0).setCellValue("Conc (mg/L)");
+            h.createCell(1).setCellValue("Area");
+            double[][] data = {{1, 10.2}, {2, 19.9}, {4, 40.5}, {8, 79.4}, {16, 161.0}};
+            for (int i = 0; i < data.length; i++) {
+                Row r = s.createRow(i + 1);
+                r.createCell(0).setCellValue(data[i][0]);
+                if (badEntry != null && i == 2) {
+                    r.createCell(1).setCellValue(badEntry);
+                } else {
+                    r.createCell(1).setCellValue(data[i][1]);
+                }
+            }
+            wb.write(os);
+        }
+        return file;
+    }
+
+    private Path notebook(String data) throws Exception {
+        Path nb = dir.resolve("study.md");
+        Files.writeString(nb, """
+                ---
+                title: Exit code check
+                sources:
+                  runs: runs.xlsx
+                ---
+
+                ```calibration
+                data: %s
+                x: Conc
+                y: Area
+                ```
+                """.formatted(data));
+        return nb;
+    }
+
+    @Test
+    void aGoodStudyExitsZero() throws Exception {
+        workbook(null);
+        Outcome o = execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());
+        assertEquals(0, o.code(), o.err());
+        assertTrue(Files.exists(dir.resolve("out/study/results.json")));
+        assertTrue(Files.exists(dir.resolve("out/study/trail.md")));
+    }
+
+    @Test
+    void textInANumericColumnExitsTwoNamingTheCell() throws Exception {
+        workbook("<0.05");
+        Outcome o = execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("runs.xlsx, Cal!B4: expected a number in column 'Area' but found the censored "
+                + "result '<0.05'."), o.err());
+        assertFalse(Files.exists(dir.resolve("out/study/results.json")), "no results from bad input");
+    }
+
+    @Test
+    void aMissingSheetExitsTwo() throws Exception {
+        workbook(null);
+        Outcome o = execute("run", notebook("runs!Calibration!A1:B6").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("runs.xlsx, data reference 'runs!Calibration!A1:B6' (notebook line 8): expected a "
+                + "sheet named 'Calibration' but found only the sheets 'Cal'. Correct the sheet name in the data "
+                + "reference."), o.err());
+    }
+
+    @Test
+    void anUndeclaredSourceExitsTwoWithTheLine() throws Exception {
+        workbook(null);
+        Outcome o = execute("run", notebook("lab!Cal!A1:B6").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("study.md line 8"), o.err());
+        assertTrue(o.err().contains("runs"), o.err());
+    }
+
+    @Test
+    void aCorruptWorkbookExitsTwo() throws Exception {
+        Files.writeString(dir.resolve("runs.xlsx"), "this is not a workbook");
+        Outcome o = execute("run", notebook("runs!Cal!A1:B6").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("runs.xlsx, data reference 'runs!Cal!A1:B6' (notebook line 8): expected an Excel "
+                + "workbook (.xlsx) but found a file that is not a workbook (neither a zip package nor an OLE2 file)."),
+                o.err());
+    }
+
+    @Test
+    void aMissingNotebookExitsTwo() {
+        Outcome o = execute("run", dir.resolve("nope.md").toString());
+        assertEquals(2, o.code());
+        assertTrue(o.err().contains("nope.md"), o.err());
+    }
+
+    @Test
+    void versionAndHelpAnswer() {
+        Outcome v = execute("--version");
+        assertEquals(0, v.code());
+        assertTrue(v.out().startsWith("meritbook "), v.out());
+        Outcome h = execute("--help");
+        assertEquals(0, h.code());
+        assertTrue(h.out().contains("run") && h.out().contains("demo"), h.out());
+        Outcome bad = execute("frobnicate");
+        assertEquals(2, bad.code());
+    }
+}
