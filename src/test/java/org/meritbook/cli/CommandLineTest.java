@@ -100,7 +100,7 @@ class CommandLineTest {
         Outcome o = execute("run", notebook("runs!Calibration!A1:B6").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("runs.xlsx, data reference 'runs!Calibration!A1:B6' (notebook line 8): expected a "
-                + "sheet named 'Calibration' but found only the sheets 'Cal'. Correct the sheet name in the data "
+                + "sheet named 'Calibration' but found only the sheet 'Cal'. Correct the sheet name in the data "
                 + "reference."), o.err());
     }
 
