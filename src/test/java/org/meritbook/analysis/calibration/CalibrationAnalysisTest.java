@@ -217,6 +217,27 @@ class CalibrationAnalysisTest {
     }
 
     @Test
+    void censoredResponsesAreRejectedUnlessTheNotebookSaysDrop() {
+        List<CellValue> xs = new ArrayList<>();
+        List<CellValue> ys = new ArrayList<>();
+        for (int i = 0; i < X.length; i++) {
+            xs.add(cell(0, i + 1, Double.toString(X[i])));
+            ys.add(i == 0 ? new CellValue(new CellRef("Cal", 1, 1), CellValue.Kind.CENSORED, 2.5, "<2.5", null)
+                    : cell(1, i + 1, Double.toString(Y[i])));
+        }
+        DataBlock block = new DataBlock(FILE, "Cal", "A1:B8", List.of(
+                new Column("Conc (ng/mL)", "Conc", "ng/mL", "A", xs),
+                new Column("Signal (counts)", "Signal", "counts", "B", ys)), List.of());
+        InputException e = assertThrows(InputException.class, () -> run("", block));
+        assertEquals(ErrorKey.CENSORED_VALUE, e.key());
+        assertEquals("runs.xlsx, Cal!B2", e.problems().get(0).where());
+
+        SectionResult s = run("censored: drop\n", block);
+        assertEquals(6, q(s, "n"));
+        assertEquals("censored result '<2.5' left out (censored: drop)", s.table().rows().get(0).exclusionReason());
+    }
+
+    @Test
     void fewerThanThreePointsIsAnError() {
         InputException e = assertThrows(InputException.class,
                 () -> run("", block(new String[] {"1", "2"}, new String[] {"3", "5"})));
