@@ -31,7 +31,8 @@ final class ExclusionParser {
             return out; // "exclude:" with nothing under it excludes nothing
         }
         if (!(exclude.value() instanceof List)) {
-            problems.add(ErrorKey.BAD_OPTION_VALUE, exclude.line(), SHAPE, Problems.describe(exclude), "Write one '- cell: ...' entry per excluded cell, each with 'reason: ...'.");
+            problems.add(ErrorKey.BAD_OPTION_VALUE, exclude.line(), SHAPE, Problems.describe(exclude),
+                    "Write one '- cell: ...' entry per excluded cell, each with 'reason: ...'.");
             return out;
         }
         Map<String, Integer> seen = new HashMap<>();
