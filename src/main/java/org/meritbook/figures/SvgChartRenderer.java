@@ -4,6 +4,9 @@ import java.awt.Font;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.nio.charset.StandardCharsets;
 import java.util.HashSet;
 import java.util.Locale;
@@ -64,6 +67,8 @@ public final class SvgChartRenderer {
 
     private static void style(XYStyler st) {
         st.setLocale(Locale.ROOT);
+        st.setxAxisTickLabelsFormattingFunction(SvgChartRenderer::tick);
+        st.setyAxisTickLabelsFormattingFunction(SvgChartRenderer::tick);
         st.setChartTitleVisible(false); // the dossier prints the caption under the figure
         st.setChartBackgroundColor(java.awt.Color.WHITE);
         st.setPlotBackgroundColor(java.awt.Color.WHITE);
@@ -104,6 +109,16 @@ public final class SvgChartRenderer {
             throw new IllegalStateException("the SVG export produced no <svg> element");
         }
         return svg.substring(start).strip();
+    }
+
+    /** Tick labels: at most ten significant digits, no digit grouping, a true minus sign. */
+    static String tick(Double v) {
+        BigDecimal b = new BigDecimal(v).round(new MathContext(10, RoundingMode.HALF_EVEN)).stripTrailingZeros();
+        if (b.signum() == 0) {
+            return "0";
+        }
+        String s = b.abs().toPlainString();
+        return b.signum() < 0 ? "\u2212" + s : s;
     }
 
     private static String nullToEmpty(String s) {
