@@ -67,7 +67,7 @@ final class EmbeddedFonts {
                 throw new IllegalStateException("font " + DEJAVU + file + " is not on the classpath "
                         + "(net.sf.jasperreports:jasperreports-fonts)");
             }
-            return new FontFile(family, weight, style, in.readAllBytes(), fallback);
+            return new FontFile(family, weight, style, FontTables.without(in.readAllBytes(), "GSUB"), fallback);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -81,7 +81,7 @@ final class EmbeddedFonts {
                     .sorted().toList()) {
                 String name = p.getFileName().toString();
                 out.add(new FontFile(name.substring(0, name.length() - 4), 400, FontStyle.NORMAL,
-                        Files.readAllBytes(p), true));
+                        FontTables.without(Files.readAllBytes(p), "GSUB"), true));
             }
             return out;
         } catch (IOException e) {
