@@ -93,7 +93,7 @@ class DossierRendererTest {
         assertTrue(text.contains("no criterion set"), "quantity without a criterion");
         assertTrue(text.contains("Not evaluable"), "verdict without a quantity");
         assertTrue(text.contains("support, and do not replace, the laboratory's own review"), "caution");
-        assertTrue(text.contains("Page 3 of "), "running footer");
+        assertTrue(text(plain.pdf(), true).contains("Page 3 of "), "running footer");
         assertTrue(text.contains("Calibration!C21"), "cell addresses");
         assertTrue(text.contains("test fixture") && !text.contains("\uFB01"), "no ligature glyphs in the text layer");
         assertTrue(text.contains("Injection failure recorded in the run log"), "exclusion reason");
@@ -166,9 +166,18 @@ class DossierRendererTest {
     }
 
     static String text(byte[] pdf) throws IOException {
+        return text(pdf, false);
+    }
+
+    /**
+     * Lines joined (a value may wrap inside its table cell). Content order keeps table cells whole;
+     * position order is needed for the footer, whose page number is generated content drawn last.
+     */
+    static String text(byte[] pdf, boolean byPosition) throws IOException {
         try (PDDocument doc = Loader.loadPDF(pdf)) {
-            // Lines are joined: a value may wrap inside its table cell.
-            return new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            PDFTextStripper stripper = new PDFTextStripper();
+            stripper.setSortByPosition(byPosition);
+            return stripper.getText(doc).replaceAll("\\s+", " ");
         }
     }
 
