@@ -6,9 +6,12 @@ import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
 import com.openhtmltopdf.svgsupport.BatikSVGDrawer;
 import java.awt.color.ColorSpace;
 import java.awt.color.ICC_Profile;
+import com.openhtmltopdf.util.Diagnostic;
+import com.openhtmltopdf.util.XRLog;
 import java.io.IOException;
 import java.io.StringReader;
 import java.io.UncheckedIOException;
+import java.util.logging.Level;
 import javax.xml.XMLConstants;
 import javax.xml.parsers.DocumentBuilderFactory;
 import javax.xml.parsers.ParserConfigurationException;
@@ -25,6 +28,14 @@ import org.xml.sax.SAXException;
 final class PdfRenderer {
     /** Where relative links resolve; nothing is ever loaded from it (all access is denied). */
     private static final String BASE_URI = "file:/meritbook-dossier/";
+    private static final System.Logger LOG = System.getLogger(PdfRenderer.class.getName());
+
+    static {
+        // openhtmltopdf narrates every run at INFO on stderr; only its warnings concern a user.
+        for (String logger : XRLog.listRegisteredLoggers()) {
+            XRLog.setLevel(logger, Level.WARNING);
+        }
+    }
 
     private final EmbeddedFonts fonts;
     private final GlyphCoverage coverage;
@@ -47,6 +58,7 @@ final class PdfRenderer {
         b.useExternalResourceAccessControl((uri, type) -> false, ExternalResourceControlPriority.RUN_BEFORE_RESOLVING_URI);
         b.useExternalResourceAccessControl((uri, type) -> false, ExternalResourceControlPriority.RUN_AFTER_RESOLVING_URI);
         b.withProducer(PdfAFinisher.PRODUCER);
+        b.withDiagnosticConsumer(PdfRenderer::report);
         fonts.register(b);
         b.withW3cDocument(dom, BASE_URI);
         try (PdfBoxRenderer renderer = b.buildPdfRenderer()) {
@@ -54,6 +66,13 @@ final class PdfRenderer {
             return renderer.createPDFKeepOpen();
         } catch (IOException e) {
             throw new UncheckedIOException("PDF rendering failed", e);
+        }
+    }
+
+    /** The renderer's progress notes are noise; its warnings (e.g. CSS in a lab template) are not. */
+    private static void report(Diagnostic d) {
+        if (d.getLevel().intValue() >= Level.WARNING.intValue()) {
+            LOG.log(System.Logger.Level.WARNING, d.getFormattedMessage());
         }
     }
 
