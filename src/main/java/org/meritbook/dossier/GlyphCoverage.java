@@ -2,7 +2,9 @@ package org.meritbook.dossier;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.util.ArrayList;
 import java.util.BitSet;
+import java.util.List;
 import java.util.Locale;
 import org.apache.fontbox.ttf.CmapLookup;
 import org.apache.fontbox.ttf.TTFParser;
@@ -17,30 +19,38 @@ import org.w3c.dom.Node;
  * the attached notebook keep the original text.
  */
 final class GlyphCoverage {
-    /** Union of the code points the embedded fonts draw. */
-    private final BitSet covered = new BitSet(0x30000);
+    /** Unicode cmaps of the embedded fonts; the fonts are parsed from memory and kept open. */
+    private final List<CmapLookup> cmaps = new ArrayList<>();
+    /** Code points already looked up: bit set when covered, in {@code known} when looked up. */
+    private final BitSet covered = new BitSet();
+    private final BitSet known = new BitSet();
 
     GlyphCoverage(EmbeddedFonts fonts) {
         for (EmbeddedFonts.FontFile f : fonts.files()) {
-            try (TrueTypeFont ttf = new TTFParser().parse(new RandomAccessReadBuffer(f.bytes()))) {
-                CmapLookup lookup = ttf.getUnicodeCmapLookup();
-                for (int cp = 0; cp < 0x30000; cp++) {
-                    if (!covered.get(cp) && lookup.getGlyphId(cp) > 0) {
-                        covered.set(cp);
-                    }
-                }
+            try {
+                TrueTypeFont ttf = new TTFParser().parse(new RandomAccessReadBuffer(f.bytes()));
+                cmaps.add(ttf.getUnicodeCmapLookup());
             } catch (IOException e) {
                 throw new UncheckedIOException("font " + f.family() + " is unreadable", e);
             }
         }
     }
 
-    boolean covers(int codePoint) {
+    synchronized boolean covers(int codePoint) {
         if (Character.isWhitespace(codePoint) || Character.getType(codePoint) == Character.FORMAT
                 || Character.getType(codePoint) == Character.CONTROL) {
             return true; // spacing and formatting characters are not drawn
         }
-        return codePoint < 0x30000 && covered.get(codePoint);
+        if (!known.get(codePoint)) {
+            known.set(codePoint);
+            for (CmapLookup c : cmaps) {
+                if (c.getGlyphId(codePoint) > 0) {
+                    covered.set(codePoint);
+                    break;
+                }
+            }
+        }
+        return covered.get(codePoint);
     }
 
     /** Rewrites, in place, every text node under {@code root} except style sheets. */
