@@ -87,7 +87,7 @@ public final class DossierFixtures {
             Files.write(workbook, wb);
 
             FrontMatter fm = new FrontMatter(text.title(), "FIX-IC-07", text.laboratory(), 2,
-                    "Day 2 replicate 4 corrected from 0.512 to 0.521 (transcription error)", "A. Fixture",
+                    "Day 2 replicate 4 corrected from 0.512 to 0.521 (copying error)", "A. Fixture",
                     "2026-03-14", "trace-water", Map.of());
             Map<String, SourceFile> sources = new LinkedHashMap<>();
             sources.put("runs", new SourceFile("runs", workbook, "nitrite-fixture.xlsx", 9));
