@@ -1,0 +1,201 @@
+package org.meritbook.dossier;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.commonmark.node.Node;
+import org.meritbook.analysis.Quantity;
+import org.meritbook.analysis.SectionResult;
+import org.meritbook.criteria.Verdict;
+import org.meritbook.dossier.DossierView.Chapter;
+import org.meritbook.dossier.DossierView.Cover;
+import org.meritbook.dossier.DossierView.InputRow;
+import org.meritbook.dossier.DossierView.Notes;
+import org.meritbook.dossier.DossierView.RevisionRow;
+import org.meritbook.dossier.DossierView.SoftwareRow;
+import org.meritbook.dossier.DossierView.Summary;
+import org.meritbook.dossier.DossierView.SummaryRow;
+import org.meritbook.dossier.DossierView.TocEntry;
+import org.meritbook.dossier.DossierView.TrailGroup;
+import org.meritbook.figures.SvgChartRenderer;
+import org.meritbook.pipeline.StudyResults;
+import org.meritbook.revision.InputFile;
+import org.meritbook.study.AnalysisCell;
+import org.meritbook.study.FrontMatter;
+
+/** Turns {@link StudyResults} into the {@link DossierView}: all wording of fixed texts and all formatting. */
+final class DossierModelBuilder {
+    static final String CAUTION = "The computations in this dossier support, and do not replace, the laboratory's "
+            + "own review under its procedures and the regulations that apply to it.";
+    static final String NO_CRITERION = "no criterion set";
+
+    private final DisplayFormatter format = new DisplayFormatter();
+    private final NarrativeRenderer narrative = new NarrativeRenderer();
+    private final SvgChartRenderer charts = new SvgChartRenderer();
+    private final RenderEnvironment environment;
+    private final List<SoftwareRow> renderingLibraries;
+
+    DossierModelBuilder(RenderEnvironment environment, List<SoftwareRow> renderingLibraries) {
+        this.environment = environment;
+        this.renderingLibraries = List.copyOf(renderingLibraries);
+    }
+
+    DossierView build(StudyResults results, List<PdfAFinisher.Embedded> files, DocumentDate date, String documentId) {
+        FrontMatter fm = results.study().frontMatter();
+        NarrativePlacement placement = new NarrativePlacement(results.study(), narrative);
+        List<TocEntry> toc = new ArrayList<>();
+        int chapter = 0;
+
+        Chapter intro = chapter(placement.intro(), "Introduction", "intro", chapter + 1);
+        if (intro.present()) {
+            chapter++;
+            toc.add(new TocEntry(intro.number(), intro.title(), intro.anchor(), List.of()));
+        }
+        String summaryNumber = String.valueOf(++chapter);
+        toc.add(new TocEntry(summaryNumber, "Summary of results", "summary", List.of()));
+
+        Map<String, SectionResult> byId = new LinkedHashMap<>();
+        results.sections().forEach(s -> byId.put(s.id(), s));
+        TrailViewBuilder trail = new TrailViewBuilder(results.sections(), "A", format);
+        SectionViewBuilder sectionBuilder = new SectionViewBuilder(format, charts, trail);
+        List<SectionView> sections = new ArrayList<>();
+        for (AnalysisCell cell : results.study().cells()) {
+            String number = String.valueOf(++chapter);
+            String anchor = "sec-" + number;
+            Markup before = narrative.render(placement.before(cell.id()));
+            Markup after = narrative.render(placement.after(cell.id()));
+            SectionResult r = byId.get(cell.id());
+            SectionView view = r == null
+                    ? new SectionView(number, anchor, cell.id(), cell.kind().keyword(), cell.title(), before, after,
+                    List.of(), new SectionView.TableView(false, "", List.of(), List.of(), List.of()), List.of(),
+                    List.of(), List.of(), List.of("This analysis produced no result."), false)
+                    : sectionBuilder.build(number, anchor, r, before, after);
+            sections.add(view);
+            toc.add(new TocEntry(number, view.title(), anchor, List.of()));
+        }
+        Chapter closing = closing(placement.closing(), chapter + 1);
+        if (closing.present()) {
+            toc.add(new TocEntry(closing.number(), closing.title(), closing.anchor(), List.of()));
+        }
+        List<TrailGroup> trailGroups = trail.groups();
+        toc.add(new TocEntry("A", "Calculation trail", "trail",
+                trailGroups.stream().map(g -> new TocEntry(g.number(), g.title(), g.anchor(), List.of())).toList()));
+        toc.add(new TocEntry("B", "Input manifest", "manifest", List.of()));
+        toc.add(new TocEntry("C", "Software and environment", "software", List.of()));
+
+        Summary summary = summary(summaryNumber, results.sections(), sections);
+        Cover cover = new Cover(fm.title(), orDash(fm.method()), orDash(fm.laboratory()),
+                String.valueOf(fm.revision()), date.display(), orDash(fm.preparedBy()), status(fm), summary.counts(),
+                fm.criteria() == null ? "none named" : fm.criteria(), documentId);
+        List<RevisionRow> revisions = List.of(new RevisionRow(String.valueOf(fm.revision()), date.display(),
+                fm.revisionReason() == null || fm.revisionReason().isBlank()
+                        ? (fm.revision() == 1 ? "First issue" : "No reason stated in the notebook")
+                        : fm.revisionReason(), orDash(fm.preparedBy())));
+        Notes notes = new Notes(CAUTION,
+                "Acceptance criteria are defaults" + (fm.criteria() == null ? "" : " (profile " + fm.criteria() + ")")
+                        + " and must be confirmed locally before this dossier is relied on.",
+                "Characters that the embedded fonts cannot draw appear in the PDF as their code point, e.g. "
+                        + "[U+4E2D]; the HTML version and the attached notebook keep the original text.",
+                "Results are rounded for display only (rules in the meritbook documentation, docs/dossier.md); "
+                        + "results.json, attached, holds every value at full precision.");
+        return new DossierView(true, cover, revisions, toc, summary, intro, sections, closing, trailGroups,
+                inputs(results, files), software(results), notes);
+    }
+
+    private Chapter chapter(List<Node> blocks, String title, String anchor, int number) {
+        if (blocks.isEmpty()) {
+            return new Chapter(false, "", title, anchor, new Markup(""));
+        }
+        return new Chapter(true, String.valueOf(number), title, anchor, narrative.render(blocks));
+    }
+
+    /** Closing notes take their title from a leading heading when the notebook gives one. */
+    private Chapter closing(List<Node> blocks, int number) {
+        String first = blocks.isEmpty() ? null : NarrativeRenderer.headingText(blocks.get(0));
+        if (first != null && !first.isBlank()) {
+            return chapter(blocks.subList(1, blocks.size()), first, "closing", number);
+        }
+        return chapter(blocks, "Closing notes", "closing", number);
+    }
+
+    private Summary summary(String number, List<SectionResult> results, List<SectionView> views) {
+        List<SummaryRow> rows = new ArrayList<>();
+        int pass = 0, fail = 0, na = 0, none = 0;
+        for (SectionResult r : results) {
+            String anchor = views.stream().filter(v -> v.id().equals(r.id())).map(SectionView::anchor).findFirst()
+                    .orElse("");
+            String section = SectionViewBuilder.title(r);
+            for (Quantity q : r.quantities()) {
+                if (!q.summary()) {
+                    continue;
+                }
+                DisplayFormatter.Formatted v = format.quantity(q);
+                List<Verdict> judged = r.verdicts().stream().filter(x -> q.name().equals(x.quantity())).toList();
+                if (judged.isEmpty()) {
+                    rows.add(new SummaryRow(section, anchor, q.label(), v.withUnit(), v.uncertainty(), NO_CRITERION,
+                            Verdicts.NONE));
+                    none++;
+                }
+                for (Verdict x : judged) {
+                    rows.add(new SummaryRow(section, anchor, q.label(), v.withUnit(), v.uncertainty(), x.rule(),
+                            Verdicts.view(x)));
+                }
+            }
+            for (Verdict x : r.verdicts()) {
+                Optional<Quantity> q = x.quantity() == null ? Optional.empty() : r.quantity(x.quantity());
+                if (q.isPresent() && q.get().summary()) {
+                    continue; // already listed with its quantity
+                }
+                DisplayFormatter.Formatted v = q.map(format::quantity).orElse(null);
+                rows.add(new SummaryRow(section, anchor, x.characteristic(), v == null ? "—" : v.withUnit(),
+                        v == null ? "" : v.uncertainty(), x.rule(), Verdicts.view(x)));
+            }
+            for (Verdict x : r.verdicts()) {
+                switch (x.outcome()) {
+                    case PASS -> pass++;
+                    case FAIL -> fail++;
+                    case NOT_EVALUABLE -> na++;
+                }
+            }
+        }
+        String counts = pass + " passed, " + fail + " failed, " + na + " not evaluable; " + none
+                + (none == 1 ? " result" : " results") + " without a criterion";
+        return new Summary(number, rows, counts);
+    }
+
+    private List<InputRow> inputs(StudyResults results, List<PdfAFinisher.Embedded> files) {
+        List<InputRow> rows = new ArrayList<>();
+        for (InputFile f : results.inputs()) {
+            String attached = files.stream().map(PdfAFinisher.Embedded::attachment)
+                    .filter(a -> a.alias().equals(f.alias())).map(Attachment::name).findFirst().orElse("not attached");
+            rows.add(new InputRow(f.alias(), f.path(), format.bytes(f.bytes()), f.sha256(), f.ranges(), attached));
+        }
+        for (PdfAFinisher.Embedded e : files) {
+            if (e.attachment().source() == null) { // produced by this run: results.json
+                rows.add(new InputRow(e.attachment().alias(), e.attachment().name(), format.bytes(e.bytes().length),
+                        DossierRenderer.sha256Hex(e.bytes()), List.of(), e.attachment().name()));
+            }
+        }
+        return rows;
+    }
+
+    private List<SoftwareRow> software(StudyResults results) {
+        Map<String, String> rows = new LinkedHashMap<>();
+        results.software().forEach(c -> rows.putIfAbsent(c.name(), c.version()));
+        renderingLibraries.forEach(c -> rows.putIfAbsent(c.name(), c.version()));
+        rows.putIfAbsent("Java runtime", environment.javaRuntime());
+        rows.putIfAbsent("Operating system", environment.operatingSystem());
+        return rows.entrySet().stream().map(e -> new SoftwareRow(e.getKey(), e.getValue())).toList();
+    }
+
+    private static String status(FrontMatter fm) {
+        Object s = fm.all() == null ? null : fm.all().get("status");
+        return s instanceof String text && !text.isBlank() ? text : "Draft: for review and approval";
+    }
+
+    private static String orDash(String s) {
+        return s == null || s.isBlank() ? "not stated" : s;
+    }
+}

@@ -1,0 +1,150 @@
+package org.meritbook.dossier;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Optional;
+import java.util.Properties;
+import org.meritbook.dossier.DossierView.SoftwareRow;
+import org.meritbook.error.ErrorKey;
+import org.meritbook.error.InputException;
+import org.meritbook.pipeline.StudyResults;
+import org.meritbook.revision.InputFile;
+import org.meritbook.study.FrontMatter;
+
+/**
+ * Renders a study's results as a validation dossier, HTML and PDF/A-3, from one view-model and one
+ * set of templates. A pure function of its inputs (the results, the attached files' bytes, the
+ * templates and the {@link RenderEnvironment}): the same inputs give byte-identical output.
+ */
+public final class DossierRenderer {
+    private final TemplateEngine templates;
+    private final DossierModelBuilder model;
+    private final PdfRenderer pdf;
+    private final PdfAFinisher finisher = new PdfAFinisher();
+    private final String meritbookVersion;
+
+    /** @param templateDir a lab's template folder ({@code --templates DIR}); empty for the defaults */
+    public DossierRenderer(Optional<Path> templateDir) {
+        this(templateDir, RenderEnvironment.current());
+    }
+
+    public DossierRenderer(Optional<Path> templateDir, RenderEnvironment environment) {
+        this.templates = new TemplateEngine(templateDir);
+        this.model = new DossierModelBuilder(environment, renderingLibraries());
+        this.pdf = new PdfRenderer(new EmbeddedFonts(templateDir));
+        this.meritbookVersion = Optional.ofNullable(DossierRenderer.class.getPackage().getImplementationVersion())
+                .orElse("development build");
+    }
+
+    /**
+     * @param results     the study's results
+     * @param resultsJson the results.json bytes written for this run (attached to the PDF)
+     */
+    public RenderedDossier render(StudyResults results, byte[] resultsJson) {
+        List<Attachment> plan = AttachmentPlan.of(results);
+        List<PdfAFinisher.Embedded> files = new ArrayList<>();
+        for (Attachment a : plan) {
+            files.add(new PdfAFinisher.Embedded(a, a.source() == null ? resultsJson.clone() : read(a, results)));
+        }
+        byte[] id = documentId(files);
+        String idHex = HexFormat.of().formatHex(id);
+        FrontMatter fm = results.study().frontMatter();
+        DocumentDate date = DocumentDate.of(fm);
+        DossierView view = model.build(results, files, date, idHex);
+
+        byte[] html = templates.render(view.forPdf(false)).getBytes(StandardCharsets.UTF_8);
+        String xhtml = templates.render(view);
+        String subject = "Validation dossier, method " + view.cover().method() + ", revision " + fm.revision();
+        PdfAFinisher.Metadata meta = new PdfAFinisher.Metadata(fm.title(), view.cover().preparedBy(), subject,
+                "meritbook " + meritbookVersion, date.calendar(), id);
+        byte[] pdfBytes = finisher.finish(pdf.render(xhtml), meta, files);
+        return new RenderedDossier(html, pdfBytes);
+    }
+
+    /** Reads an input to attach, checking it is still the file the run read (same SHA-256). */
+    private static byte[] read(Attachment a, StudyResults results) {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(a.source());
+        } catch (NoSuchFileException e) {
+            throw new InputException(ErrorKey.FILE_NOT_FOUND, a.source().toString(), "the input to attach",
+                    "no such file", "Restore the file, or re-run the study.");
+        } catch (IOException e) {
+            throw new InputException(ErrorKey.CORRUPT_FILE, a.source().toString(), "a readable input file",
+                    e.getClass().getSimpleName() + ": " + e.getMessage(), "Check the file's permissions.");
+        }
+        Optional<InputFile> listed = results.inputs().stream().filter(f -> f.alias().equals(a.alias())).findFirst();
+        if (listed.isPresent() && !listed.get().sha256().equalsIgnoreCase(sha256Hex(bytes))) {
+            throw new InputException(ErrorKey.CORRUPT_FILE, a.source().toString(),
+                    "the file as read by this run (SHA-256 " + listed.get().sha256() + ")",
+                    "different content (SHA-256 " + sha256Hex(bytes) + ")",
+                    "The file changed while the study ran; run the study again.");
+        }
+        return bytes;
+    }
+
+    /** 16 bytes of SHA-256 over every attached file's name and bytes, in attachment order. */
+    static byte[] documentId(List<PdfAFinisher.Embedded> files) {
+        MessageDigest md = sha256();
+        for (PdfAFinisher.Embedded e : files) {
+            byte[] name = e.attachment().name().getBytes(StandardCharsets.UTF_8);
+            md.update(lengthPrefix(name.length));
+            md.update(name);
+            md.update(lengthPrefix(e.bytes().length));
+            md.update(e.bytes());
+        }
+        return Arrays.copyOf(md.digest(), 16);
+    }
+
+    private static byte[] lengthPrefix(int n) {
+        return new byte[] {(byte) (n >>> 24), (byte) (n >>> 16), (byte) (n >>> 8), (byte) n};
+    }
+
+    static String sha256Hex(byte[] bytes) {
+        return HexFormat.of().formatHex(sha256().digest(bytes));
+    }
+
+    private static MessageDigest sha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is missing from this Java runtime", e);
+        }
+    }
+
+    /** The libraries that shape the dossier's output, with the versions actually on the classpath. */
+    private static List<SoftwareRow> renderingLibraries() {
+        return List.of(
+                new SoftwareRow("openhtmltopdf", mavenVersion("io.github.openhtmltopdf", "openhtmltopdf-pdfbox")),
+                new SoftwareRow("Apache PDFBox", org.apache.pdfbox.util.Version.getVersion()),
+                new SoftwareRow("Apache FreeMarker", freemarker.template.Configuration.getVersion().toString()),
+                new SoftwareRow("XChart", mavenVersion("org.knowm.xchart", "xchart")),
+                new SoftwareRow("commonmark-java", mavenVersion("org.commonmark", "commonmark")),
+                new SoftwareRow("DejaVu fonts (jasperreports-fonts)",
+                        mavenVersion("net.sf.jasperreports", "jasperreports-fonts")));
+    }
+
+    private static String mavenVersion(String group, String artifact) {
+        String path = "/META-INF/maven/" + group + "/" + artifact + "/pom.properties";
+        try (InputStream in = DossierRenderer.class.getResourceAsStream(path)) {
+            if (in == null) {
+                return "unknown";
+            }
+            Properties p = new Properties();
+            p.load(in);
+            return p.getProperty("version", "unknown");
+        } catch (IOException e) {
+            return "unknown";
+        }
+    }
+}

@@ -1,0 +1,85 @@
+package org.meritbook.dossier;
+
+import java.util.List;
+
+/**
+ * One analysis cell as the dossier shows it, in notebook order.
+ *
+ * @param number          chapter number, e.g. "2"
+ * @param anchor          link target
+ * @param id              the cell id
+ * @param kind            the analysis kind keyword
+ * @param title           the section title
+ * @param narrativeBefore the notebook's narrative leading to the cell (may be empty)
+ * @param narrativeAfter  narrative following the cell before the next heading (may be empty)
+ * @param settings        statistical choices in force
+ * @param table           the data table; {@code present} false when the analysis has none
+ * @param figures         figures in order
+ * @param results         results other than those already shown in the table
+ * @param verdicts        acceptance verdicts
+ * @param warnings        warnings in plain language
+ * @param available       false when the cell produced no result at all
+ */
+public record SectionView(String number, String anchor, String id, String kind, String title, Markup narrativeBefore,
+                          Markup narrativeAfter, List<SettingRow> settings, TableView table,
+                          List<FigureView> figures, List<ResultRow> results, List<VerdictRow> verdicts,
+                          List<String> warnings, boolean available) {
+    public SectionView {
+        settings = List.copyOf(settings);
+        figures = List.copyOf(figures);
+        results = List.copyOf(results);
+        verdicts = List.copyOf(verdicts);
+        warnings = List.copyOf(warnings);
+    }
+
+    public record SettingRow(String label, String value) {
+    }
+
+    /**
+     * @param present    false when the section has no data table
+     * @param caption    e.g. "Table 2.1 Data read (cell addresses below each value)"
+     * @param headers    column headers as in the workbook (the first column is the row label)
+     * @param rows       the rows; excluded rows stay, marked
+     * @param exclusions the reasons, keyed by their mark
+     */
+    public record TableView(boolean present, String caption, List<String> headers, List<TableRow> rows,
+                            List<Exclusion> exclusions) {
+        public TableView {
+            headers = List.copyOf(headers);
+            rows = List.copyOf(rows);
+            exclusions = List.copyOf(exclusions);
+        }
+    }
+
+    /** @param mark the exclusion mark ("E1"), or empty for a row used in the statistics */
+    public record TableRow(String label, List<CellView> cells, boolean excluded, String mark) {
+        public TableRow {
+            cells = List.copyOf(cells);
+        }
+    }
+
+    /** @param address the workbook cell, or empty for a computed value */
+    public record CellView(String text, String address, boolean computed) {
+    }
+
+    public record Exclusion(String mark, String row, String reason) {
+    }
+
+    public record FigureView(String number, String anchor, String caption, Markup svg) {
+    }
+
+    /**
+     * @param label       plain-language label
+     * @param name        results.json name
+     * @param value       value with unit
+     * @param uncertainty interval line or empty
+     * @param stepNumber  trail step number, e.g. "A.1.2"
+     * @param stepAnchor  link to the trail step
+     */
+    public record ResultRow(String label, String name, String value, String uncertainty, String stepNumber,
+                            String stepAnchor) {
+    }
+
+    public record VerdictRow(String characteristic, String rule, DossierView.VerdictView verdict) {
+    }
+}
