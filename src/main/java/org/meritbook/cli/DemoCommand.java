@@ -19,12 +19,19 @@ final class DemoCommand implements Callable<Integer> {
             description = "Output folder (default: ${DEFAULT-VALUE}).")
     Path out;
 
+    @Option(names = "--templates", paramLabel = "DIR",
+            description = "Use the dossier templates in DIR (a lab's own copy of report-templates/).")
+    Path templates;
+
+    @Option(names = "--force", description = "Replace an existing dossier of the same revision whose content differs.")
+    boolean force;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
-        return StudyOutput.runAndWrite(demoNotebook(), out, spec.commandLine().getOut());
+        return StudyOutput.runAndWrite(demoNotebook(), out, new StudyOutput.Options(templates, force), spec.commandLine().getOut());
     }
 
     /** The one notebook in demo-data/, found under the installation folder the launcher names. */

@@ -18,11 +18,18 @@ final class RunCommand implements Callable<Integer> {
             description = "Output folder (default: ${DEFAULT-VALUE}); results go to DIR/<study>/.")
     Path out;
 
+    @Option(names = "--templates", paramLabel = "DIR",
+            description = "Use the dossier templates in DIR (a lab's own copy of report-templates/).")
+    Path templates;
+
+    @Option(names = "--force", description = "Replace an existing dossier of the same revision whose content differs.")
+    boolean force;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
-        return StudyOutput.runAndWrite(notebook, out, spec.commandLine().getOut());
+        return StudyOutput.runAndWrite(notebook, out, new StudyOutput.Options(templates, force), spec.commandLine().getOut());
     }
 }

@@ -4,8 +4,12 @@ import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.criteria.Verdict;
+import org.meritbook.dossier.DossierRenderer;
+import org.meritbook.dossier.DossierWriter;
+import org.meritbook.dossier.RenderedDossier;
 import org.meritbook.pipeline.AtomicFiles;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
@@ -19,11 +23,17 @@ final class StudyOutput {
     private StudyOutput() {
     }
 
-    static int runAndWrite(Path notebook, Path outRoot, PrintWriter out) {
+    /**
+     * Runs the notebook, renders the dossier, and only then writes anything: a refused dossier
+     * (same revision, different content) leaves every earlier output as it was.
+     */
+    static int runAndWrite(Path notebook, Path outRoot, Options options, PrintWriter out) {
         StudyResults results = StudyRunner.withBuiltInAnalyses().run(notebook);
-        String base = baseName(notebook);
-        Path folder = outRoot.resolve(base);
+        Path folder = outRoot.resolve(baseName(notebook));
         byte[] json = ResultsJson.toBytes(results);
+        RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates())).render(results, json);
+        List<Path> written = new DossierWriter().write(dossier, folder, DossierWriter.baseName(results.study()),
+                options.force());
         AtomicFiles.write(folder.resolve("results.json"), json);
         AtomicFiles.write(folder.resolve("trail.md"), trail(results).getBytes(StandardCharsets.UTF_8));
         out.println("meritbook: " + results.study().frontMatter().title() + ", revision "
@@ -32,12 +42,20 @@ final class StudyOutput {
             out.println("  " + s.id() + ": " + s.quantities().size() + " quantities, " + s.warnings().size()
                     + " warning" + (s.warnings().size() == 1 ? "" : "s"));
         }
+        written.forEach(p -> out.println("  wrote " + p));
         out.println("  wrote " + folder.resolve("results.json"));
         out.println("  wrote " + folder.resolve("trail.md"));
         out.flush();
         boolean failed = results.sections().stream().flatMap(s -> s.verdicts().stream())
                 .anyMatch(v -> v.outcome() == Verdict.Outcome.FAIL);
         return failed ? Main.ACCEPTANCE_FAILED : Main.DONE;
+    }
+
+    /**
+     * @param templates a lab's own template folder, or null for the built-in templates
+     * @param force     replace a different dossier of the same revision
+     */
+    record Options(Path templates, boolean force) {
     }
 
     static String baseName(Path notebook) {

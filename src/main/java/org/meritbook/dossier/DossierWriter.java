@@ -2,10 +2,8 @@ package org.meritbook.dossier;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -14,6 +12,7 @@ import java.util.Optional;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.error.Problem;
+import org.meritbook.pipeline.AtomicFiles;
 import org.meritbook.study.Study;
 
 /**
@@ -86,17 +85,6 @@ public final class DossierWriter {
         if (Files.exists(target) && Arrays.equals(Files.readAllBytes(target), bytes)) {
             return;
         }
-        Path dir = target.toAbsolutePath().getParent();
-        Path tmp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".tmp");
-        try {
-            Files.write(tmp, bytes);
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        AtomicFiles.write(target, bytes);
     }
 }

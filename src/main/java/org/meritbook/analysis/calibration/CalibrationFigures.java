@@ -56,9 +56,9 @@ final class CalibrationFigures {
         addExcluded(series, data, false, fit);
         series.add(new Series("Fitted line", Style.LINE, grid, line));
         series.add(new Series("95 % confidence band", Style.DASHED, grid, cLow));
-        series.add(new Series("95 % confidence band (upper)", Style.DASHED, grid, cHigh));
+        series.add(new Series("95 % confidence band", Style.DASHED, grid, cHigh));
         series.add(new Series("95 % prediction band", Style.DOTTED, grid, pLow));
-        series.add(new Series("95 % prediction band (upper)", Style.DOTTED, grid, pHigh));
+        series.add(new Series("95 % prediction band", Style.DOTTED, grid, pHigh));
         return new FigureSpec(id + ".fit", "Calibration: standards, fitted line and 95 % bands", xTitle, yTitle,
                 series);
     }
@@ -69,9 +69,10 @@ final class CalibrationFigures {
         List<Series> series = new ArrayList<>();
         series.add(new Series("Standardized residuals", Style.POINTS, x, fit.standardizedResiduals()));
         series.add(new Series("Zero", Style.REFERENCE, span, new double[] {0, 0}));
-        series.add(new Series("±" + (int) CalibrationAnalysis.RESIDUAL_FLAG + " (flag)", Style.DOTTED, span,
+        String flag = "±" + (int) CalibrationAnalysis.RESIDUAL_FLAG + " (flagged beyond)";
+        series.add(new Series(flag, Style.DOTTED, span,
                 new double[] {CalibrationAnalysis.RESIDUAL_FLAG, CalibrationAnalysis.RESIDUAL_FLAG}));
-        series.add(new Series("−" + (int) CalibrationAnalysis.RESIDUAL_FLAG, Style.DOTTED, span,
+        series.add(new Series(flag, Style.DOTTED, span,
                 new double[] {-CalibrationAnalysis.RESIDUAL_FLAG, -CalibrationAnalysis.RESIDUAL_FLAG}));
         return new FigureSpec(id + ".residuals", "Standardized residuals against concentration", xTitle,
                 "Standardized residual e·√w / s(y/x)", series);
@@ -94,8 +95,9 @@ final class CalibrationFigures {
                 ds.stream().mapToDouble(Double::doubleValue).toArray()));
         addExcluded(series, data, true, fit);
         series.add(new Series("Zero", Style.REFERENCE, span, new double[] {0, 0}));
-        series.add(new Series("±" + (int) band + " % band", Style.DOTTED, span, new double[] {band, band}));
-        series.add(new Series("−" + (int) band + " %", Style.DOTTED, span, new double[] {-band, -band}));
+        String tolerance = "±" + (int) band + " % (default, confirm locally)";
+        series.add(new Series(tolerance, Style.DOTTED, span, new double[] {band, band}));
+        series.add(new Series(tolerance, Style.DOTTED, span, new double[] {-band, -band}));
         return new FigureSpec(id + ".deviation", "Back-calculated concentration: % deviation from nominal", xTitle,
                 "Deviation (%)", series);
     }
