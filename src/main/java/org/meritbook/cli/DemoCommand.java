@@ -12,8 +12,8 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
 /** {@code meritbook demo}: run the bundled demo study in demo-data/. */
-@Command(name = "demo", mixinStandardHelpOptions = true,
-        description = "Run the bundled demo study (demo-data/) and write its results into OUT/<study>/.")
+@Command(name = "demo", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Run the bundled demo study (demo-data/) and write its results into DIR/<study>/ (-o).")
 final class DemoCommand implements Callable<Integer> {
     @Option(names = {"-o", "--out"}, paramLabel = "DIR", defaultValue = "out",
             description = "Output folder (default: ${DEFAULT-VALUE}).")

@@ -8,8 +8,8 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** {@code meritbook run STUDY.md}: compute and write results.json, the trail and the dossier. */
-@Command(name = "run", mixinStandardHelpOptions = true,
-        description = "Run a study notebook and write its results into OUT/<study>/.")
+@Command(name = "run", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Run a study notebook and write its results into DIR/<study>/ (-o).")
 final class RunCommand implements Callable<Integer> {
     @Parameters(paramLabel = "STUDY.md", description = "The study notebook.")
     Path notebook;
