@@ -65,11 +65,15 @@ public record SectionView(String number, String anchor, String id, String kind, 
 
     /**
      * @param header   the header as in the workbook (with unit)
+     * @param name     the header without a trailing unit in parentheses
+     * @param unit     that unit with its parentheses, e.g. "(mg/L)", or empty
      * @param note     the sheet column letter ("C"), "computed", or empty
      * @param computed true for a column of computed values
      * @param text     true for a column of free text (it may wrap and takes the spare width)
+     * @param shortName  true when the name is short enough to keep on one line
      */
-    public record ColumnView(String header, String note, boolean computed, boolean text) {
+    public record ColumnView(String header, String name, String unit, String note, boolean computed, boolean text,
+                             boolean shortName) {
     }
 
     /**

@@ -24,6 +24,8 @@ import org.meritbook.figures.SvgChartRenderer;
 
 /** Builds one {@link SectionView} from a section result: table, figures, results, verdicts, warnings. */
 final class SectionViewBuilder {
+    /** A column name up to this long stays on one line in the header; a longer one wraps at its spaces. */
+    private static final int SHORT_HEADER = 16;
     private final DisplayFormatter format;
     private final SvgChartRenderer charts;
     private final TrailViewBuilder trail;
@@ -96,7 +98,12 @@ final class SectionViewBuilder {
         List<ColumnView> columns = new ArrayList<>();
         for (int j = 0; j < t.headers().size(); j++) {
             String note = grid.computed(j) ? "computed" : grid.compact() ? grid.letter(j) : "";
-            columns.add(new ColumnView(t.headers().get(j), note, grid.computed(j), grid.text(j)));
+            String header = t.headers().get(j) == null ? "" : t.headers().get(j);
+            int unit = header.lastIndexOf(" (");
+            boolean hasUnit = unit > 0 && header.endsWith(")");
+            String name = hasUnit ? header.substring(0, unit) : header;
+            columns.add(new ColumnView(header, name, hasUnit ? header.substring(unit + 1) : "", note, grid.computed(j),
+                    grid.text(j), name.length() <= SHORT_HEADER));
         }
         String namedBy = grid.labelColumn();
         boolean labels = !grid.compact() || namedBy.isEmpty();
