@@ -157,6 +157,7 @@ final class DossierModelBuilder {
                     case PASS -> pass++;
                     case FAIL -> fail++;
                     case NOT_EVALUABLE -> na++;
+                    default -> throw new IllegalStateException("outcome " + x.outcome() + " is not counted");
                 }
             }
         }
