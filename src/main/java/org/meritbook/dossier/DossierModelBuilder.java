@@ -69,7 +69,7 @@ final class DossierModelBuilder {
             SectionResult r = byId.get(cell.id());
             SectionView view = r == null
                     ? new SectionView(number, anchor, cell.id(), cell.kind().keyword(), cell.title(), before, after,
-                    List.of(), new SectionView.TableView(false, "", List.of(), List.of(), List.of()), List.of(),
+                    List.of(), SectionView.TableView.none(), List.of(),
                     List.of(), List.of(), List.of("This analysis produced no result."), false)
                     : sectionBuilder.build(number, anchor, r, before, after);
             sections.add(view);
@@ -157,6 +157,7 @@ final class DossierModelBuilder {
                     case PASS -> pass++;
                     case FAIL -> fail++;
                     case NOT_EVALUABLE -> na++;
+                    default -> throw new IllegalStateException("outcome " + x.outcome() + " is not counted");
                 }
             }
         }

@@ -96,9 +96,53 @@ public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions,
     public record SoftwareRow(String name, String version) {
     }
 
-    public record TrailGroup(String number, String title, String anchor, List<StepView> steps) {
+    /**
+     * One section's part of the calculation trail.
+     *
+     * @param steps  every step in computation order, each complete (for lab templates that list steps one by one)
+     * @param blocks the same steps as laid out: single steps, and runs of steps that share a formula and
+     *               input names as one table; every step appears in exactly one block
+     */
+    public record TrailGroup(String number, String title, String anchor, List<StepView> steps, List<TrailBlock> blocks) {
         public TrailGroup {
             steps = List.copyOf(steps);
+            blocks = List.copyOf(blocks);
+        }
+    }
+
+    /**
+     * A piece of the trail as laid out: one step in full ({@code compact} false: {@code step}), or
+     * steps sharing one formula and the same input names as one table ({@code compact} true: one row
+     * per step; {@code step} is then the first of them).
+     *
+     * @param label   what the steps compute, without the part that differs per step
+     * @param formula the shared formula
+     * @param method  the shared method, or empty
+     * @param common  inputs with the same value and source in every step, given once
+     * @param columns names of the inputs that differ between steps, one column each
+     * @param points  true when the rows carry a per-step label ({@link CompactRow#point()})
+     * @param rows    one per step, in computation order
+     */
+    public record TrailBlock(boolean compact, StepView step, String label, String formula, String method,
+                             List<StepInputRow> common, List<String> columns, boolean points, List<CompactRow> rows) {
+        public TrailBlock {
+            common = List.copyOf(common);
+            columns = List.copyOf(columns);
+            rows = List.copyOf(rows);
+        }
+    }
+
+    /**
+     * One step as a row of a compact trail table.
+     *
+     * @param point  the part of the step's label that differs from its neighbours' (e.g. the cell), or empty
+     * @param inputs the differing inputs, in {@link TrailBlock#columns()} order
+     * @param value  the result with unit
+     */
+    public record CompactRow(String number, String anchor, String id, String point, List<StepInputRow> inputs,
+                             String value) {
+        public CompactRow {
+            inputs = List.copyOf(inputs);
         }
     }
 
@@ -110,16 +154,48 @@ public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions,
      * @param formula formula in plain notation
      * @param method  published method or reference, or empty
      * @param value   result with unit (six significant figures)
-     * @param inputs  named inputs with sources
+     * @param inputs  named inputs with sources (all of them)
+     * @param indexed indexed inputs (x1, y1, w1, x2 …) as a table by index; {@code present} false when the
+     *                step has none worth tabulating
+     * @param others  the inputs not in {@code indexed} (all inputs when it is absent)
      */
     public record StepView(String number, String anchor, String id, String label, String formula, String method,
-                           String value, List<StepInputRow> inputs) {
+                           String value, List<StepInputRow> inputs, IndexedInputs indexed, List<StepInputRow> others) {
         public StepView {
             inputs = List.copyOf(inputs);
+            others = List.copyOf(others);
         }
     }
 
-    /** @param sourceAnchor link to the step the input came from, or empty for a cell or a notebook line */
-    public record StepInputRow(String name, String value, String source, String sourceAnchor) {
+    /**
+     * @param sourceAnchor link to the step the input came from, or empty for a cell or a notebook line
+     * @param sourceLabel  the source as a short link text: the step's number ("A.1.3") for a step, else the source
+     */
+    public record StepInputRow(String name, String value, String source, String sourceAnchor, String sourceLabel) {
+    }
+
+    /**
+     * Inputs named by a symbol and an index ({@code x12}, {@code y[12]}), one row per index and one
+     * column per symbol.
+     */
+    public record IndexedInputs(boolean present, List<IndexColumn> columns, List<IndexRow> rows) {
+        public IndexedInputs {
+            columns = List.copyOf(columns);
+            rows = List.copyOf(rows);
+        }
+    }
+
+    /** @param source the source shared by every value of the column, or empty when each cell has its own */
+    public record IndexColumn(String name, String source, String sourceAnchor) {
+    }
+
+    public record IndexRow(String index, List<IndexCell> cells) {
+        public IndexRow {
+            cells = List.copyOf(cells);
+        }
+    }
+
+    /** @param value empty when the index has no input of this symbol */
+    public record IndexCell(String value, String source, String sourceAnchor) {
     }
 }

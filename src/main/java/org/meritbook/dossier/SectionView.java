@@ -36,30 +36,65 @@ public record SectionView(String number, String anchor, String id, String kind, 
     }
 
     /**
+     * A data table. When every raw column holds one sheet column and every row one sheet row, a value's
+     * cell is told by its column's letter and its row's number ({@code compact}); otherwise each value
+     * carries its own address.
+     *
      * @param present    false when the section has no data table
-     * @param caption    e.g. "Table 2.1 Data read (cell addresses below each value)"
-     * @param headers    column headers as in the workbook (the first column is the row label)
+     * @param caption    e.g. "Table 2.1 Data as read from Calibration!A9:F31 …"
+     * @param headers    column headers as in the workbook (without the row and point columns)
+     * @param columns    the same columns with their sheet letter or "computed" note
+     * @param rowNumbers true when the first column shows sheet row numbers
+     * @param labels     true when a column shows the rows' point labels
      * @param rows       the rows; excluded rows stay, marked
      * @param exclusions the reasons, keyed by their mark
      */
-    public record TableView(boolean present, String caption, List<String> headers, List<TableRow> rows,
-                            List<Exclusion> exclusions) {
+    public record TableView(boolean present, String caption, List<String> headers, List<ColumnView> columns,
+                            boolean rowNumbers, boolean labels, List<TableRow> rows, List<Exclusion> exclusions) {
         public TableView {
             headers = List.copyOf(headers);
+            columns = List.copyOf(columns);
             rows = List.copyOf(rows);
             exclusions = List.copyOf(exclusions);
         }
+
+        static TableView none() {
+            return new TableView(false, "", List.of(), List.of(), false, false, List.of(), List.of());
+        }
     }
 
-    /** @param mark the exclusion mark ("E1"), or empty for a row used in the statistics */
-    public record TableRow(String label, List<CellView> cells, boolean excluded, String mark) {
+    /**
+     * @param header   the header as in the workbook (with unit)
+     * @param name     the header without a trailing unit in parentheses
+     * @param unit     that unit with its parentheses, e.g. "(mg/L)", or empty
+     * @param note     the sheet column letter ("C"), "computed", or empty
+     * @param computed true for a column of computed values
+     * @param text     true for a column of free text (it may wrap and takes the spare width)
+     * @param shortName  true when the name is short enough to keep on one line
+     */
+    public record ColumnView(String header, String name, String unit, String note, boolean computed, boolean text,
+                             boolean shortName) {
+    }
+
+    /**
+     * @param label    the point's label
+     * @param sheetRow the sheet row number, or empty when the table is not one row per sheet row
+     * @param mark     the exclusion mark ("E1"), or empty for a row used in the statistics
+     */
+    public record TableRow(String label, String sheetRow, List<CellView> cells, boolean excluded, String mark) {
         public TableRow {
             cells = List.copyOf(cells);
         }
     }
 
-    /** @param address the workbook cell, or empty for a computed value */
-    public record CellView(String text, String address, boolean computed) {
+    /**
+     * @param address     the workbook cell, or empty for a computed value
+     * @param showAddress true when the address must be printed with the value (no column letter and row tell it)
+     * @param tooltip     the cell address, or for a computed value its trail step
+     * @param stepAnchor  link to the trail step of a computed value, or empty
+     */
+    public record CellView(String text, String address, boolean computed, boolean showAddress, String tooltip,
+                           String stepAnchor) {
     }
 
     public record Exclusion(String mark, String row, String reason) {

@@ -11,6 +11,7 @@ import org.meritbook.analysis.Setting;
 import org.meritbook.analysis.TableCell;
 import org.meritbook.criteria.Verdict;
 import org.meritbook.dossier.SectionView.CellView;
+import org.meritbook.dossier.SectionView.ColumnView;
 import org.meritbook.dossier.SectionView.Exclusion;
 import org.meritbook.dossier.SectionView.FigureView;
 import org.meritbook.dossier.SectionView.ResultRow;
@@ -23,6 +24,8 @@ import org.meritbook.figures.SvgChartRenderer;
 
 /** Builds one {@link SectionView} from a section result: table, figures, results, verdicts, warnings. */
 final class SectionViewBuilder {
+    /** A column name up to this long stays on one line in the header; a longer one wraps at its spaces. */
+    private static final int SHORT_HEADER = 16;
     private final DisplayFormatter format;
     private final SvgChartRenderer charts;
     private final TrailViewBuilder trail;
@@ -72,34 +75,63 @@ final class SectionViewBuilder {
     private TableView table(String number, SectionResult r, Set<String> inTable) {
         DataTable t = r.table();
         if (t == null) {
-            return new TableView(false, "", List.of(), List.of(), List.of());
+            return TableView.none();
         }
+        CellGrid grid = CellGrid.of(t);
         List<TableRow> rows = new ArrayList<>();
         List<Exclusion> exclusions = new ArrayList<>();
-        for (DataTable.Row row : t.rows()) {
+        for (int i = 0; i < t.rows().size(); i++) {
+            DataTable.Row row = t.rows().get(i);
             List<CellView> cells = new ArrayList<>();
-            for (TableCell c : row.cells()) {
-                cells.add(cell(r, c, inTable));
+            for (int j = 0; j < row.cells().size(); j++) {
+                cells.add(cell(r, row.cells().get(j), grid.addressShown(j), inTable));
             }
+            String label = row.label() == null ? "" : row.label();
             String mark = "";
             if (row.excluded()) {
                 mark = "E" + (exclusions.size() + 1);
-                exclusions.add(new Exclusion(mark, row.label(), row.exclusionReason()));
+                String where = grid.compact() ? "Point " + label + " (sheet row " + grid.row(i) + ")" : "Row " + label;
+                exclusions.add(new Exclusion(mark, where, row.exclusionReason()));
             }
-            rows.add(new TableRow(row.label() == null ? "" : row.label(), cells, row.excluded(), mark));
+            rows.add(new TableRow(label, grid.compact() ? grid.row(i) : "", cells, row.excluded(), mark));
         }
-        String caption = "Table " + number + ".1 Data as read, with each value's workbook cell"
-                + (exclusions.isEmpty() ? "" : "; rows marked E are excluded from the statistics");
-        return new TableView(true, caption, t.headers(), rows, exclusions);
+        List<ColumnView> columns = new ArrayList<>();
+        for (int j = 0; j < t.headers().size(); j++) {
+            String note = grid.computed(j) ? "computed" : grid.compact() ? grid.letter(j) : "";
+            String header = t.headers().get(j) == null ? "" : t.headers().get(j);
+            int unit = header.lastIndexOf(" (");
+            boolean hasUnit = unit > 0 && header.endsWith(")");
+            String name = hasUnit ? header.substring(0, unit) : header;
+            columns.add(new ColumnView(header, name, hasUnit ? header.substring(unit + 1) : "", note, grid.computed(j),
+                    grid.text(j), name.length() <= SHORT_HEADER));
+        }
+        String namedBy = grid.labelColumn();
+        boolean labels = !grid.compact() || namedBy.isEmpty();
+        StringBuilder caption = new StringBuilder("Table " + number + ".1 ");
+        if (grid.compact()) {
+            caption.append("Data as read from ").append(grid.range())
+                    .append(". A value's cell is its column letter (under the header) and its sheet row (first column)");
+            if (!namedBy.isEmpty()) {
+                caption.append("; points are named by their column ").append(namedBy).append(" cell");
+            }
+        } else {
+            caption.append("Data as read, with each value's workbook cell below it");
+        }
+        caption.append(exclusions.isEmpty() ? "." : ". Rows marked E are excluded from the statistics.");
+        return new TableView(true, caption.toString(), t.headers(), columns, grid.compact(), labels, rows, exclusions);
     }
 
-    private CellView cell(SectionResult r, TableCell c, Set<String> inTable) {
+    private CellView cell(SectionResult r, TableCell c, boolean showAddress, Set<String> inTable) {
         if (c.quantity() != null) {
             Quantity q = r.quantity(c.quantity()).orElseThrow(() -> new IllegalArgumentException(
                     "section " + r.id() + ": table cell refers to quantity " + c.quantity() + ", which it lacks"));
             inTable.add(q.name());
-            return new CellView(format.quantity(q).value(), "", true);
+            TrailViewBuilder.StepRef ref = trail.ref(q.stepId());
+            String tip = ref.number().isEmpty() ? "computed" : "computed, trail step " + ref.number();
+            return new CellView(format.quantity(q).value(), "", true, false, tip, ref.anchor());
         }
-        return new CellView(c.raw() == null ? "" : c.raw(), c.address() == null ? "" : c.address(), false);
+        String address = c.address() == null ? "" : c.address();
+        return new CellView(c.raw() == null ? "" : c.raw(), address, false, showAddress && !address.isEmpty(), address,
+                "");
     }
 }

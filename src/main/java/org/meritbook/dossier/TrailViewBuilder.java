@@ -53,19 +53,26 @@ final class TrailViewBuilder {
             SectionResult section = sections.get(s);
             List<StepView> steps = new ArrayList<>();
             for (Step step : section.steps()) {
-                StepRef ref = refs.get(step.id());
-                List<StepInputRow> inputs = new ArrayList<>();
-                for (StepInput in : step.inputs()) {
-                    String value = in.text() != null ? in.text() : format.trailValue(in.value(), in.unit());
-                    inputs.add(new StepInputRow(in.name(), value, in.source(), ref(in.source()).anchor()));
-                }
-                steps.add(new StepView(ref.number(), ref.anchor(), step.id(), step.label(), step.formula(),
-                        step.method() == null ? "" : step.method(), format.trailValue(step.value(), step.unit()),
-                        inputs));
+                steps.add(view(step));
             }
             out.add(new TrailGroup(letter + "." + (s + 1), section.title() == null ? section.id() : section.title(),
-                    "trail-" + (s + 1), steps));
+                    "trail-" + (s + 1), steps, TrailLayout.blocks(steps)));
         }
         return out;
+    }
+
+    private StepView view(Step step) {
+        StepRef ref = refs.get(step.id());
+        List<StepInputRow> inputs = new ArrayList<>();
+        for (StepInput in : step.inputs()) {
+            String value = in.text() != null ? in.text() : format.trailValue(in.value(), in.unit());
+            StepRef source = ref(in.source());
+            inputs.add(new StepInputRow(in.name(), value, in.source(), source.anchor(),
+                    source.number().isEmpty() ? in.source() : source.number()));
+        }
+        TrailLayout.Indexed indexed = TrailLayout.indexed(inputs);
+        return new StepView(ref.number(), ref.anchor(), step.id(), step.label(), step.formula(),
+                step.method() == null ? "" : step.method(), format.trailValue(step.value(), step.unit()), inputs,
+                indexed.table(), indexed.others());
     }
 }

@@ -1,6 +1,11 @@
 package org.meritbook.figures;
 
+import de.erichseifert.vectorgraphics2d.VectorGraphics2D;
+import de.erichseifert.vectorgraphics2d.svg.SVGProcessor;
+import de.erichseifert.vectorgraphics2d.util.PageSize;
+import java.awt.Color;
 import java.awt.Font;
+import java.awt.geom.Rectangle2D;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -8,14 +13,13 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
 import java.util.HashSet;
+import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import org.knowm.xchart.VectorGraphicsEncoder;
-import org.knowm.xchart.VectorGraphicsEncoder.VectorGraphicsFormat;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.Styler;
 import org.knowm.xchart.style.XYStyler;
 
 /**
@@ -25,16 +29,29 @@ import org.knowm.xchart.style.XYStyler;
  * glyph outlines (XChart's way), so the SVG depends on no installed or embedded font.
  */
 public final class SvgChartRenderer {
-    /** Drawing size in CSS pixels; the dossier scales the SVG to the text width. */
+    /** Drawing size in CSS pixels (plot and legend together); the dossier scales the SVG to the text width. */
     public static final int WIDTH = 640;
-    public static final int HEIGHT = 380;
+    public static final int HEIGHT = 400;
+    /** Margin left and right of the legend box, and space between the plot and the legend. */
+    private static final int LEGEND_MARGIN = 8;
+    private static final int MARKER_SIZE = 7;
 
     public String render(FigureSpec spec) {
-        XYChart chart = new XYChart(WIDTH, HEIGHT);
+        List<Legend.Entry> entries = new ArrayList<>();
+        Set<String> legendNames = new HashSet<>();
+        for (FigureSpec.Series s : spec.series()) {
+            String name = nullToEmpty(s.name());
+            if (s.x().length > 0 && legendNames.add(name) && !name.isBlank()) {
+                entries.add(new Legend.Entry(name, Palette.of(s.style())));
+            }
+        }
+        Legend legend = new Legend(entries, WIDTH - 2.0 * LEGEND_MARGIN);
+        int chartHeight = legend.isEmpty() ? HEIGHT : (int) (HEIGHT - legend.height() - LEGEND_MARGIN);
+        XYChart chart = new XYChart(WIDTH, chartHeight);
         chart.setXAxisTitle(nullToEmpty(spec.xTitle()));
         chart.setYAxisTitle(nullToEmpty(spec.yTitle()));
         style(chart.getStyler());
-        Set<String> legendNames = new HashSet<>();
+        Set<String> seriesNames = new HashSet<>();
         int index = 0;
         for (FigureSpec.Series s : spec.series()) {
             index++;
@@ -42,10 +59,8 @@ public final class SvgChartRenderer {
                 continue; // XChart cannot draw an empty series; an empty one carries nothing to see
             }
             String name = nullToEmpty(s.name());
-            boolean firstOfName = legendNames.add(name);
-            // XChart requires unique series names; repeats (upper/lower band) keep one legend entry.
-            XYSeries series = chart.addSeries(firstOfName ? name : name + " #" + index, s.x(), s.y());
-            series.setShowInLegend(firstOfName && !name.isBlank());
+            // XChart requires unique series names; repeats (upper/lower band) share one legend entry.
+            XYSeries series = chart.addSeries(seriesNames.add(name) ? name : name + " #" + index, s.x(), s.y());
             Palette p = Palette.of(s.style());
             series.setXYSeriesRenderStyle(p.isScatter()
                     ? XYSeries.XYSeriesRenderStyle.Scatter : XYSeries.XYSeriesRenderStyle.Line);
@@ -62,7 +77,18 @@ public final class SvgChartRenderer {
         String prefix = "fig-" + spec.id().replaceAll("[^A-Za-z0-9_-]", "-");
         String title = nullToEmpty(spec.title()) + " — x: " + nullToEmpty(spec.xTitle()) + "; y: "
                 + nullToEmpty(spec.yTitle());
-        return SvgTidy.tidy(toSvg(chart), prefix, title);
+        VectorGraphics2D plot = new VectorGraphics2D();
+        chart.paint(plot, WIDTH, chartHeight);
+        plot.setColor(Color.WHITE);
+        plot.fill(new Rectangle2D.Double(0, chartHeight, WIDTH, HEIGHT - chartHeight));
+        String svg = toSvg(plot);
+        if (!legend.isEmpty()) {
+            VectorGraphics2D key = new VectorGraphics2D();
+            legend.paint(key, Math.floor((WIDTH - legend.width()) / 2), chartHeight + LEGEND_MARGIN / 2.0, MARKER_SIZE);
+            int close = svg.lastIndexOf("</svg>");
+            svg = svg.substring(0, close) + "<g class=\"legend\">\n" + inner(toSvg(key)) + "\n</g>\n" + svg.substring(close);
+        }
+        return SvgTidy.tidy(svg, prefix, title);
     }
 
     private static void style(XYStyler st) {
@@ -70,19 +96,16 @@ public final class SvgChartRenderer {
         st.setxAxisTickLabelsFormattingFunction(SvgChartRenderer::tick);
         st.setyAxisTickLabelsFormattingFunction(SvgChartRenderer::tick);
         st.setChartTitleVisible(false); // the dossier prints the caption under the figure
-        st.setChartBackgroundColor(java.awt.Color.WHITE);
-        st.setPlotBackgroundColor(java.awt.Color.WHITE);
+        st.setChartBackgroundColor(Color.WHITE);
+        st.setPlotBackgroundColor(Color.WHITE);
         st.setPlotBorderVisible(true);
         st.setPlotBorderColor(Palette.FRAME);
         st.setPlotGridLinesColor(Palette.GRID);
         st.setChartFontColor(Palette.INK);
         st.setAxisTickLabelsColor(Palette.INK);
         st.setAxisTickMarksColor(Palette.FRAME);
-        st.setLegendBorderColor(Palette.FRAME);
-        st.setLegendPosition(Styler.LegendPosition.OutsideS);
-        st.setLegendLayout(Styler.LegendLayout.Horizontal);
-        st.setLegendSeriesLineLength(28);
-        st.setMarkerSize(7);
+        st.setLegendVisible(false); // drawn by Legend, which makes it fit
+        st.setMarkerSize(MARKER_SIZE);
         st.setChartPadding(8);
         st.setPlotMargin(4);
         st.setAntiAlias(true);
@@ -91,15 +114,14 @@ public final class SvgChartRenderer {
         st.setChartTitleFont(ChartFont.of(Font.BOLD, 12f));
         st.setAxisTitleFont(ChartFont.of(Font.PLAIN, 11.5f));
         st.setAxisTickLabelsFont(ChartFont.of(Font.PLAIN, 10f));
-        st.setLegendFont(ChartFont.of(Font.PLAIN, 10f));
         st.setAnnotationTextFont(plain);
         st.setToolTipsEnabled(false);
     }
 
-    private static String toSvg(XYChart chart) {
+    private static String toSvg(VectorGraphics2D g) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         try {
-            VectorGraphicsEncoder.saveVectorGraphic(chart, out, VectorGraphicsFormat.SVG);
+            new SVGProcessor().getDocument(g.getCommands(), new PageSize(0, 0, WIDTH, HEIGHT)).writeTo(out);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -109,6 +131,11 @@ public final class SvgChartRenderer {
             throw new IllegalStateException("the SVG export produced no <svg> element");
         }
         return svg.substring(start).strip();
+    }
+
+    /** The content of an {@code <svg>} element, without the element itself. */
+    private static String inner(String svg) {
+        return svg.substring(svg.indexOf('>') + 1, svg.lastIndexOf("</svg>")).strip();
     }
 
     /** Tick labels: at most ten significant digits, no digit grouping, a true minus sign. */

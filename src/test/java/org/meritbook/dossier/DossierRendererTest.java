@@ -94,9 +94,68 @@ class DossierRendererTest {
         assertTrue(text.contains("Not evaluable"), "verdict without a quantity");
         assertTrue(text.contains("support, and do not replace, the laboratory's own review"), "caution");
         assertTrue(text(plain.pdf(), true).contains("Page 3 of "), "running footer");
-        assertTrue(text.contains("Calibration!C21"), "cell addresses");
+        assertTrue(text.contains("Calibration!C21"), "cell addresses (in the trail)");
+        // The data table tells cells by column letter and sheet row; the caption names the block.
+        assertTrue(text.contains("Data as read from Calibration!A5:C25"), "data range in the caption");
         assertTrue(text.contains("test fixture") && !text.contains("\uFB01"), "no ligature glyphs in the text layer");
         assertTrue(text.contains("Injection failure recorded in the run log"), "exclusion reason");
+    }
+
+    @Test
+    void theDataTableTellsEachCellByColumnLetterAndSheetRowAndKeepsTheAddressAsATooltip() throws IOException {
+        org.w3c.dom.Document dom = PdfRenderer.parse(new String(plain.html(), StandardCharsets.UTF_8));
+        org.w3c.dom.Element table = elementsWithClass(dom, "table", "data").get(0);
+        List<String> notes = elementsWithClass(table, "span", "col-note").stream().map(e -> e.getTextContent()).toList();
+        assertEquals(List.of("A", "B", "C", "computed", "computed"), notes, "column letters, computed columns marked");
+        assertEquals(0, elementsWithClass(table, "span", "addr").size(), "no address printed in every cell");
+        List<String> titles = new ArrayList<>();
+        org.w3c.dom.NodeList tds = table.getElementsByTagNameNS("*", "td");
+        for (int i = 0; i < tds.getLength(); i++) {
+            titles.add(((org.w3c.dom.Element) tds.item(i)).getAttribute("title"));
+        }
+        assertTrue(titles.contains("Calibration!C21"), "the excluded point's cell as a tooltip");
+        assertTrue(titles.stream().anyMatch(t -> t.startsWith("computed, trail step A.1.")), "computed cells name their step");
+        String rowCell = elementsWithClass(table, "td", "c-row").get(16).getTextContent();
+        assertEquals("21E1", rowCell.replaceAll("\\s+", ""), "sheet row 21 carries the exclusion mark");
+    }
+
+    @Test
+    void everyTrailStepIdIsInThePdfAndEveryLinkLandsOnAnAnchor() throws IOException {
+        String text = text(plain.pdf());
+        com.fasterxml.jackson.databind.JsonNode json = new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(org.meritbook.revision.ResultsJson.toBytes(DossierFixtures.results(shared)));
+        List<String> missing = new ArrayList<>();
+        int steps = 0;
+        for (com.fasterxml.jackson.databind.JsonNode step : json.get("trail")) {
+            steps++;
+            String id = step.get("id").asText();
+            if (!text.contains(id)) {
+                missing.add(id);
+            }
+        }
+        assertTrue(steps > 40, "the fixture has per-point steps: " + steps);
+        assertEquals(List.of(), missing, "step ids missing from the PDF text");
+
+        String html = new String(plain.html(), StandardCharsets.UTF_8);
+        java.util.Set<String> ids = new java.util.HashSet<>();
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile(" id=\"([^\"]+)\"").matcher(html);
+        while (m.find()) {
+            ids.add(m.group(1));
+        }
+        m = java.util.regex.Pattern.compile("href=\"#([^\"]+)\"").matcher(html);
+        List<String> dangling = new ArrayList<>();
+        int links = 0;
+        while (m.find()) {
+            links++;
+            if (!ids.contains(m.group(1))) {
+                dangling.add(m.group(1));
+            }
+        }
+        assertTrue(links > 80, "results, computed cells and inputs link to their steps: " + links);
+        assertEquals(List.of(), dangling, "links without a target");
+        // The per-point steps share a formula: one compact table each, not a block per step.
+        assertEquals(2, html.split("class=\"step step-table\"", -1).length - 1, "compact step tables");
+        assertTrue(html.contains("class=\"grid indexed\""), "x[i], y[i] inputs as a table by index");
     }
 
     @Test
@@ -163,6 +222,19 @@ class DossierRendererTest {
         IllegalStateException e = assertThrows(IllegalStateException.class,
                 () -> new DossierRenderer(Optional.of(lab), PINNED).render(results, RESULTS_JSON));
         assertTrue(e.getMessage().contains("logoPath"), e.getMessage());
+    }
+
+    private static List<org.w3c.dom.Element> elementsWithClass(org.w3c.dom.Node root, String tag, String css) {
+        org.w3c.dom.NodeList all = root instanceof org.w3c.dom.Document d ? d.getElementsByTagNameNS("*", tag)
+                : ((org.w3c.dom.Element) root).getElementsByTagNameNS("*", tag);
+        List<org.w3c.dom.Element> out = new ArrayList<>();
+        for (int i = 0; i < all.getLength(); i++) {
+            org.w3c.dom.Element e = (org.w3c.dom.Element) all.item(i);
+            if (List.of(e.getAttribute("class").split(" ")).contains(css)) {
+                out.add(e);
+            }
+        }
+        return out;
     }
 
     static String text(byte[] pdf) throws IOException {

@@ -67,6 +67,136 @@ class SvgChartRendererTest {
         assertThrows(IllegalArgumentException.class, () -> renderer.render(empty));
     }
 
+    /** Invented series names, long enough that one legend row cannot hold them all. */
+    private static FigureSpec crowded() {
+        double[] x = {0, 1, 2, 3};
+        List<FigureSpec.Series> series = new java.util.ArrayList<>();
+        series.add(new FigureSpec.Series("Standards used in the fit", FigureSpec.Style.POINTS, x, new double[] {0, 1, 2, 3}));
+        series.add(new FigureSpec.Series("Excluded standards (see the reasons listed below the data table)",
+                FigureSpec.Style.EXCLUDED_POINTS, new double[] {1.5}, new double[] {1}));
+        series.add(new FigureSpec.Series("Fitted straight line", FigureSpec.Style.LINE, x, new double[] {0, 1, 2, 3}));
+        series.add(new FigureSpec.Series("95 % confidence band of the fitted line", FigureSpec.Style.DASHED, x,
+                new double[] {-0.2, 0.9, 1.9, 2.8}));
+        series.add(new FigureSpec.Series("95 % confidence band of the fitted line", FigureSpec.Style.DASHED, x,
+                new double[] {0.2, 1.1, 2.1, 3.2}));
+        series.add(new FigureSpec.Series("95 % prediction band for a single new measurement", FigureSpec.Style.DOTTED, x,
+                new double[] {-0.5, 0.5, 1.5, 2.5}));
+        series.add(new FigureSpec.Series("Reference", FigureSpec.Style.REFERENCE, x, new double[] {0, 0, 0, 0}));
+        series.add(new FigureSpec.Series("An_absurdly_long_series_name_without_any_space_that_must_still_fit_the_chart_width".repeat(2),
+                FigureSpec.Style.DOTTED, x, new double[] {3, 3, 3, 3}));
+        return new FigureSpec("crowded", "Crowded legend", "x (1)", "y (1)", series);
+    }
+
+    @Test
+    void everyPartOfACrowdedLegendLiesInsideTheFigure() throws Exception {
+        String svg = renderer.render(crowded());
+        Document doc = parse(svg);
+        double[] view = java.util.Arrays.stream(doc.getDocumentElement().getAttribute("viewBox").trim().split("\\s+"))
+                .mapToDouble(Double::parseDouble).toArray();
+        org.w3c.dom.NodeList groups = doc.getElementsByTagNameNS("*", "g");
+        org.w3c.dom.Element legend = null;
+        for (int i = 0; i < groups.getLength(); i++) {
+            if ("legend".equals(((org.w3c.dom.Element) groups.item(i)).getAttribute("class"))) {
+                legend = (org.w3c.dom.Element) groups.item(i);
+            }
+        }
+        assertTrue(legend != null, "the legend is drawn, as a group of its own");
+        double[] box = {Double.MAX_VALUE, Double.MAX_VALUE, -Double.MAX_VALUE, -Double.MAX_VALUE};
+        extent(legend, 0, 0, box);
+        assertTrue(box[2] > box[0] && box[3] > box[1], "the legend has extent");
+        assertTrue(box[0] >= view[0] && box[1] >= view[1], "legend's top-left inside the view box: " + java.util.Arrays.toString(box));
+        assertTrue(box[2] <= view[0] + view[2] && box[3] <= view[1] + view[3],
+                "legend's bottom-right inside the view box " + java.util.Arrays.toString(view) + ": "
+                        + java.util.Arrays.toString(box));
+    }
+
+    @Test
+    void legendEntriesNeitherOverlapNorTouchTheirSymbolsAndRepeatedNamesShareOneEntry() {
+        List<Legend.Entry> entries = new java.util.ArrayList<>();
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        for (FigureSpec.Series s : crowded().series()) {
+            if (seen.add(s.name())) {
+                entries.add(new Legend.Entry(s.name(), Palette.of(s.style())));
+            }
+        }
+        Legend legend = new Legend(entries, 624);
+        assertEquals(7, legend.placed().size(), "the repeated band name gives one entry");
+        assertTrue(legend.width() <= 624, "legend width " + legend.width());
+        for (Legend.Placed p : legend.placed()) {
+            assertTrue(p.text().getMinX() - p.symbol().getMaxX() >= Legend.GAP - 1e-9, "gap after the symbol of " + p.entry());
+            assertTrue(p.text().getMaxX() <= legend.width() && p.symbol().getMinX() >= 0, "inside the box: " + p.entry());
+            for (Legend.Placed q : legend.placed()) {
+                if (p != q) {
+                    java.awt.geom.Rectangle2D a = p.symbol().createUnion(p.text());
+                    java.awt.geom.Rectangle2D b = q.symbol().createUnion(q.text());
+                    assertFalse(a.intersects(b), p.entry().name() + " overlaps " + q.entry().name());
+                }
+            }
+        }
+        assertTrue(legend.placed().get(7 - 1).lines().size() > 1, "a name wider than the chart wraps");
+    }
+
+    /** Grows {@code box} (minX, minY, maxX, maxY) by every coordinate drawn under {@code e}, following translations. */
+    private static void extent(org.w3c.dom.Element e, double dx, double dy, double[] box) {
+        String transform = e.getAttribute("transform");
+        java.util.regex.Matcher t = java.util.regex.Pattern.compile("translate\\(([-\\d.]+)[ ,]+([-\\d.]+)\\)")
+                .matcher(transform);
+        if (t.find()) {
+            dx += Double.parseDouble(t.group(1));
+            dy += Double.parseDouble(t.group(2));
+        } else {
+            assertTrue(transform.isEmpty(), "only translations are expected: " + transform);
+        }
+        switch (e.getLocalName()) {
+            case "path", "polyline", "polygon" -> {
+                String d = e.hasAttribute("d") ? e.getAttribute("d") : e.getAttribute("points");
+                assertFalse(d.matches(".*[HhVvAa].*"), "coordinates come in x,y pairs: " + d);
+                java.util.regex.Matcher n = java.util.regex.Pattern.compile("-?\\d+(?:\\.\\d+)?").matcher(d);
+                List<Double> v = new java.util.ArrayList<>();
+                while (n.find()) {
+                    v.add(Double.parseDouble(n.group()));
+                }
+                for (int i = 0; i + 1 < v.size(); i += 2) {
+                    grow(box, v.get(i) + dx, v.get(i + 1) + dy);
+                }
+            }
+            case "rect" -> {
+                double x = num(e, "x") + dx, y = num(e, "y") + dy;
+                grow(box, x, y);
+                grow(box, x + num(e, "width"), y + num(e, "height"));
+            }
+            case "line" -> {
+                grow(box, num(e, "x1") + dx, num(e, "y1") + dy);
+                grow(box, num(e, "x2") + dx, num(e, "y2") + dy);
+            }
+            case "ellipse", "circle" -> {
+                double rx = e.hasAttribute("r") ? num(e, "r") : num(e, "rx");
+                double ry = e.hasAttribute("r") ? num(e, "r") : num(e, "ry");
+                grow(box, num(e, "cx") + dx - rx, num(e, "cy") + dy - ry);
+                grow(box, num(e, "cx") + dx + rx, num(e, "cy") + dy + ry);
+            }
+            default -> {
+            }
+        }
+        for (org.w3c.dom.Node c = e.getFirstChild(); c != null; c = c.getNextSibling()) {
+            if (c instanceof org.w3c.dom.Element child) {
+                extent(child, dx, dy, box);
+            }
+        }
+    }
+
+    private static double num(org.w3c.dom.Element e, String attr) {
+        String v = e.getAttribute(attr);
+        return v.isEmpty() ? 0 : Double.parseDouble(v.replace("px", ""));
+    }
+
+    private static void grow(double[] box, double x, double y) {
+        box[0] = Math.min(box[0], x);
+        box[1] = Math.min(box[1], y);
+        box[2] = Math.max(box[2], x);
+        box[3] = Math.max(box[3], y);
+    }
+
     private static Document parse(String svg) throws Exception {
         DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
         f.setNamespaceAware(true);
