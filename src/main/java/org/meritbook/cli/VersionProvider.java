@@ -7,7 +7,7 @@ import picocli.CommandLine;
 final class VersionProvider implements CommandLine.IVersionProvider {
     @Override
     public String[] getVersion() {
-        String version = SoftwareInventory.components().get(0).version();
+        String version = SoftwareInventory.ownVersion();
         return new String[] {"meritbook " + version,
                 "Java " + System.getProperty("java.version") + " (" + System.getProperty("java.vendor") + ")"};
     }
