@@ -59,7 +59,7 @@ public final class DossierRenderer {
         byte[] id = documentId(files);
         String idHex = HexFormat.of().formatHex(id);
         FrontMatter fm = results.study().frontMatter();
-        DocumentDate date = DocumentDate.of(fm);
+        DocumentDate date = DocumentDate.of(fm, results.inputs());
         DossierView view = model.build(results, files, date, idHex);
 
         byte[] html = templates.render(view.forPdf(false)).getBytes(StandardCharsets.UTF_8);

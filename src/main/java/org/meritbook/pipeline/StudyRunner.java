@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
+import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
@@ -64,8 +66,9 @@ public final class StudyRunner {
             for (AnalysisCell cell : study.cells()) {
                 sections.add(analyses.get(cell.kind()).run(cell, context));
             }
+            return new StudyResults(study, inputs(study, rangesBySource, reader), sections,
+                    SoftwareInventory.components());
         }
-        return new StudyResults(study, inputs(study, rangesBySource), sections, SoftwareInventory.components());
     }
 
     /** Fails before any work when a cell names a kind this version cannot run yet. */
@@ -86,9 +89,10 @@ public final class StudyRunner {
         }
     }
 
-    private static List<InputFile> inputs(Study study, Map<String, Set<String>> rangesBySource) {
+    private static List<InputFile> inputs(Study study, Map<String, Set<String>> rangesBySource,
+                                          WorkbookReader reader) {
         List<InputFile> inputs = new ArrayList<>();
-        inputs.add(file("notebook", study.file().getFileName().toString(), study.file(), List.of()));
+        inputs.add(file("notebook", study.file().getFileName().toString(), study.file(), List.of(), null));
         for (SourceFile source : study.sources().values()) {
             if (!Files.isRegularFile(source.path())) {
                 throw new InputException(ErrorKey.FILE_NOT_FOUND,
@@ -97,15 +101,18 @@ public final class StudyRunner {
                         "no such file at " + source.path().toAbsolutePath().normalize(),
                         "Correct the path under sources: (it is relative to the notebook's folder).");
             }
-            inputs.add(file(source.alias(), source.written(), source.path(),
-                    List.copyOf(rangesBySource.getOrDefault(source.alias(), Set.of()))));
+            List<String> ranges = List.copyOf(rangesBySource.getOrDefault(source.alias(), Set.of()));
+            // Only workbooks that were read are opened again for the save date they record.
+            String savedOn = ranges.isEmpty() ? null : reader.recordedSaveTime(source.path())
+                    .map(t -> LocalDate.ofInstant(t, ZoneOffset.UTC).toString()).orElse(null);
+            inputs.add(file(source.alias(), source.written(), source.path(), ranges, savedOn));
         }
         return inputs;
     }
 
-    private static InputFile file(String alias, String written, Path path, List<String> ranges) {
+    private static InputFile file(String alias, String written, Path path, List<String> ranges, String savedOn) {
         try {
-            return new InputFile(alias, written, Sha256.of(path), Files.size(path), ranges);
+            return new InputFile(alias, written, Sha256.of(path), Files.size(path), ranges, savedOn);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

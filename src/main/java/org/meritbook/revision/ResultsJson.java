@@ -51,6 +51,7 @@ public final class ResultsJson {
             n.put("bytes", f.bytes());
             ArrayNode ranges = n.putArray("ranges");
             f.ranges().forEach(ranges::add);
+            n.put("saved_on", f.savedOn());
         }
         ArrayNode sections = root.putArray("sections");
         for (SectionResult s : results.sections()) {

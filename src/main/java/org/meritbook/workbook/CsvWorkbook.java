@@ -1,5 +1,6 @@
 package org.meritbook.workbook;
 
+import java.time.Instant;
 import java.util.List;
 import java.util.Optional;
 
@@ -40,6 +41,11 @@ final class CsvWorkbook implements SourceWorkbook {
 
     @Override
     public Optional<TableRange> table(String name) {
+        return Optional.empty();
+    }
+
+    @Override
+    public Optional<Instant> recordedSaveTime() {
         return Optional.empty();
     }
 

@@ -2,15 +2,19 @@ package org.meritbook.workbook;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.time.Instant;
 import java.util.ArrayList;
+import java.util.Date;
 import java.util.List;
 import java.util.Optional;
+import org.apache.poi.hssf.usermodel.HSSFWorkbook;
 import org.apache.poi.ss.usermodel.Name;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.ss.usermodel.Workbook;
 import org.apache.poi.xssf.usermodel.XSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFTable;
 import org.apache.poi.xssf.usermodel.XSSFTableColumn;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 
 /** An .xlsx, .xlsm or .xls workbook read by POI, held in memory. */
 final class PoiWorkbook implements SourceWorkbook {
@@ -127,6 +131,17 @@ final class PoiWorkbook implements SourceWorkbook {
             }
         }
         return all;
+    }
+
+    @Override
+    public Optional<Instant> recordedSaveTime() {
+        Date saved = null;
+        if (workbook instanceof XSSFWorkbook x) {
+            saved = x.getProperties().getCoreProperties().getModified();
+        } else if (workbook instanceof HSSFWorkbook h && h.getSummaryInformation() != null) {
+            saved = h.getSummaryInformation().getLastSaveDateTime();
+        }
+        return Optional.ofNullable(saved).map(Date::toInstant);
     }
 
     @Override

@@ -1,5 +1,6 @@
 package org.meritbook.workbook;
 
+import java.time.Instant;
 import java.util.List;
 import java.util.Optional;
 
@@ -22,6 +23,13 @@ interface SourceWorkbook extends AutoCloseable {
     List<String> tableNames();
 
     Optional<TableRange> table(String name);
+
+    /**
+     * The last-saved time the file records about itself (an .xlsx's core property "modified", an
+     * .xls's summary "last saved"), or empty (CSV, or not recorded). Content, not file-system time,
+     * so it is the same in every copy of the file.
+     */
+    Optional<Instant> recordedSaveTime();
 
     /** What was decided while opening the file (e.g. the CSV delimiter), for every block read from it. */
     List<String> openingDecisions();

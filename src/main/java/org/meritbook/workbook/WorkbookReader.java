@@ -1,6 +1,7 @@
 package org.meritbook.workbook;
 
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -31,6 +32,14 @@ public final class WorkbookReader implements BlockReader {
             return range(file, g, reference.range(), where, decisions);
         }
         return named(file, wb, reference.target().strip(), where, decisions);
+    }
+
+    /**
+     * The last-saved time a workbook records about itself, if any (see
+     * {@link SourceWorkbook#recordedSaveTime()}); opens the file like {@link #read} does.
+     */
+    public Optional<Instant> recordedSaveTime(Path file) {
+        return workbook(file, ReadErrors.fileName(file)).recordedSaveTime();
     }
 
     private SourceWorkbook workbook(Path file, String where) {

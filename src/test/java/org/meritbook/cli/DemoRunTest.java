@@ -130,6 +130,9 @@ class DemoRunTest {
         assertEquals(Sha256.of(NOTEBOOK), inputs.get(0).get("sha256").asText());
         assertEquals(Sha256.of(WORKBOOK), inputs.get(1).get("sha256").asText());
         assertEquals("Calibration!A8:F31", inputs.get(1).get("ranges").get(0).asText());
+        // The demo generator stamps the workbook's core property "modified" 2026-11-20T09:00Z.
+        assertEquals("2026-11-20", inputs.get(1).get("saved_on").asText());
+        assertTrue(inputs.get(0).get("saved_on").isNull(), "a notebook records no save date");
         // Every quantity names a step that exists in the trail.
         List<String> stepIds = new ArrayList<>();
         results.get("trail").forEach(s -> stepIds.add(s.get("id").asText()));
