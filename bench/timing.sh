@@ -9,7 +9,7 @@ notebook="${1:-demo-data/hmf-honey-validation.md}"
 iterations="${2:-10}"
 mvn -B -q -DskipTests package test-compile >/dev/null
 out="$(mktemp -d)"
-echo "== ./meritbook run (cold JVM, 3 runs)"
+echo "== ./meritbook run (cold JVM, 3 runs; a run right after a build also writes the class-data archive)"
 for i in 1 2 3; do
   start=$(date +%s%N)
   ./meritbook run "$notebook" -o "$out/run$i" >/dev/null
