@@ -5,8 +5,11 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import java.util.stream.Collectors;
+import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.criteria.Verdict;
+import org.meritbook.dossier.DisplayFormatter;
 import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.dossier.DossierWriter;
 import org.meritbook.dossier.RenderedDossier;
@@ -38,9 +41,12 @@ final class StudyOutput {
         AtomicFiles.write(folder.resolve("trail.md"), trail(results).getBytes(StandardCharsets.UTF_8));
         out.println("meritbook: " + results.study().frontMatter().title() + ", revision "
                 + results.study().frontMatter().revision());
+        DisplayFormatter format = new DisplayFormatter();
         for (SectionResult s : results.sections()) {
-            out.println("  " + s.id() + ": " + s.quantities().size() + " quantities, " + s.warnings().size()
-                    + " warning" + (s.warnings().size() == 1 ? "" : "s"));
+            String summary = s.quantities().stream().filter(Quantity::summary)
+                    .map(q -> q.label() + " " + format.quantity(q).withUnit()).collect(Collectors.joining("; "));
+            out.println("  " + s.id() + ": " + summary + (s.warnings().isEmpty() ? ""
+                    : " (" + s.warnings().size() + " warning" + (s.warnings().size() == 1 ? "" : "s") + ")"));
         }
         written.forEach(p -> out.println("  wrote " + p));
         out.println("  wrote " + folder.resolve("results.json"));
