@@ -9,29 +9,20 @@ import java.util.concurrent.Callable;
 import java.util.stream.Stream;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
 
 /** {@code meritbook demo}: run the bundled demo study in demo-data/. */
 @Command(name = "demo", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Run the bundled demo study (demo-data/) and write its results into DIR/<study>/ (-o).")
 final class DemoCommand implements Callable<Integer> {
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR", defaultValue = "out",
-            description = "Output folder (default: ${DEFAULT-VALUE}).")
-    Path out;
-
-    @Option(names = "--templates", paramLabel = "DIR",
-            description = "Use the dossier templates in DIR (a lab's own copy of report-templates/).")
-    Path templates;
-
-    @Option(names = "--force", description = "Replace an existing dossier of the same revision whose content differs.")
-    boolean force;
+    @CommandLine.Mixin
+    OutputOptions output;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
-        return StudyOutput.runAndWrite(demoNotebook(), out, new StudyOutput.Options(templates, force), spec.commandLine().getOut());
+        return StudyOutput.runAndWrite(demoNotebook(), output, spec.commandLine().getOut());
     }
 
     /** The one notebook in demo-data/, found under the installation folder the launcher names. */

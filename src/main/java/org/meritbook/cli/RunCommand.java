@@ -4,7 +4,6 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** {@code meritbook run STUDY.md}: compute and write results.json, the trail and the dossier. */
@@ -14,22 +13,14 @@ final class RunCommand implements Callable<Integer> {
     @Parameters(paramLabel = "STUDY.md", description = "The study notebook.")
     Path notebook;
 
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR", defaultValue = "out",
-            description = "Output folder (default: ${DEFAULT-VALUE}); results go to DIR/<study>/.")
-    Path out;
-
-    @Option(names = "--templates", paramLabel = "DIR",
-            description = "Use the dossier templates in DIR (a lab's own copy of report-templates/).")
-    Path templates;
-
-    @Option(names = "--force", description = "Replace an existing dossier of the same revision whose content differs.")
-    boolean force;
+    @CommandLine.Mixin
+    OutputOptions output;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
-        return StudyOutput.runAndWrite(notebook, out, new StudyOutput.Options(templates, force), spec.commandLine().getOut());
+        return StudyOutput.runAndWrite(notebook, output, spec.commandLine().getOut());
     }
 }

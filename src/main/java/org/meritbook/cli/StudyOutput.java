@@ -30,13 +30,13 @@ final class StudyOutput {
      * Runs the notebook, renders the dossier, and only then writes anything: a refused dossier
      * (same revision, different content) leaves every earlier output as it was.
      */
-    static int runAndWrite(Path notebook, Path outRoot, Options options, PrintWriter out) {
+    static int runAndWrite(Path notebook, OutputOptions options, PrintWriter out) {
         StudyResults results = StudyRunner.withBuiltInAnalyses().run(notebook);
-        Path folder = outRoot.resolve(baseName(notebook));
+        Path folder = options.out.resolve(baseName(notebook));
         byte[] json = ResultsJson.toBytes(results);
-        RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates())).render(results, json);
+        RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates)).render(results, json);
         List<Path> written = new DossierWriter().write(dossier, folder, DossierWriter.baseName(results.study()),
-                options.force());
+                options.force);
         AtomicFiles.write(folder.resolve("results.json"), json);
         AtomicFiles.write(folder.resolve("trail.md"), trail(results).getBytes(StandardCharsets.UTF_8));
         out.println("meritbook: " + results.study().frontMatter().title() + ", revision "
@@ -55,13 +55,6 @@ final class StudyOutput {
         boolean failed = results.sections().stream().flatMap(s -> s.verdicts().stream())
                 .anyMatch(v -> v.outcome() == Verdict.Outcome.FAIL);
         return failed ? Main.ACCEPTANCE_FAILED : Main.DONE;
-    }
-
-    /**
-     * @param templates a lab's own template folder, or null for the built-in templates
-     * @param force     replace a different dossier of the same revision
-     */
-    record Options(Path templates, boolean force) {
     }
 
     static String baseName(Path notebook) {

@@ -1,5 +1,6 @@
 package org.meritbook.cli;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -9,6 +10,7 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.apache.poi.ss.usermodel.Row;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
@@ -82,6 +84,33 @@ class CommandLineTest {
         assertEquals(0, o.code(), o.err());
         assertTrue(Files.exists(dir.resolve("out/study/results.json")));
         assertTrue(Files.exists(dir.resolve("out/study/trail.md")));
+    }
+
+    @Test
+    void aChangedStudyUnderTheSameRevisionIsRefusedAndLeavesEveryOutputAsItWas() throws Exception {
+        workbook(null);
+        Path nb = notebook("runs!Cal!A1:B6");
+        String out = dir.resolve("out").toString();
+        assertEquals(0, execute("run", nb.toString(), "-o", out).code());
+        Path results = dir.resolve("out/study/results.json");
+        Path pdf = dir.resolve("out/study/study-rev1.pdf");
+        byte[] firstResults = Files.readAllBytes(results);
+        byte[] firstPdf = Files.readAllBytes(pdf);
+        assertEquals(0, execute("run", nb.toString(), "-o", out).code(), "an identical re-run is fine");
+
+        Files.writeString(nb, Files.readString(nb).replace("y: Area", "y: Area\nweighting: 1/x"));
+        Outcome refused = execute("run", nb.toString(), "-o", out);
+        assertEquals(2, refused.code());
+        assertTrue(refused.err().contains("Raise 'revision:' in the notebook's front matter"), refused.err());
+        assertArrayEquals(firstResults, Files.readAllBytes(results), "results.json untouched");
+        assertArrayEquals(firstPdf, Files.readAllBytes(pdf), "dossier untouched");
+
+        assertEquals(0, execute("run", nb.toString(), "-o", out, "--force").code());
+        assertFalse(java.util.Arrays.equals(firstPdf, Files.readAllBytes(pdf)), "--force replaced the dossier");
+        try (var files = Files.list(dir.resolve("out/study"))) {
+            assertEquals(List.of("results.json", "study-rev1.html", "study-rev1.pdf", "trail.md"),
+                    files.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files left");
+        }
     }
 
     @Test
