@@ -3,7 +3,8 @@ package org.meritbook.stats;
 import java.util.Objects;
 
 /**
- * Straight-line least squares, unweighted or weighted, with or without intercept.
+ * Least squares for calibration: the straight line, unweighted or weighted, with or without intercept
+ * ({@link #fitLine}), and the weighted quadratic ({@link #fitQuadratic}).
  *
  * <p>Formulas (weights w<sub>i</sub> normalised to average 1, so Σw = n):
  * <pre>
@@ -125,6 +126,96 @@ public final class LeastSquares {
         return new LineFit(model, weighting, n, df, x, y, w, slope, intercept, slopeSe, interceptSe,
                 covariance, r, rSquared, adjusted, s, meanX, meanY, sxx, slope * sxy, ssResidual,
                 fitted, residuals, standardized);
+    }
+
+    /**
+     * Fits a quadratic y = a + b·x + c·x² by (weighted) least squares.
+     *
+     * <p>Formulas (weights w normalised to average 1, as for {@link #fitLine}; X the n × 3 design
+     * with rows (1, x, x²), W = diag(w)):
+     * <pre>
+     *   β = (a, b, c) minimises Σw(y − a − b·x − c·x²)²,  formally β = (X'WX)⁻¹X'Wy
+     *   e = y − ŷ   SSres = Σw·e²   s = √(SSres / (n − 3))   SE(β_k) = s·√[(X'WX)⁻¹]_kk
+     *   R² = 1 − SSres / Σw(y − ȳw)²   (centred)   standardized residual = e·√w / s
+     * </pre>
+     * The normal equations are never formed: x is centred and scaled and the problem solved by QR
+     * (see {@link QuadraticDesign}). Measured: at least 11.9 significant digits on every certified value
+     * of NIST's Pontius data (x up to 3·10⁶; 13.3 or more on all but the intercept), see the tests. References: Draper &amp; Smith, <i>Applied Regression
+     * Analysis</i>, 3rd ed., ch. 9 (weighted least squares) and 12 (polynomial models); ISO 8466-2
+     * (second-order calibration functions).
+     *
+     * @param x         concentrations; finite, at least three distinct values
+     * @param y         responses; finite, same length as x, not all equal
+     * @param weighting weighting; its basis must be positive at every point
+     * @return the fit with every statistic the dossier reports
+     * @throws IllegalArgumentException when x and y differ in length, there are fewer than 4 points
+     *                                  (a quadratic needs one residual degree of freedom), a value is
+     *                                  not finite, x takes fewer than three distinct values, y does not
+     *                                  vary, the weighting's basis is not positive somewhere, or the x
+     *                                  levels are numerically too close to separate the three terms
+     */
+    public static QuadraticFit fitQuadratic(double[] x, double[] y, Weighting weighting) {
+        Objects.requireNonNull(x, "x");
+        Objects.requireNonNull(y, "y");
+        Objects.requireNonNull(weighting, "weighting");
+        if (x.length != y.length) {
+            throw new IllegalArgumentException("x and y must have the same length, but have "
+                    + x.length + " and " + y.length);
+        }
+        if (x.length < QuadraticFit.MINIMUM_POINTS) {
+            throw new IllegalArgumentException("a quadratic needs at least " + QuadraticFit.MINIMUM_POINTS
+                    + " points, but has " + x.length);
+        }
+        requireFinite("x", x);
+        requireFinite("y", y);
+        int levels = QuadraticFit.distinctValues(x);
+        if (levels < QuadraticFit.PARAMETERS) {
+            throw new IllegalArgumentException("x must take at least 3 different values for a quadratic, but takes "
+                    + levels);
+        }
+        requireVariation("y", y, true);
+        return fitQuadratic(x, y, weighting.rawWeights(x, y), weighting);
+    }
+
+    /**
+     * The quadratic fit for given raw weights, proportional to what {@code weighting} gives (they
+     * are normalised to average 1 here). Package-private so that tests can check that invariance.
+     */
+    static QuadraticFit fitQuadratic(double[] x, double[] y, double[] rawWeights, Weighting weighting) {
+        int n = x.length;
+        double[] w = normalise(rawWeights);
+        QuadraticDesign design = new QuadraticDesign(x, w);
+        double[] alpha = design.solveInZ(y);
+
+        double[] fitted = new double[n];
+        double[] residuals = new double[n];
+        double ssResidual = 0;
+        for (int i = 0; i < n; i++) {
+            fitted[i] = design.valueInZ(alpha, x[i]);
+            residuals[i] = y[i] - fitted[i];
+            ssResidual += w[i] * residuals[i] * residuals[i];
+        }
+        int df = n - QuadraticFit.PARAMETERS;
+        double s = Math.sqrt(ssResidual / df);
+        double[] standardized = new double[n];
+        for (int i = 0; i < n; i++) {
+            standardized[i] = s > 0 ? residuals[i] * Math.sqrt(w[i]) / s : 0;
+        }
+
+        double sumW = sum(w);
+        double meanY = weightedMean(y, w, sumW);
+        double ssTotal = 0;
+        for (int i = 0; i < n; i++) {
+            double d = y[i] - meanY;
+            ssTotal += w[i] * d * d;
+        }
+        double rSquared = Math.max(0, Math.min(1, 1 - ssResidual / ssTotal));
+
+        double[] beta = design.toX(alpha);
+        double[][] inverse = design.inverseCrossProduct();
+        return new QuadraticFit(weighting, n, df, x, y, w, beta[0], beta[1], beta[2],
+                s * Math.sqrt(inverse[0][0]), s * Math.sqrt(inverse[1][1]), s * Math.sqrt(inverse[2][2]),
+                s, ssResidual, rSquared, fitted, residuals, standardized);
     }
 
     private static String describe(LineModel model) {

@@ -40,6 +40,28 @@ class NistStrdTest {
         assertThroughOrigin(NistLinearDataset.load("NoInt2"));
     }
 
+    // Source: NIST StRD Pontius.dat (lower difficulty, quadratic y = B0 + B1·x + B2·x², 40 observations),
+    // certified values. x runs to 3·10⁶, so the raw-power normal equations lose about 25 digits.
+    @Test
+    void pontiusQuadratic() {
+        NistLinearDataset nist = NistLinearDataset.load("Pontius");
+        QuadraticFit fit = LeastSquares.fitQuadratic(nist.x(), nist.y(), Weighting.NONE);
+
+        assertDigits("B0", fit.intercept(), nist.estimate("B0"));
+        assertDigits("B1", fit.linear(), nist.estimate("B1"));
+        assertDigits("B2", fit.quadratic(), nist.estimate("B2"));
+        assertDigits("sd(B0)", fit.interceptSe(), nist.standardDeviation("B0"));
+        assertDigits("sd(B1)", fit.linearSe(), nist.standardDeviation("B1"));
+        assertDigits("sd(B2)", fit.quadraticSe(), nist.standardDeviation("B2"));
+        assertEquals(nist.residualDf(), fit.degreesOfFreedom(), "residual degrees of freedom");
+        assertDigits("residual SD", fit.residualSd(), nist.residualSd());
+        assertDigits("R-squared", fit.rSquared(), nist.rSquared());
+        assertDigits("residual SS", fit.ssResidual(), nist.ssResidual());
+        // The certified regression SS is the centred total less the residual SS: R² = SSreg / (SSreg + SSres).
+        assertDigits("R-squared from the ANOVA table", fit.rSquared(),
+                nist.ssRegression() / (nist.ssRegression() + nist.ssResidual()));
+    }
+
     // Source: NIST StRD Norris.dat and NoInt2.dat, the data lines as printed in the files.
     @Test
     void parserReadsTheStatedDataLinesInTheNamedColumnOrder() {
