@@ -62,6 +62,18 @@ class QuadraticFitTest {
         assertThrows(IllegalArgumentException.class, () -> fit.inverse(0.5, 0, 4));
     }
 
+    // Source: definition — inverse undoes predict. On NIST StRD Pontius.dat the curvature is tiny (c/b ≈ −4·10⁻⁹),
+    // so the second root of the quadratic lies near 2·10⁸, far outside the calibrated 1.5·10⁵ … 3·10⁶, and the
+    // cancellation-free root formula must still return the near root to full precision.
+    @Test
+    void inverseUndoesPredictOnAnAlmostStraightCurve() {
+        NistLinearDataset nist = NistLinearDataset.load("Pontius");
+        QuadraticFit fit = LeastSquares.fitQuadratic(nist.x(), nist.y(), Weighting.NONE);
+        for (double x0 : new double[] {150000, 987654.3, 3000000}) {
+            assertEquals(x0, fit.inverse(fit.predict(x0), 150000, 3000000), 1e-9 * x0);
+        }
+    }
+
     // Source: the estimator (X'WX)⁻¹X'Wy is unchanged when W is multiplied by a constant
     // (Draper & Smith, ch. 9); SEs and s are unchanged because weights are normalised to average 1.
     @ParameterizedTest
