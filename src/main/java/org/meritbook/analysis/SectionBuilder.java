@@ -57,6 +57,10 @@ public final class SectionBuilder {
         return StepInput.number(symbol, step.value(), step.unit(), stepId);
     }
 
+    public boolean hasQuantity(String name) {
+        return quantities.stream().anyMatch(q -> q.name().equals(name));
+    }
+
     public SectionBuilder figure(FigureSpec figure) {
         figures.add(figure);
         return this;

@@ -13,16 +13,17 @@ import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.stats.LeastSquares;
 import org.meritbook.stats.LineFit;
-import org.meritbook.stats.LineModel;
+import org.meritbook.stats.QuadraticFit;
 import org.meritbook.stats.Weighting;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.trail.StepInput;
 
 /**
- * Calibration and linearity (DESIGN §4, first part): weighted or unweighted least-squares straight
- * line, with or without intercept; sensitivity (slope) and intercept with standard errors and 95 %
+ * Calibration and linearity (DESIGN §4): weighted or unweighted least-squares straight line (with or
+ * without intercept) or quadratic; sensitivity (slope) and intercept with standard errors and 95 %
  * confidence intervals, r, r², s(y/x), residuals, back-calculated concentrations and their %
- * deviation from nominal. Excluded points stay in the table, marked, and out of the fit.
+ * deviation from nominal; lack-of-fit, Mandel's and Shapiro–Wilk tests. Excluded points stay in the
+ * table, marked, and out of the fit.
  */
 public final class CalibrationAnalysis implements Analysis {
     /** Confidence level of every interval this section reports. */
@@ -37,15 +38,44 @@ public final class CalibrationAnalysis implements Analysis {
         checkSupportsFit(cell, options, data, context);
         SectionBuilder section = new SectionBuilder(cell);
         Weighting weighting = chooseWeighting(options, data, section);
-        LineFit fit = LeastSquares.fitLine(data.usedX(), data.usedY(), weighting, options.model());
-        section.setting("Model", options.model() == LineModel.THROUGH_ORIGIN
-                ? "straight line through the origin, y = b·x" : "straight line, y = a + b·x");
+        section.setting("Model", options.model().description());
         section.setting("Weighting", weighting.notation() + (options.weighting().isAuto() ? " (chosen by auto)" : ""));
         section.setting("Confidence level", "95 %");
-        new CalibrationTrail(section, data, fit).record();
-        flagResiduals(section, data, fit);
-        CalibrationFigures.addTo(section, cell.id(), data, fit);
-        return section.build(CalibrationTable.of(data, fit));
+        double[] x = data.usedX();
+        double[] y = data.usedY();
+        CalibrationCurve curve;
+        BackCalculation.Inversion inversion;
+        LinearityChecks checks = new LinearityChecks(section, data);
+        if (options.model() == CalibrationModel.QUADRATIC) {
+            QuadraticFit fit = LeastSquares.fitQuadratic(x, y, weighting);
+            inversion = new QuadraticTrail(section, data, fit).record();
+            curve = CalibrationCurve.of(fit, min(x), max(x));
+            checks.record(fit);
+        } else {
+            LineFit fit = LeastSquares.fitLine(x, y, weighting, options.model().lineModel());
+            inversion = new LineTrail(section, data, fit).record();
+            curve = CalibrationCurve.of(fit);
+            checks.record(fit);
+        }
+        BackCalculation.record(section, data, curve, inversion);
+        flagResiduals(section, data, curve);
+        CalibrationFigures.addTo(section, cell.id(), data, curve);
+        return section.build(CalibrationTable.of(data, section::hasQuantity));
+    }
+
+    /** The fitted curve of one model and weighting, for the auto-weighting comparison. */
+    private static CalibrationCurve fit(CalibrationModel model, double[] x, double[] y, Weighting w) {
+        return model == CalibrationModel.QUADRATIC
+                ? CalibrationCurve.of(LeastSquares.fitQuadratic(x, y, w), min(x), max(x))
+                : CalibrationCurve.of(LeastSquares.fitLine(x, y, w, model.lineModel()));
+    }
+
+    static double min(double[] v) {
+        return java.util.Arrays.stream(v).min().orElseThrow();
+    }
+
+    static double max(double[] v) {
+        return java.util.Arrays.stream(v).max().orElseThrow();
     }
 
     private static void checkSupportsFit(AnalysisCell cell, CalibrationOptions options, CalibrationData data,
@@ -53,9 +83,11 @@ public final class CalibrationAnalysis implements Analysis {
         int used = data.used().size();
         int excluded = data.points().size() - used;
         String block = data.block().sheet() + "!" + data.block().range();
-        if (used < 3) {
+        int needed = options.model().minimumPoints();
+        if (used < needed) {
             throw new InputException(ErrorKey.TOO_FEW_POINTS, context.where(cell.lineOf("data")),
-                    "at least 3 calibration points in the fit",
+                    "at least " + needed + " calibration points in the fit" + (needed == 3 ? "" : " (model: "
+                            + options.model().keyword() + ")"),
                     used + " usable point" + (used == 1 ? "" : "s") + " in " + block
                             + (excluded > 0 ? " (" + excluded + " excluded)" : ""),
                     "Add calibration standards to the range, or reconsider the exclusions.");
@@ -69,6 +101,14 @@ public final class CalibrationAnalysis implements Analysis {
             throw new InputException(ErrorKey.ZERO_VARIANCE, context.where(cell.lineOf("x")),
                     "at least two different concentrations in column '" + data.xColumn().header() + "'",
                     "every point at " + x[0], "Include standards at several concentration levels.");
+        }
+        long levels = java.util.Arrays.stream(x).distinct().count();
+        if (levels < options.model().minimumLevels()) {
+            throw new InputException(ErrorKey.TOO_FEW_POINTS, context.where(cell.lineOf("model")),
+                    "at least " + options.model().minimumLevels() + " concentration levels for model: "
+                            + options.model().keyword(),
+                    levels + " levels in column '" + data.xColumn().header() + "'",
+                    "Include standards at more concentration levels, or use a straight-line model.");
         }
         Weighting fixed = options.weighting().fixed();
         if (fixed != null) {
@@ -106,10 +146,15 @@ public final class CalibrationAnalysis implements Analysis {
                         + ("x".equals(w.basis()) ? "concentration" : "response") + " is zero or negative.");
                 continue;
             }
-            LineFit fit = LeastSquares.fitLine(x, y, w, options.model());
+            CalibrationCurve curve = fit(options.model(), x, y, w);
             double sum = 0;
-            for (int i = 0; i < x.length; i++) {
-                sum += Math.abs((fit.inverse(y[i]) - x[i]) / x[i] * 100.0);
+            try {
+                for (int i = 0; i < x.length; i++) {
+                    sum += Math.abs((curve.inverse(y[i]) - x[i]) / x[i] * 100.0);
+                }
+            } catch (IllegalArgumentException e) {
+                section.warning("Weighting " + w.notation() + " was not chosen by auto: " + e.getMessage());
+                continue;
             }
             sums.put(w, sum);
         }
@@ -122,8 +167,8 @@ public final class CalibrationAnalysis implements Analysis {
         return best;
     }
 
-    private static void flagResiduals(SectionBuilder section, CalibrationData data, LineFit fit) {
-        double[] z = fit.standardizedResiduals();
+    private static void flagResiduals(SectionBuilder section, CalibrationData data, CalibrationCurve curve) {
+        double[] z = curve.standardizedResiduals();
         List<CalibrationPoint> used = data.used();
         for (int i = 0; i < z.length; i++) {
             if (Math.abs(z[i]) > RESIDUAL_FLAG) {

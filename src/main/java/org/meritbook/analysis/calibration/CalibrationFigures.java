@@ -2,11 +2,11 @@ package org.meritbook.analysis.calibration;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.figures.FigureSpec.Series;
 import org.meritbook.figures.FigureSpec.Style;
-import org.meritbook.stats.LineFit;
 
 /**
  * The calibration figures as data: fit with 95 % confidence and prediction bands, standardized
@@ -26,7 +26,7 @@ final class CalibrationFigures {
     private CalibrationFigures() {
     }
 
-    static void addTo(SectionBuilder section, String id, CalibrationData data, LineFit fit) {
+    static void addTo(SectionBuilder section, String id, CalibrationData data, CalibrationCurve fit) {
         String xTitle = titled(data.xColumn().name(), data.xUnit());
         String yTitle = titled(data.yColumn().name(), data.yUnit());
         section.figure(fitFigure(id, data, fit, xTitle, yTitle));
@@ -34,7 +34,7 @@ final class CalibrationFigures {
         section.figure(deviationFigure(id, data, fit, xTitle));
     }
 
-    private static FigureSpec fitFigure(String id, CalibrationData data, LineFit fit, String xTitle, String yTitle) {
+    private static FigureSpec fitFigure(String id, CalibrationData data, CalibrationCurve fit, String xTitle, String yTitle) {
         double[] grid = grid(data);
         int m = grid.length;
         double[] line = new double[m];
@@ -63,7 +63,7 @@ final class CalibrationFigures {
                 series);
     }
 
-    private static FigureSpec residualFigure(String id, CalibrationData data, LineFit fit, String xTitle) {
+    private static FigureSpec residualFigure(String id, CalibrationData data, CalibrationCurve fit, String xTitle) {
         double[] x = data.usedX();
         double[] span = {min(x), max(x)};
         List<Series> series = new ArrayList<>();
@@ -78,13 +78,14 @@ final class CalibrationFigures {
                 "Standardized residual e·√w / s(y/x)", series);
     }
 
-    private static FigureSpec deviationFigure(String id, CalibrationData data, LineFit fit, String xTitle) {
+    private static FigureSpec deviationFigure(String id, CalibrationData data, CalibrationCurve fit, String xTitle) {
         List<Double> xs = new ArrayList<>();
         List<Double> ds = new ArrayList<>();
         for (CalibrationPoint p : data.used()) {
-            if (p.x() != 0) {
+            OptionalDouble back = fit.inverseIfAny(p.y());
+            if (p.x() != 0 && back.isPresent()) {
                 xs.add(p.x());
-                ds.add((fit.inverse(p.y()) - p.x()) / p.x() * 100.0);
+                ds.add((back.getAsDouble() - p.x()) / p.x() * 100.0);
             }
         }
         double[] x = xs.stream().mapToDouble(Double::doubleValue).toArray();
@@ -102,11 +103,19 @@ final class CalibrationFigures {
                 "Deviation (%)", series);
     }
 
-    private static void addExcluded(List<Series> series, CalibrationData data, boolean asDeviation, LineFit fit) {
+    private static void addExcluded(List<Series> series, CalibrationData data, boolean asDeviation, CalibrationCurve fit) {
         List<double[]> pts = new ArrayList<>();
         for (CalibrationPoint p : data.points()) {
-            if (!p.used() && Double.isFinite(p.x()) && Double.isFinite(p.y()) && (!asDeviation || p.x() != 0)) {
-                pts.add(new double[] {p.x(), asDeviation ? (fit.inverse(p.y()) - p.x()) / p.x() * 100.0 : p.y()});
+            if (p.used() || !Double.isFinite(p.x()) || !Double.isFinite(p.y())) {
+                continue;
+            }
+            if (!asDeviation) {
+                pts.add(new double[] {p.x(), p.y()});
+            } else {
+                OptionalDouble back = fit.inverseIfAny(p.y());
+                if (p.x() != 0 && back.isPresent()) {
+                    pts.add(new double[] {p.x(), (back.getAsDouble() - p.x()) / p.x() * 100.0});
+                }
             }
         }
         if (!pts.isEmpty()) {

@@ -3,7 +3,6 @@ package org.meritbook.analysis.calibration;
 import java.util.List;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
-import org.meritbook.stats.LineModel;
 import org.meritbook.stats.Weighting;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.DataReference;
@@ -18,10 +17,10 @@ import org.meritbook.analysis.AnalysisContext;
  * @param x         column of nominal concentrations (header text or letter)
  * @param y         column of responses
  * @param weighting weighting, or auto
- * @param model     straight line with intercept or through the origin
+ * @param model     the calibration function
  * @param dropCensored whether censored entries are left out (recorded) rather than rejected
  */
-record CalibrationOptions(DataReference data, String x, String y, WeightingChoice weighting, LineModel model,
+record CalibrationOptions(DataReference data, String x, String y, WeightingChoice weighting, CalibrationModel model,
                           boolean dropCensored) {
 
     static CalibrationOptions of(AnalysisCell cell, AnalysisContext context) {
@@ -32,20 +31,12 @@ record CalibrationOptions(DataReference data, String x, String y, WeightingChoic
                 .map(v -> WeightingChoice.parse(v.text()).orElseThrow(() -> badValue(context, v, "weighting",
                         List.of("none", "1/x", "1/x^2", "1/y", "1/y^2", "auto"))))
                 .orElse(new WeightingChoice(Weighting.NONE));
-        LineModel model = cell.option("model").map(v -> model(context, v)).orElse(LineModel.WITH_INTERCEPT);
+        CalibrationModel model = cell.option("model")
+                .map(v -> CalibrationModel.fromKeyword(v.text())
+                        .orElseThrow(() -> badValue(context, v, "model", CalibrationModel.keywords())))
+                .orElse(CalibrationModel.LINEAR);
         boolean drop = cell.option("censored").map(v -> v.text().equals("drop")).orElse(false);
         return new CalibrationOptions(data, x, y, weighting, model, drop);
-    }
-
-    private static LineModel model(AnalysisContext context, OptionValue v) {
-        return switch (v.text()) {
-            case "linear" -> LineModel.WITH_INTERCEPT;
-            case "linear-through-origin" -> LineModel.THROUGH_ORIGIN;
-            case "quadratic" -> throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(v.line()),
-                    "model linear or linear-through-origin", "model: quadratic, which this version does not fit yet",
-                    "Use model: linear (Mandel's test and the quadratic model come with a later version).");
-            default -> throw badValue(context, v, "model", List.of("linear", "linear-through-origin"));
-        };
     }
 
     private static InputException badValue(AnalysisContext context, OptionValue v, String option,

@@ -2,9 +2,9 @@ package org.meritbook.analysis.calibration;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Predicate;
 import org.meritbook.analysis.DataTable;
 import org.meritbook.analysis.TableCell;
-import org.meritbook.stats.LineFit;
 import org.meritbook.workbook.Column;
 
 /** The calibration data table: every column of the block as read, then x̂ and % deviation. */
@@ -12,7 +12,7 @@ final class CalibrationTable {
     private CalibrationTable() {
     }
 
-    static DataTable of(CalibrationData data, LineFit fit) {
+    static DataTable of(CalibrationData data, Predicate<String> hasQuantity) {
         List<String> headers = new ArrayList<>();
         for (Column c : data.block().columns()) {
             headers.add(c.header());
@@ -28,12 +28,15 @@ final class CalibrationTable {
                 var v = c.values().get(i);
                 cells.add(TableCell.raw(v.raw(), v.ref().address()));
             }
-            boolean computable = Double.isFinite(p.x()) && Double.isFinite(p.y());
-            cells.add(computable ? TableCell.computed("back_calculated:" + p.label()) : TableCell.raw("", null));
-            cells.add(computable && p.x() != 0 ? TableCell.computed("deviation_percent:" + p.label())
-                    : TableCell.raw("", null));
+            cells.add(computedOrBlank("back_calculated:" + p.label(), hasQuantity));
+            cells.add(computedOrBlank("deviation_percent:" + p.label(), hasQuantity));
             rows.add(new DataTable.Row(p.label(), cells, p.exclusionReason()));
         }
         return new DataTable(headers, rows);
+    }
+
+    /** A value the analysis could not compute (no numbers, nominal 0, no root) stays blank. */
+    private static TableCell computedOrBlank(String quantity, Predicate<String> hasQuantity) {
+        return hasQuantity.test(quantity) ? TableCell.computed(quantity) : TableCell.raw("", null);
     }
 }

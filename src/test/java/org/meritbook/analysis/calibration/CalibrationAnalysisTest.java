@@ -297,7 +297,97 @@ class CalibrationAnalysisTest {
         }
         SectionResult s = run("", block(text(x), text(y)));
         assertEquals(20, q(s, "n"));
-        assertEquals(1, s.warnings().size(), s.warnings().toString());
-        assertTrue(s.warnings().get(0).startsWith("Point Cal!B11"), s.warnings().get(0));
+        List<String> flagged = s.warnings().stream().filter(w -> w.startsWith("Point ")).toList();
+        assertEquals(1, flagged.size(), s.warnings().toString());
+        assertTrue(flagged.get(0).startsWith("Point Cal!B11"), flagged.get(0));
+    }
+
+    /** Three replicates at five levels, y = 2 + 10·x plus fixed scatter; one level mean pushed off the line when asked. */
+    private static DataBlock replicated(double bend) {
+        double[] levels = {1, 2, 4, 6, 8};
+        double[] scatter = {-0.2, 0.1, 0.1};
+        List<String> xs = new ArrayList<>();
+        List<String> ys = new ArrayList<>();
+        for (double level : levels) {
+            for (double e : scatter) {
+                xs.add(Double.toString(level));
+                ys.add(Double.toString(2 + 10 * level + e + (level == 4 ? bend : 0)));
+            }
+        }
+        return block(xs.toArray(new String[0]), ys.toArray(new String[0]));
+    }
+
+    @Test
+    void lackOfFitUsesThePureErrorOfTheReplicates() {
+        SectionResult s = run("", replicated(0));
+        // Pure error by hand: each level's replicates scatter −0.2, 0.1, 0.1 about a mean of 0,
+        // so SS_PE = 5 × (0.04 + 0.01 + 0.01) = 0.30 on 15 − 5 = 10 df; the level means lie exactly on
+        // y = 2 + 10x, so the line fits the means and SS_LoF = 0 (Draper & Smith §2.1, from memory).
+        assertEquals(0.0, q(s, "lack_of_fit_f"), 1e-9);
+        assertEquals(1.0, q(s, "lack_of_fit_p"), 1e-9);
+        SectionResult bent = run("", replicated(3.0));
+        assertTrue(q(bent, "lack_of_fit_p") < 0.001, "a level mean 3 units off the line is a lack of fit");
+        assertTrue(bent.warnings().stream().anyMatch(w -> w.startsWith("Significant lack of fit")), bent.warnings().toString());
+    }
+
+    @Test
+    void withoutReplicatesTheLackOfFitTestIsStatedNotEvaluable() {
+        SectionResult s = run("", block(text(X), text(Y)));
+        assertTrue(s.quantity("lack_of_fit_f").isEmpty());
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("Not evaluable: the lack-of-fit F test")),
+                s.warnings().toString());
+    }
+
+    @Test
+    void curvedDataFailMandelsTestAndTheQuadraticModelFitsThem() {
+        double[] x = {1, 2, 3, 4, 5, 6, 7, 8};
+        double[] y = new double[x.length];
+        double[] noise = {0.02, -0.01, 0.01, -0.02, 0.0, 0.01, -0.01, 0.02};
+        for (int i = 0; i < x.length; i++) {
+            y[i] = 1 + 2 * x[i] + 0.3 * x[i] * x[i] + noise[i];
+        }
+        SectionResult linear = run("", block(text(x), text(y)));
+        assertTrue(q(linear, "mandel_p") < 1e-6, "curvature is significant");
+        assertTrue(linear.warnings().stream().anyMatch(w -> w.startsWith("Mandel's test: the quadratic model fits")),
+                linear.warnings().toString());
+
+        SectionResult quadratic = run("model: quadratic\n", block(text(x), text(y)));
+        // Cross-check against a general-purpose library: Commons Math OLS with columns x and x².
+        org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression ols =
+                new org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression();
+        double[][] design = new double[x.length][];
+        for (int i = 0; i < x.length; i++) {
+            design[i] = new double[] {x[i], x[i] * x[i]};
+        }
+        ols.newSampleData(y, design);
+        double[] beta = ols.estimateRegressionParameters();
+        assertEquals(beta[0], q(quadratic, "intercept"), 1e-9);
+        assertEquals(beta[1], q(quadratic, "slope"), 1e-9);
+        assertEquals(beta[2], q(quadratic, "quadratic_coef"), 1e-9);
+        assertEquals(ols.estimateRegressionStandardError(), q(quadratic, "residual_sd"), 1e-9);
+        // Back-calculation inverts the quadratic: x̂ solves a + b·x + c·x² = y.
+        double a = q(quadratic, "intercept");
+        double b = q(quadratic, "slope");
+        double c = q(quadratic, "quadratic_coef");
+        double back = q(quadratic, "back_calculated:B5"); // the fourth standard, x = 4
+        assertEquals(y[3], a + b * back + c * back * back, 1e-9);
+        assertTrue(quadratic.settings().stream().anyMatch(st -> st.value().startsWith("quadratic")));
+    }
+
+    @Test
+    void theQuadraticModelNeedsThreeLevels() {
+        InputException e = assertThrows(InputException.class, () -> run("model: quadratic\n",
+                block(new String[] {"1", "1", "2", "2"}, new String[] {"1", "1.1", "2", "2.1"})));
+        assertEquals(ErrorKey.TOO_FEW_POINTS, e.key());
+        assertEquals("study.md line 13", e.problems().get(0).where());
+    }
+
+    @Test
+    void normalityOfTheResidualsIsTestedAndReported() {
+        SectionResult s = run("", block(text(X), text(Y)));
+        double w = q(s, "shapiro_w");
+        assertTrue(w > 0 && w <= 1, "W lies in (0, 1]");
+        double p = q(s, "shapiro_p");
+        assertTrue(p > 0 && p <= 1);
     }
 }

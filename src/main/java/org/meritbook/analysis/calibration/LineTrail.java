@@ -1,19 +1,17 @@
 package org.meritbook.analysis.calibration;
 
-import java.util.ArrayList;
 import java.util.List;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.LineFit;
 import org.meritbook.stats.LineModel;
-import org.meritbook.stats.Weighting;
 import org.meritbook.trail.StepInput;
 
 /**
  * Records a straight-line calibration as named quantities, each with the formula and the inputs it
  * came from (raw inputs with their cell addresses, derived ones by step id).
  */
-final class CalibrationTrail {
+final class LineTrail {
     private static final String LS_REFERENCE =
             "weighted least squares; Draper & Smith, Applied Regression Analysis, ch. 1 and 9";
 
@@ -24,7 +22,7 @@ final class CalibrationTrail {
     private final String xUnit;
     private final String yUnit;
 
-    CalibrationTrail(SectionBuilder section, CalibrationData data, LineFit fit) {
+    LineTrail(SectionBuilder section, CalibrationData data, LineFit fit) {
         this.section = section;
         this.data = data;
         this.fit = fit;
@@ -33,8 +31,9 @@ final class CalibrationTrail {
         this.yUnit = data.yUnit();
     }
 
-    void record() {
-        String points = recordPoints();
+    /** Records the fit's steps; returns how a response is inverted, for the back-calculation. */
+    BackCalculation.Inversion record() {
+        String points = PointsStep.record(section, data, fit.weighting(), fit.weights(), fit.n());
         String t = section.step("t", "Student t quantile, two-sided 95 %", "t = t(0.975; df), df = n − "
                         + (origin ? "1" : "2"),
                 List.of(StepInput.number("df", fit.degreesOfFreedom(), null, points)), fit.tQuantile(
@@ -46,8 +45,8 @@ final class CalibrationTrail {
         String sxx = section.step("sxx", "Weighted sum of squares of concentration",
                 origin ? "Sxx = Σwᵢxᵢ²" : "Sxx = Σwᵢ(xᵢ − x̄w)²",
                 origin ? List.of(from("x, w", points)) : List.of(from("x, w", points), section.ref("x̄w", xMean)),
-                fit.sxx(), squared(xUnit), null);
-        String slopeUnit = ratioUnit(yUnit, xUnit);
+                fit.sxx(), Units.squared(xUnit), null);
+        String slopeUnit = Units.ratio(yUnit, xUnit);
         String slope = section.quantity(QuantityDraft.of("slope", "Slope (sensitivity)",
                         origin ? "b = Σwᵢxᵢyᵢ / Σwᵢxᵢ²" : "b = Σwᵢ(xᵢ − x̄w)(yᵢ − ȳw) / Sxx",
                         origin ? List.of(from("x, y, w", points), section.ref("Sxx", sxx))
@@ -89,77 +88,13 @@ final class CalibrationTrail {
                 origin ? "Coefficient of determination r² (uncentred, through origin)" : "Coefficient of determination r²",
                 origin ? "r² = Σwᵢŷᵢ² / Σwᵢyᵢ²" : "r² = r·r",
                 List.of(from("x, y, w", points), section.ref("b", slope)), fit.rSquared(), null).inSummary());
-        recordBackCalculation(intercept, slope);
-    }
-
-    /** One step listing every point used, with cell addresses, and every point left out with its reason. */
-    private String recordPoints() {
-        List<StepInput> inputs = new ArrayList<>();
-        Weighting w = fit.weighting();
-        double[] weights = fit.weights();
-        int k = 0;
-        for (CalibrationPoint p : data.points()) {
-            if (p.used()) {
-                k++;
-                inputs.add(StepInput.number("x" + k, p.x(), xUnit, p.xCell().ref().address()));
-                inputs.add(StepInput.number("y" + k, p.y(), yUnit, p.yCell().ref().address()));
-                if (w != Weighting.NONE) {
-                    inputs.add(StepInput.number("w" + k, weights[k - 1], null,
-                            w.notation() + ", normalised to mean 1"));
-                }
-            } else {
-                inputs.add(StepInput.text("excluded " + p.yCell().ref().address(), p.exclusionReason(),
-                        "notebook exclude"));
-            }
-        }
-        String block = data.block().sheet() + "!" + data.block().range();
-        for (String decision : data.block().decisions()) {
-            inputs.add(StepInput.text("reading " + block, decision, data.block().file().getFileName().toString()));
-        }
-        return section.quantity(QuantityDraft.of("n", "Number of calibration points in the fit",
-                "n = points in the range not excluded", inputs, fit.n(), null));
-    }
-
-    private void recordBackCalculation(String intercept, String slope) {
-        for (CalibrationPoint p : data.points()) {
-            if (!Double.isFinite(p.x()) || !Double.isFinite(p.y())) {
-                continue;
-            }
-            String yAddress = p.yCell().ref().address();
-            List<StepInput> in = new ArrayList<>();
-            in.add(StepInput.number("y", p.y(), yUnit, yAddress));
-            if (intercept != null) {
-                in.add(section.ref("a", intercept));
-            }
-            in.add(section.ref("b", slope));
-            double back = fit.inverse(p.y());
-            String backId = section.quantity(QuantityDraft.of("back_calculated:" + p.label(),
-                    "Back-calculated concentration, " + yAddress + (p.used() ? "" : " (excluded)"),
-                    intercept != null ? "x̂ = (y − a) / b" : "x̂ = y / b", in, back, xUnit));
-            if (p.x() != 0) {
-                section.quantity(QuantityDraft.of("deviation_percent:" + p.label(),
-                        "Deviation from nominal, " + yAddress + (p.used() ? "" : " (excluded)"),
-                        "%dev = (x̂ − x) / x × 100",
-                        List.of(section.ref("x̂", backId), StepInput.number("x", p.x(), xUnit, p.xCell().ref().address())),
-                        (back - p.x()) / p.x() * 100.0, "%"));
-            }
-        }
+        List<StepInput> coefficients = intercept == null ? List.of(section.ref("b", slope))
+                : List.of(section.ref("a", intercept), section.ref("b", slope));
+        return new BackCalculation.Inversion(intercept == null ? "x̂ = y / b" : "x̂ = (y − a) / b", coefficients);
     }
 
     /** A reference to the data set listed in a step (not a single number). */
-    private static StepInput from(String name, String stepId) {
+    static StepInput from(String name, String stepId) {
         return StepInput.text(name, "the points listed in " + stepId, stepId);
-    }
-
-    static String ratioUnit(String numerator, String denominator) {
-        if (numerator == null || denominator == null) {
-            return numerator == null && denominator == null ? null
-                    : (numerator == null ? "1/(" + denominator + ")" : numerator);
-        }
-        return numerator + " per " + denominator;
-    }
-
-    private static String squared(String unit) {
-        return unit == null ? null : "(" + unit + ")²";
     }
 }
