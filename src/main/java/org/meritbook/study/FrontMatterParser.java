@@ -180,12 +180,7 @@ final class FrontMatterParser {
                     "Correct the file name.");
             return Optional.empty();
         }
-        if (relative.isAbsolute() || written.startsWith("/") || written.startsWith("\\")) {
-            problems.add(ErrorKey.FRONT_MATTER, e.line(), "a path relative to the notebook's folder",
-                    Problems.quote(written),
-                    "Write the path relative to the notebook, so the study can be moved and re-run as a whole.");
-            return Optional.empty();
-        }
+        // Relative paths resolve against the notebook's folder; absolute ones (a shared drive) stand as written.
         return Optional.of(new SourceFile(e.name(), notebookDir.resolve(relative).normalize(), written, e.line()));
     }
 

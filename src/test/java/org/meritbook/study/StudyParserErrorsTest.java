@@ -1,6 +1,7 @@
 package org.meritbook.study;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.nio.file.Path;
@@ -332,7 +333,7 @@ class StudyParserErrorsTest {
                 revision: 0
                 date: 2025-02-30
                 sources:
-                  runs: /data/runs.xlsx
+                  run data: runs.xlsx
                 ---
                 """);
         assertEquals(List.of(ErrorKey.FRONT_MATTER), found.stream().map(Problem::key).distinct().toList());
@@ -343,6 +344,8 @@ class StudyParserErrorsTest {
                 + " revision as 1, 2, 3, ...", found.get(1).message());
         assertEquals("study.md line 4: expected a date as yyyy-mm-dd, e.g. 2025-03-14 but found '2025-02-30'. Write"
                 + " the date in ISO form (year-month-day) and check that the day exists.", found.get(2).message());
+        assertTrue(found.get(3).message().startsWith("study.md line 6: expected a source alias of letters, digits"),
+                found.get(3).message());
 
         assertProblem(ErrorKey.FRONT_MATTER, "study.md line 1", only("""
                 ---
