@@ -94,6 +94,7 @@ public final class ResultsJson {
             qn.put("unit", q.unit());
             qn.put("label", q.label());
             qn.put("step", q.stepId());
+            qn.put("summary", q.summary());
             if (q.interval() != null) {
                 qn.putObject("ci").put("low", q.interval().low()).put("high", q.interval().high())
                         .put("level", q.interval().level());
