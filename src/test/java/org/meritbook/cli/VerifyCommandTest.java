@@ -1,0 +1,102 @@
+package org.meritbook.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayInputStream;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.function.UnaryOperator;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.common.filespecification.PDComplexFileSpecification;
+import org.apache.pdfbox.pdmodel.common.filespecification.PDEmbeddedFile;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+/** {@code meritbook verify}: a dossier re-run from its own attachments, and tampering caught. */
+class VerifyCommandTest {
+    @TempDir
+    static Path dir;
+    static Path dossier;
+
+    private record Outcome(int code, String out, String err) {
+    }
+
+    private static Outcome execute(String... args) {
+        CommandLine cl = Main.commandLine();
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        cl.setOut(new PrintWriter(out));
+        cl.setErr(new PrintWriter(err));
+        return new Outcome(cl.execute(args), out.toString(), err.toString());
+    }
+
+    @BeforeAll
+    static void writeTheDemoDossier() {
+        assertEquals(0, execute("demo", "-o", dir.toString()).code());
+        dossier = dir.resolve("hmf-honey-validation/hmf-honey-validation-rev1.pdf");
+    }
+
+    /** A copy of the dossier with one attachment's bytes replaced. */
+    private static Path tampered(String attachment, UnaryOperator<byte[]> change) throws Exception {
+        Path copy = dir.resolve("tampered-" + attachment + ".pdf");
+        try (PDDocument doc = Loader.loadPDF(dossier.toFile())) {
+            PDComplexFileSpecification spec = doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames()
+                    .get(attachment);
+            byte[] bytes = change.apply(spec.getEmbeddedFile().toByteArray());
+            spec.setEmbeddedFile(new PDEmbeddedFile(doc, new ByteArrayInputStream(bytes)));
+            doc.save(copy.toFile());
+        }
+        return copy;
+    }
+
+    @Test
+    void theDemoDossierIsReproducedFromItsAttachments() {
+        Outcome o = execute("verify", dossier.toString());
+        assertEquals(0, o.code(), o.out() + o.err());
+        assertTrue(o.out().matches("(?s)meritbook: verified hmf-honey-validation-rev1.pdf: all \\d+ results of 2 sections "
+                + "reproduced exactly from its attached inputs.\\s*"), o.out());
+    }
+
+    @Test
+    void anAlteredResultIsListed() throws Exception {
+        Path copy = tampered("results.json", bytes -> {
+            String json = new String(bytes, StandardCharsets.UTF_8);
+            // Change the slope's recorded value in the linearity section: the first "slope" entry.
+            int at = json.indexOf("\"slope\" : {");
+            int value = json.indexOf("\"value\" : ", at) + "\"value\" : ".length();
+            int end = json.indexOf(',', value);
+            return (json.substring(0, value) + "41.0" + json.substring(end)).getBytes(StandardCharsets.UTF_8);
+        });
+        Outcome o = execute("verify", copy.toString());
+        assertEquals(1, o.code(), o.out() + o.err());
+        assertTrue(o.out().contains("NOT verified"), o.out());
+        assertTrue(o.out().contains("linearity.slope: recorded 41.0, re-run gives 41.7"), o.out());
+    }
+
+    @Test
+    void anAlteredWorkbookIsRefused() throws Exception {
+        Path copy = tampered("hmf-honey-validation.xlsx", bytes -> {
+            byte[] b = bytes.clone();
+            b[b.length / 2] ^= 1;
+            return b;
+        });
+        Outcome o = execute("verify", copy.toString());
+        assertEquals(2, o.code(), o.out() + o.err());
+        assertTrue(o.err().contains("expected an attached file with the SHA-256 the manifest records for 'lab' "
+                + "(hmf-honey-validation.xlsx) but found none: the attachment is missing or was altered."), o.err());
+    }
+
+    @Test
+    void aFileThatIsNotADossierIsBadInput() throws Exception {
+        Path notPdf = dir.resolve("notes.pdf");
+        Files.writeString(notPdf, "not a pdf");
+        assertEquals(2, execute("verify", notPdf.toString()).code());
+    }
+}
