@@ -17,7 +17,9 @@ import org.meritbook.pipeline.AtomicFiles;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.revision.InputFile;
+import org.meritbook.revision.PreviousRevisions;
 import org.meritbook.revision.ResultsJson;
+import org.meritbook.revision.RevisionContext;
 import org.meritbook.trail.TrailMarkdown;
 import org.meritbook.trail.TrailSection;
 
@@ -33,8 +35,12 @@ final class StudyOutput {
     static int runAndWrite(Path notebook, OutputOptions options, PrintWriter out) {
         StudyResults results = StudyRunner.withBuiltInAnalyses().run(notebook);
         Path folder = options.out.resolve(baseName(notebook));
-        byte[] json = ResultsJson.toBytes(results);
-        RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates)).render(results, json);
+        String stem = baseName(notebook);
+        RevisionContext revisions = PreviousRevisions.find(folder, stem, results.study().frontMatter().revision(),
+                ResultsJson.toTree(results));
+        byte[] json = ResultsJson.toBytes(results, revisions.earlier());
+        RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates))
+                .render(results, json, revisions);
         List<Path> written = new DossierWriter().write(dossier, folder, DossierWriter.baseName(results.study()),
                 options.force);
         AtomicFiles.write(folder.resolve("results.json"), json);

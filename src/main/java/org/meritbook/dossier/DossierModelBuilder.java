@@ -13,6 +13,9 @@ import org.meritbook.dossier.DossierView.Chapter;
 import org.meritbook.dossier.DossierView.Cover;
 import org.meritbook.dossier.DossierView.InputRow;
 import org.meritbook.dossier.DossierView.Notes;
+import org.meritbook.dossier.DossierView.ChangeGroup;
+import org.meritbook.dossier.DossierView.ChangeRow;
+import org.meritbook.dossier.DossierView.Changes;
 import org.meritbook.dossier.DossierView.RevisionRow;
 import org.meritbook.dossier.DossierView.SoftwareRow;
 import org.meritbook.dossier.DossierView.Summary;
@@ -21,6 +24,9 @@ import org.meritbook.dossier.DossierView.TocEntry;
 import org.meritbook.dossier.DossierView.TrailGroup;
 import org.meritbook.figures.SvgChartRenderer;
 import org.meritbook.pipeline.StudyResults;
+import org.meritbook.revision.RevisionContext;
+import org.meritbook.revision.RevisionDiff;
+import org.meritbook.revision.RevisionEntry;
 import org.meritbook.revision.InputFile;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.FrontMatter;
@@ -42,7 +48,8 @@ final class DossierModelBuilder {
         this.renderingLibraries = List.copyOf(renderingLibraries);
     }
 
-    DossierView build(StudyResults results, List<PdfAFinisher.Embedded> files, DocumentDate date, String documentId) {
+    DossierView build(StudyResults results, List<PdfAFinisher.Embedded> files, DocumentDate date, String documentId,
+                      RevisionContext earlier) {
         FrontMatter fm = results.study().frontMatter();
         NarrativePlacement placement = new NarrativePlacement(results.study(), narrative);
         List<TocEntry> toc = new ArrayList<>();
@@ -89,7 +96,12 @@ final class DossierModelBuilder {
         Cover cover = new Cover(fm.title(), orDash(fm.method()), orDash(fm.laboratory()),
                 String.valueOf(fm.revision()), date.display(), orDash(fm.preparedBy()), status(fm), summary.counts(),
                 fm.criteria() == null ? "none named" : fm.criteria(), documentId);
-        List<RevisionRow> revisions = List.of(new RevisionRow(String.valueOf(fm.revision()), date.display(),
+        List<RevisionRow> revisions = new ArrayList<>();
+        for (RevisionEntry e : earlier.earlier()) {
+            revisions.add(new RevisionRow(String.valueOf(e.revision()), orDash(e.date()), orDash(e.reason()),
+                    orDash(e.preparedBy())));
+        }
+        revisions.add(new RevisionRow(String.valueOf(fm.revision()), date.display(),
                 fm.revisionReason() == null || fm.revisionReason().isBlank()
                         ? (fm.revision() == 1 ? "First issue" : "No reason stated in the notebook")
                         : fm.revisionReason(), orDash(fm.preparedBy())));
@@ -100,8 +112,31 @@ final class DossierModelBuilder {
                         + "[U+4E2D]; the HTML version and the attached notebook keep the original text.",
                 "Results are rounded for display only (rules in the meritbook documentation, docs/dossier.md); "
                         + "results.json, attached, holds every value at full precision.");
-        return new DossierView(true, cover, revisions, toc, summary, intro, sections, closing, trailGroups,
+        return new DossierView(true, cover, revisions, changes(earlier), toc, summary, intro, sections, closing, trailGroups,
                 inputs(results, files), software(results), notes);
+    }
+
+    private static Changes changes(RevisionContext earlier) {
+        if (earlier.changes().isEmpty()) {
+            return new Changes(false, "", List.of());
+        }
+        RevisionDiff diff = earlier.changes().get();
+        int previous = earlier.earlier().get(earlier.earlier().size() - 1).revision();
+        List<ChangeGroup> groups = new ArrayList<>();
+        addGroup(groups, "Input files", diff.inputs());
+        addGroup(groups, "Input cells", diff.cells());
+        addGroup(groups, "Settings", diff.settings());
+        addGroup(groups, "Results (full precision)", diff.results());
+        return new Changes(true, "revision " + previous + " (" + earlier.sinceFile() + ")", groups);
+    }
+
+    private static void addGroup(List<ChangeGroup> groups, String title, List<RevisionDiff.Change> changes) {
+        if (!changes.isEmpty()) {
+            groups.add(new ChangeGroup(title + " (" + changes.size() + ")", changes.stream()
+                    .map(c -> new ChangeRow(c.what(), c.before() == null ? "—" : c.before(),
+                            c.after() == null ? "—" : c.after()))
+                    .toList()));
+        }
     }
 
     private Chapter chapter(List<Node> blocks, String title, String anchor, int number) {

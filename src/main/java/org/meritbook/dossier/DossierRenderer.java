@@ -18,6 +18,7 @@ import org.meritbook.dossier.DossierView.SoftwareRow;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.pipeline.StudyResults;
+import org.meritbook.revision.RevisionContext;
 import org.meritbook.revision.InputFile;
 import org.meritbook.study.FrontMatter;
 
@@ -51,6 +52,13 @@ public final class DossierRenderer {
      * @param resultsJson the results.json bytes written for this run (attached to the PDF)
      */
     public RenderedDossier render(StudyResults results, byte[] resultsJson) {
+        return render(results, resultsJson, RevisionContext.none());
+    }
+
+    /**
+     * @param revisions the earlier revisions' history and the changes since the latest one
+     */
+    public RenderedDossier render(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
         List<Attachment> plan = AttachmentPlan.of(results);
         List<PdfAFinisher.Embedded> files = new ArrayList<>();
         for (Attachment a : plan) {
@@ -60,7 +68,7 @@ public final class DossierRenderer {
         String idHex = HexFormat.of().formatHex(id);
         FrontMatter fm = results.study().frontMatter();
         DocumentDate date = DocumentDate.of(fm, results.inputs());
-        DossierView view = model.build(results, files, date, idHex);
+        DossierView view = model.build(results, files, date, idHex, revisions);
 
         byte[] html = templates.render(view.forPdf(false)).getBytes(StandardCharsets.UTF_8);
         String xhtml = templates.render(view);

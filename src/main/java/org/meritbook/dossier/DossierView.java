@@ -19,7 +19,7 @@ import java.util.List;
  * @param software   software and environment rows
  * @param notes      fixed explanatory notes (caution, display rules, replacement of missing glyphs)
  */
-public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions, List<TocEntry> contents,
+public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions, Changes changes, List<TocEntry> contents,
                           Summary summary, Chapter intro, List<SectionView> sections, Chapter closing,
                           List<TrailGroup> trail, List<InputRow> inputs, List<SoftwareRow> software, Notes notes) {
     public DossierView {
@@ -32,8 +32,32 @@ public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions,
     }
 
     DossierView forPdf(boolean asPdf) {
-        return new DossierView(asPdf, cover, revisions, contents, summary, intro, sections, closing, trail, inputs,
+        return new DossierView(asPdf, cover, revisions, changes, contents, summary, intro, sections, closing, trail, inputs,
                 software, notes);
+    }
+
+    /**
+     * Changes since the latest earlier revision whose dossier was found beside this one.
+     *
+     * @param present whether an earlier dossier was found
+     * @param since   e.g. "revision 1 (study-rev1.pdf)"
+     * @param groups  input files, input cells, settings, results; empty groups left out
+     */
+    public record Changes(boolean present, String since, List<ChangeGroup> groups) {
+        public Changes {
+            groups = List.copyOf(groups);
+        }
+    }
+
+    /** One kind of change, e.g. "Input cells", with its rows. */
+    public record ChangeGroup(String title, List<ChangeRow> rows) {
+        public ChangeGroup {
+            rows = List.copyOf(rows);
+        }
+    }
+
+    /** What changed, from what, to what ("—" for added or removed). */
+    public record ChangeRow(String what, String before, String after) {
     }
 
     /** Cover page and running header fields. */

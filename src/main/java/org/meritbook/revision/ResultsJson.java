@@ -1,11 +1,13 @@
 package org.meritbook.revision;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
@@ -30,8 +32,20 @@ public final class ResultsJson {
     }
 
     public static byte[] toBytes(StudyResults results) {
+        return toBytes(results, List.of());
+    }
+
+    /** With the earlier revisions' history, so each revision's results carry the whole chain. */
+    public static byte[] toBytes(StudyResults results, List<RevisionEntry> earlier) {
+        ObjectNode tree = toTree(results);
+        ArrayNode history = MAPPER.createArrayNode();
+        for (RevisionEntry e : earlier) {
+            history.addObject().put("revision", e.revision()).put("date", e.date()).put("reason", e.reason())
+                    .put("prepared_by", e.preparedBy());
+        }
+        ((ObjectNode) tree.get("study")).set("history", history);
         try {
-            String text = MAPPER.writeValueAsString(toTree(results)) + "\n";
+            String text = MAPPER.writeValueAsString(tree) + "\n";
             return text.getBytes(StandardCharsets.UTF_8);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("results tree could not be serialised", e);
@@ -66,6 +80,27 @@ public final class ResultsJson {
         ArrayNode software = root.putArray("software");
         results.software().forEach(c -> software.addObject().put("name", c.name()).put("version", c.version()));
         return root;
+    }
+
+    /** The earlier revisions a results tree records, oldest first (none for results without history). */
+    static List<RevisionEntry> history(JsonNode results) {
+        List<RevisionEntry> out = new java.util.ArrayList<>();
+        for (JsonNode h : results.path("study").path("history")) {
+            out.add(new RevisionEntry(h.get("revision").asInt(), text(h.get("date")), text(h.get("reason")),
+                    text(h.get("prepared_by"))));
+        }
+        return out;
+    }
+
+    /** The revision a results tree itself records. */
+    static RevisionEntry entry(JsonNode results) {
+        JsonNode fm = results.get("study").get("front_matter");
+        return new RevisionEntry(results.get("study").get("revision").asInt(), text(fm.get("date")),
+                text(fm.get("revision-reason")), text(fm.get("prepared-by")));
+    }
+
+    private static String text(JsonNode n) {
+        return n == null || n.isNull() ? null : n.asText();
     }
 
     private static ObjectNode study(StudyResults results) {

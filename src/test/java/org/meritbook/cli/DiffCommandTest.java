@@ -9,7 +9,13 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
+import org.meritbook.dossier.PdfAssertions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
@@ -61,6 +67,20 @@ class DiffCommandTest {
         assertTrue(report.contains("linearity.back_calculated:D16: "), report);
         assertTrue(!report.contains("Calibration!D15:"), "an unchanged cell is not listed:\n" + report);
         assertTrue(!report.contains("Settings"), "no statistical choice changed:\n" + report);
+
+        // Revision 2's dossier carries the history and the changes since revision 1, found beside it.
+        String text;
+        try (PDDocument doc = Loader.loadPDF(rev2.toFile())) {
+            text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+        }
+        assertTrue(text.contains("Changes since revision 1 (hmf-honey-validation-rev1.pdf)"), "changes chapter");
+        assertTrue(text.contains("Calibration!D16 21.08 21.8"), "the corrected cell in the changes");
+        assertTrue(text.contains("1 2026-11-20 First issue"), "revision 1 in the history");
+        assertTrue(text.contains("D16 corrected from 21.08 to 21.80"), "revision 2's reason");
+        JsonNode results = new ObjectMapper().readTree(dir.resolve("out/hmf-honey-validation/results.json").toFile());
+        assertEquals(1, results.get("study").get("history").get(0).get("revision").asInt());
+        assertEquals("First issue", results.get("study").get("history").get(0).get("reason").asText());
+        PdfAssertions.assertPdfA3(Files.readAllBytes(rev2)); // veraPDF, with the changes tables
 
         String same = execute(0, "diff", rev2.toString(), dir.resolve("out/hmf-honey-validation/results.json").toString());
         assertTrue(same.contains(": none"), same);

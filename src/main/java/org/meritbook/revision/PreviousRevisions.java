@@ -1,0 +1,66 @@
+package org.meritbook.revision;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+
+/**
+ * Finds the latest earlier revision's dossier ({@code <stem>-rev<M>.pdf}, M below the current
+ * revision) in a study's output folder, and from its attached results.json the revision history and
+ * the changes since. Earlier dossiers are only read, never touched.
+ */
+public final class PreviousRevisions {
+    private PreviousRevisions() {
+    }
+
+    /**
+     * @param folder   the study's output folder
+     * @param stem     the notebook's name without .md
+     * @param revision the revision being issued
+     * @param current  the results tree of the run being issued
+     */
+    public static RevisionContext find(Path folder, String stem, int revision, JsonNode current) {
+        Optional<Path> latest = latestEarlier(folder, stem, revision);
+        if (latest.isEmpty()) {
+            return RevisionContext.none();
+        }
+        Path pdf = latest.get();
+        JsonNode previous = RevisionDiffer.read(pdf);
+        List<RevisionEntry> history = new ArrayList<>(ResultsJson.history(previous));
+        history.add(ResultsJson.entry(previous));
+        RevisionDiff diff = RevisionDiffer.diff(pdf.getFileName().toString(), previous, "this revision", current);
+        return new RevisionContext(history, Optional.of(diff), pdf.getFileName().toString());
+    }
+
+    private static Optional<Path> latestEarlier(Path folder, String stem, int revision) {
+        if (!Files.isDirectory(folder)) {
+            return Optional.empty();
+        }
+        Pattern name = Pattern.compile(Pattern.quote(stem) + "-rev([0-9]{1,6})\\.pdf");
+        Path best = null;
+        int bestRevision = 0;
+        try (Stream<Path> files = Files.list(folder)) {
+            for (Path p : files.toList()) {
+                Matcher m = name.matcher(p.getFileName().toString());
+                if (m.matches()) {
+                    int r = Integer.parseInt(m.group(1));
+                    if (r < revision && r > bestRevision) {
+                        best = p;
+                        bestRevision = r;
+                    }
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot list the output folder " + folder, e);
+        }
+        return Optional.ofNullable(best);
+    }
+}
