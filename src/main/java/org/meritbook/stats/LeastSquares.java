@@ -77,8 +77,8 @@ public final class LeastSquares {
         requireVariation("y", y, centred);
 
         double sumW = sum(w);
-        double meanX = weightedMean(x, w, sumW);
-        double meanY = weightedMean(y, w, sumW);
+        double meanX = WeightedMean.of(x, w, sumW);
+        double meanY = WeightedMean.of(y, w, sumW);
         double cx = centred ? meanX : 0;
         double cy = centred ? meanY : 0;
 
@@ -203,7 +203,7 @@ public final class LeastSquares {
         }
 
         double sumW = sum(w);
-        double meanY = weightedMean(y, w, sumW);
+        double meanY = WeightedMean.of(y, w, sumW);
         double ssTotal = 0;
         for (int i = 0; i < n; i++) {
             double d = y[i] - meanY;
@@ -258,19 +258,5 @@ public final class LeastSquares {
             total += v;
         }
         return total;
-    }
-
-    /** Two-pass weighted mean: a first estimate, then the weighted mean deviation from it added back. */
-    private static double weightedMean(double[] v, double[] w, double sumW) {
-        double first = 0;
-        for (int i = 0; i < v.length; i++) {
-            first += w[i] * v[i];
-        }
-        first /= sumW;
-        double correction = 0;
-        for (int i = 0; i < v.length; i++) {
-            correction += w[i] * (v[i] - first);
-        }
-        return first + correction / sumW;
     }
 }

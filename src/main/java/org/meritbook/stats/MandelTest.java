@@ -86,7 +86,7 @@ public record MandelTest(double ssResidualLinear, double ssResidualQuadratic, do
         for (double v : w) {
             sumW += v;
         }
-        double meanY = QuadraticDesign.weightedMean(y, w, sumW);
+        double meanY = WeightedMean.of(y, w, sumW);
         double ssTotal = 0;
         for (int i = 0; i < y.length; i++) {
             ssTotal += w[i] * (y[i] - meanY) * (y[i] - meanY);

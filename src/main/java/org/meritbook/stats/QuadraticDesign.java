@@ -52,7 +52,7 @@ final class QuadraticDesign {
         for (double v : w) {
             sumW += v;
         }
-        centre = weightedMean(x, w, sumW);
+        centre = WeightedMean.of(x, w, sumW);
         double h = 0;
         for (double v : x) {
             h = Math.max(h, Math.abs(v - centre));
@@ -162,19 +162,5 @@ final class QuadraticDesign {
             total += v * v;
         }
         return total;
-    }
-
-    /** Two-pass weighted mean: a first estimate, then the weighted mean deviation from it added back. */
-    static double weightedMean(double[] v, double[] w, double sumW) {
-        double first = 0;
-        for (int i = 0; i < v.length; i++) {
-            first += w[i] * v[i];
-        }
-        first /= sumW;
-        double correction = 0;
-        for (int i = 0; i < v.length; i++) {
-            correction += w[i] * (v[i] - first);
-        }
-        return first + correction / sumW;
     }
 }
