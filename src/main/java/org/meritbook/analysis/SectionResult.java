@@ -40,6 +40,11 @@ public record SectionResult(String id, AnalysisKind kind, String title, List<Set
         }
     }
 
+    /** The same section with these verdicts (acceptance is judged after the analysis). */
+    public SectionResult withVerdicts(List<Verdict> judged) {
+        return new SectionResult(id, kind, title, settings, quantities, steps, table, figures, judged, warnings);
+    }
+
     public Optional<Quantity> quantity(String name) {
         return quantities.stream().filter(q -> q.name().equals(name)).findFirst();
     }

@@ -54,13 +54,23 @@ final class StudyOutput {
             out.println("  " + s.id() + ": " + summary + (s.warnings().isEmpty() ? ""
                     : " (" + s.warnings().size() + " warning" + (s.warnings().size() == 1 ? "" : "s") + ")"));
         }
+        List<Verdict> verdicts = results.sections().stream().flatMap(s -> s.verdicts().stream()).toList();
+        if (results.study().frontMatter().criteria() != null) {
+            out.println("  acceptance (" + results.study().frontMatter().criteria() + "): "
+                    + count(verdicts, Verdict.Outcome.PASS) + " passed, " + count(verdicts, Verdict.Outcome.FAIL)
+                    + " failed, " + count(verdicts, Verdict.Outcome.NOT_EVALUABLE) + " not evaluable");
+            verdicts.stream().filter(v -> v.outcome() == Verdict.Outcome.FAIL)
+                    .forEach(v -> out.println("    FAIL " + v.characteristic() + ": " + v.reason()));
+        }
         written.forEach(p -> out.println("  wrote " + p));
         out.println("  wrote " + folder.resolve("results.json"));
         out.println("  wrote " + folder.resolve("trail.md"));
         out.flush();
-        boolean failed = results.sections().stream().flatMap(s -> s.verdicts().stream())
-                .anyMatch(v -> v.outcome() == Verdict.Outcome.FAIL);
-        return failed ? Main.ACCEPTANCE_FAILED : Main.DONE;
+        return count(verdicts, Verdict.Outcome.FAIL) > 0 ? Main.ACCEPTANCE_FAILED : Main.DONE;
+    }
+
+    private static long count(List<Verdict> verdicts, Verdict.Outcome outcome) {
+        return verdicts.stream().filter(v -> v.outcome() == outcome).count();
     }
 
     static String baseName(Path notebook) {

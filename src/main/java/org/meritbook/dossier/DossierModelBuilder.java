@@ -8,6 +8,7 @@ import java.util.Optional;
 import org.commonmark.node.Node;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
+import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.Verdict;
 import org.meritbook.dossier.DossierView.Chapter;
 import org.meritbook.dossier.DossierView.Cover;
@@ -16,6 +17,8 @@ import org.meritbook.dossier.DossierView.Notes;
 import org.meritbook.dossier.DossierView.ChangeGroup;
 import org.meritbook.dossier.DossierView.ChangeRow;
 import org.meritbook.dossier.DossierView.Changes;
+import org.meritbook.dossier.DossierView.Profile;
+import org.meritbook.dossier.DossierView.ProfileRule;
 import org.meritbook.dossier.DossierView.RevisionRow;
 import org.meritbook.dossier.DossierView.SoftwareRow;
 import org.meritbook.dossier.DossierView.Summary;
@@ -92,7 +95,7 @@ final class DossierModelBuilder {
         toc.add(new TocEntry("B", "Input manifest", "manifest", List.of()));
         toc.add(new TocEntry("C", "Software and environment", "software", List.of()));
 
-        Summary summary = summary(summaryNumber, results.sections(), sections);
+        Summary summary = summary(summaryNumber, results.sections(), sections, profile(results.acceptance()));
         Cover cover = new Cover(fm.title(), orDash(fm.method()), orDash(fm.laboratory()),
                 String.valueOf(fm.revision()), date.display(), orDash(fm.preparedBy()), status(fm), summary.counts(),
                 fm.criteria() == null ? "none named" : fm.criteria(), documentId);
@@ -155,7 +158,15 @@ final class DossierModelBuilder {
         return chapter(blocks, "Closing notes", "closing", number);
     }
 
-    private Summary summary(String number, List<SectionResult> results, List<SectionView> views) {
+    private static Profile profile(AcceptanceProfile p) {
+        if (p == null) {
+            return new Profile(false, "", "", List.of());
+        }
+        return new Profile(true, p.name() + " (" + p.origin() + ")", p.description(),
+                p.rules().stream().map(r -> new ProfileRule(r.text(), r.source())).toList());
+    }
+
+    private Summary summary(String number, List<SectionResult> results, List<SectionView> views, Profile profile) {
         List<SummaryRow> rows = new ArrayList<>();
         int pass = 0, fail = 0, na = 0, none = 0;
         for (SectionResult r : results) {
@@ -198,7 +209,7 @@ final class DossierModelBuilder {
         }
         String counts = pass + " passed, " + fail + " failed, " + na + " not evaluable; " + none
                 + (none == 1 ? " result" : " results") + " without a criterion";
-        return new Summary(number, rows, counts);
+        return new Summary(number, rows, counts, profile);
     }
 
     private List<InputRow> inputs(StudyResults results, List<PdfAFinisher.Embedded> files) {

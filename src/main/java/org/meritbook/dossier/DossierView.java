@@ -79,10 +79,28 @@ public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions,
         }
     }
 
-    public record Summary(String number, List<SummaryRow> rows, String counts) {
+    public record Summary(String number, List<SummaryRow> rows, String counts, Profile profile) {
         public Summary {
             rows = List.copyOf(rows);
         }
+    }
+
+    /**
+     * The acceptance profile the verdicts come from.
+     *
+     * @param present     whether the notebook named one
+     * @param heading     e.g. "linearity-basic (built in)"
+     * @param description what it is for
+     * @param rules       its rules with their sources
+     */
+    public record Profile(boolean present, String heading, String description, List<ProfileRule> rules) {
+        public Profile {
+            rules = List.copyOf(rules);
+        }
+    }
+
+    /** One rule of the profile and where its limit comes from. */
+    public record ProfileRule(String rule, String source) {
     }
 
     /**

@@ -18,6 +18,8 @@ import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.DataAccess;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
+import org.meritbook.criteria.AcceptanceProfile;
+import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.revision.InputFile;
@@ -52,6 +54,7 @@ public final class StudyRunner {
 
     public StudyResults run(Study study) {
         checkKindsAvailable(study);
+        AcceptanceProfile profile = AcceptanceProfiles.of(study);
         Map<String, Set<String>> rangesBySource = new LinkedHashMap<>();
         List<SectionResult> sections = new ArrayList<>();
         try (WorkbookReader reader = new WorkbookReader()) {
@@ -64,10 +67,11 @@ public final class StudyRunner {
             };
             AnalysisContext context = new AnalysisContext(study, access);
             for (AnalysisCell cell : study.cells()) {
-                sections.add(analyses.get(cell.kind()).run(cell, context));
+                SectionResult section = analyses.get(cell.kind()).run(cell, context);
+                sections.add(profile == null ? section : profile.judge(section));
             }
             return new StudyResults(study, inputs(study, rangesBySource, reader), sections,
-                    SoftwareInventory.components());
+                    SoftwareInventory.components(), profile);
         }
     }
 

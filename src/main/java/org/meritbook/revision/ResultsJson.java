@@ -11,6 +11,8 @@ import java.util.List;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
+import org.meritbook.criteria.AcceptanceProfile;
+import org.meritbook.criteria.Rule;
 import org.meritbook.criteria.Verdict;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.study.FrontMatter;
@@ -110,6 +112,15 @@ public final class ResultsJson {
         n.put("title", fm.title());
         n.put("revision", fm.revision());
         n.set("front_matter", MAPPER.valueToTree(fm.all()));
+        AcceptanceProfile profile = results.acceptance();
+        if (profile != null) {
+            ObjectNode a = n.putObject("acceptance");
+            a.put("name", profile.name()).put("origin", profile.origin()).put("description", profile.description());
+            ArrayNode rules = a.putArray("rules");
+            for (Rule rule : profile.rules()) {
+                rules.addObject().put("rule", rule.text()).put("source", rule.source());
+            }
+        }
         return n;
     }
 

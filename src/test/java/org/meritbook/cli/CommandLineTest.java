@@ -114,6 +114,25 @@ class CommandLineTest {
     }
 
     @Test
+    void aFailedAcceptanceRuleExitsOneAndStillWritesTheDossier() throws Exception {
+        workbook(null);
+        Path nb = notebook("runs!Cal!A1:B6");
+        Files.writeString(dir.resolve("strict.yaml"), """
+                name: strict
+                rules:
+                  - quantity: r_squared
+                    at-least: 0.9999999
+                    characteristic: Linearity
+                """);
+        Files.writeString(nb, Files.readString(nb).replace("title: Exit code check", "title: Exit code check\ncriteria: strict.yaml"));
+        Outcome o = execute("run", nb.toString(), "-o", dir.resolve("out").toString());
+        assertEquals(1, o.code(), o.err());
+        assertTrue(o.out().contains("acceptance (strict.yaml): 0 passed, 1 failed, 0 not evaluable"), o.out());
+        assertTrue(o.out().contains("FAIL Linearity: r_squared = 0.99"), o.out());
+        assertTrue(Files.exists(dir.resolve("out/study/study-rev1.pdf")), "the dossier is written all the same");
+    }
+
+    @Test
     void textInANumericColumnExitsTwoNamingTheCell() throws Exception {
         workbook("<0.05");
         Outcome o = execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());

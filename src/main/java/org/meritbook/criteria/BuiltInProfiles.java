@@ -1,0 +1,33 @@
+package org.meritbook.criteria;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.meritbook.study.AnalysisKind;
+
+/**
+ * The acceptance profiles meritbook ships. They are defaults, stated with their sources, for the
+ * laboratory to confirm against its own procedures and the rules that apply to it.
+ */
+public final class BuiltInProfiles {
+    private BuiltInProfiles() {
+    }
+
+    public static Map<String, AcceptanceProfile> all() {
+        Map<String, AcceptanceProfile> all = new LinkedHashMap<>();
+        all.put("linearity-basic", new AcceptanceProfile("linearity-basic",
+                "A straight-line calibration that is linear by the usual statistical checks.", "built in", List.of(
+                        new QuantityRule(AnalysisKind.CALIBRATION, "Linearity", "r_squared", true, 0.995, "r²", null,
+                                "common practice for chromatographic assays; confirm locally"),
+                        new QuantityRule(AnalysisKind.CALIBRATION, "Linearity: lack of fit", "lack_of_fit_p", true, 0.05,
+                                "lack-of-fit p", null, "lack-of-fit F test at the 5 % level"),
+                        new QuantityRule(AnalysisKind.CALIBRATION, "Linearity: no curvature", "mandel_p", true, 0.05,
+                                "Mandel p", "straight line", "Mandel's fitting test at the 5 % level (ISO 8466-1)"))));
+        all.put("bioanalytical-calibration", new AcceptanceProfile("bioanalytical-calibration",
+                "Calibration standards of a bioanalytical method: back-calculated concentrations near nominal.",
+                "built in", List.of(new DeviationRule("Back-calculated standards", 15, 20, 0.75,
+                        "ICH M10 bioanalytical method validation, calibration curve (±15 %, ±20 % at the LLOQ, "
+                                + "75 % of standards)"))));
+        return all;
+    }
+}

@@ -1,0 +1,84 @@
+package org.meritbook.criteria;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.meritbook.analysis.DataTable;
+import org.meritbook.analysis.Quantity;
+import org.meritbook.analysis.SectionResult;
+import org.meritbook.study.AnalysisKind;
+import org.meritbook.trail.Step;
+import org.meritbook.trail.StepInput;
+
+/**
+ * Back-calculated calibration standards within ±tolerance % of nominal (±lowestLevelTolerance % at
+ * the lowest concentration level), for at least a fraction of the standards in the fit. Excluded
+ * standards are not judged; they carry their own reason.
+ *
+ * @param characteristic  what is judged, e.g. "Back-calculated standards"
+ * @param tolerance       allowed |% deviation|
+ * @param lowestTolerance allowed |% deviation| at the lowest level
+ * @param minimumFraction fraction of standards that must be within their limit, in (0, 1]
+ * @param source          where the limits come from
+ */
+public record DeviationRule(String characteristic, double tolerance, double lowestTolerance, double minimumFraction,
+                            String source) implements Rule {
+    static final String PREFIX = "deviation_percent:";
+
+    public DeviationRule {
+        if (!(tolerance > 0 && lowestTolerance > 0 && minimumFraction > 0 && minimumFraction <= 1)) {
+            throw new IllegalArgumentException("deviation limits must be positive and the fraction in (0, 1]");
+        }
+    }
+
+    @Override
+    public String text() {
+        return "back-calculated standards within ±" + Limits.text(tolerance) + " % of nominal (±"
+                + Limits.text(lowestTolerance) + " % at the lowest level), at least "
+                + Limits.text(minimumFraction * 100) + " % of them";
+    }
+
+    @Override
+    public Optional<Verdict> judge(SectionResult section) {
+        if (section.kind() != AnalysisKind.CALIBRATION) {
+            return Optional.empty();
+        }
+        List<double[]> judged = new ArrayList<>(); // nominal, deviation
+        List<String> labels = new ArrayList<>();
+        for (DataTable.Row row : section.table().rows()) {
+            Optional<Quantity> dev = section.quantity(PREFIX + row.label());
+            if (row.excluded() || dev.isEmpty()) {
+                continue;
+            }
+            judged.add(new double[] {nominal(section, dev.get()), dev.get().value()});
+            labels.add(row.label());
+        }
+        if (judged.isEmpty()) {
+            return Optional.of(new Verdict(characteristic, null, text(), Verdict.Outcome.NOT_EVALUABLE,
+                    "no back-calculated standard with a non-zero nominal concentration"));
+        }
+        double lowest = judged.stream().mapToDouble(p -> p[0]).min().orElseThrow();
+        List<String> outside = new ArrayList<>();
+        for (int i = 0; i < judged.size(); i++) {
+            double[] p = judged.get(i);
+            double limit = p[0] == lowest ? lowestTolerance : tolerance;
+            if (Math.abs(p[1]) > limit) {
+                outside.add(labels.get(i) + " (" + Limits.text(p[1]) + " %)");
+            }
+        }
+        int within = judged.size() - outside.size();
+        boolean pass = within >= minimumFraction * judged.size() - 1e-9;
+        String reason = within + " of " + judged.size() + " standards within their limit"
+                + (outside.isEmpty() ? "" : "; outside: " + String.join(", ", outside));
+        return Optional.of(new Verdict(characteristic, null, text(),
+                pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL, reason));
+    }
+
+    /** The nominal concentration x the deviation step used, as its trail records it. */
+    private static double nominal(SectionResult section, Quantity deviation) {
+        Step step = section.steps().stream().filter(s -> s.id().equals(deviation.stepId())).findFirst()
+                .orElseThrow(() -> new IllegalStateException("no trail step for " + deviation.name()));
+        return step.inputs().stream().filter(in -> in.name().equals("x")).mapToDouble(StepInput::value).findFirst()
+                .orElseThrow(() -> new IllegalStateException("step " + step.id() + " records no nominal x"));
+    }
+}

@@ -1,0 +1,136 @@
+package org.meritbook.criteria;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.meritbook.error.ErrorKey;
+import org.meritbook.error.InputException;
+import org.meritbook.study.AnalysisKind;
+import org.yaml.snakeyaml.LoaderOptions;
+import org.yaml.snakeyaml.Yaml;
+import org.yaml.snakeyaml.constructor.SafeConstructor;
+import org.yaml.snakeyaml.error.YAMLException;
+
+/**
+ * A laboratory's own acceptance profile, a YAML file:
+ *
+ * <pre>
+ * name: QC-lab linearity
+ * description: SOP QA-12, section 4
+ * rules:
+ *   - quantity: r_squared          # any calibration quantity name
+ *     at-least: 0.998              # or at-most:
+ *     characteristic: Linearity
+ *     source: SOP QA-12 §4.2
+ *   - quantity: deviation_percent  # every back-calculated standard
+ *     within: 15
+ *     lowest-level-within: 20
+ *     fraction: 0.75
+ * </pre>
+ */
+final class ProfileFile {
+    private static final Set<String> TOP = Set.of("name", "description", "rules");
+    private static final Set<String> RULE = Set.of("kind", "quantity", "at-least", "at-most", "within",
+            "lowest-level-within", "fraction", "characteristic", "source", "model");
+
+    private ProfileFile() {
+    }
+
+    static AcceptanceProfile read(Path file, String written) {
+        String where = file.getFileName().toString();
+        Object root;
+        try {
+            root = new Yaml(new SafeConstructor(new LoaderOptions()))
+                    .load(new String(Files.readAllBytes(file), StandardCharsets.UTF_8));
+        } catch (IOException e) {
+            throw new InputException(ErrorKey.FILE_NOT_FOUND, where, "a readable acceptance profile file",
+                    "no such file at " + file.toAbsolutePath().normalize(),
+                    "Correct 'criteria:' in the front matter (a built-in profile name or a .yaml path).");
+        } catch (YAMLException e) {
+            throw bad(where, "a YAML acceptance profile", "text that is not valid YAML (" + firstLine(e) + ")");
+        }
+        Map<?, ?> top = map(root, where, "the profile");
+        unknownKeys(top, TOP, where, "the profile");
+        List<Rule> rules = new ArrayList<>();
+        Object list = top.get("rules");
+        if (!(list instanceof List<?> items) || items.isEmpty()) {
+            throw bad(where, "a 'rules:' list with at least one rule", String.valueOf(list));
+        }
+        int n = 0;
+        for (Object item : items) {
+            n++;
+            rules.add(rule(map(item, where, "rule " + n), where, "rule " + n));
+        }
+        String name = top.get("name") == null ? written : String.valueOf(top.get("name"));
+        String description = top.get("description") == null ? "" : String.valueOf(top.get("description"));
+        return new AcceptanceProfile(name, description, written, rules);
+    }
+
+    private static Rule rule(Map<?, ?> r, String where, String which) {
+        unknownKeys(r, RULE, where, which);
+        String kindWord = r.get("kind") == null ? "calibration" : String.valueOf(r.get("kind"));
+        AnalysisKind kind = AnalysisKind.fromKeyword(kindWord).orElseThrow(() -> bad(where,
+                which + ": a kind among " + AnalysisKind.keywords(), "'" + kindWord + "'"));
+        Object quantity = r.get("quantity");
+        if (quantity == null) {
+            throw bad(where, which + ": a 'quantity:' (a results.json name such as r_squared)", "none");
+        }
+        String q = String.valueOf(quantity);
+        String characteristic = r.get("characteristic") == null ? q : String.valueOf(r.get("characteristic"));
+        String source = r.get("source") == null ? "laboratory profile" : String.valueOf(r.get("source"));
+        if (q.equals("deviation_percent")) {
+            double within = number(r, "within", where, which);
+            double lowest = r.containsKey("lowest-level-within") ? number(r, "lowest-level-within", where, which) : within;
+            double fraction = r.containsKey("fraction") ? number(r, "fraction", where, which) : 1.0;
+            return new DeviationRule(characteristic, within, lowest, fraction, source);
+        }
+        boolean atLeast = r.containsKey("at-least");
+        if (atLeast == r.containsKey("at-most")) {
+            throw bad(where, which + ": exactly one of 'at-least:' or 'at-most:'",
+                    atLeast ? "both" : "neither");
+        }
+        double limit = number(r, atLeast ? "at-least" : "at-most", where, which);
+        String model = r.get("model") == null ? null : String.valueOf(r.get("model"));
+        return new QuantityRule(kind, characteristic, q, atLeast, limit, q, model, source);
+    }
+
+    private static double number(Map<?, ?> r, String key, String where, String which) {
+        Object v = r.get(key);
+        if (v instanceof Number n && Double.isFinite(n.doubleValue()) && n.doubleValue() >= 0) {
+            return n.doubleValue();
+        }
+        throw bad(where, which + ": a non-negative number for '" + key + "'", "'" + v + "'");
+    }
+
+    private static Map<?, ?> map(Object o, String where, String what) {
+        if (o instanceof Map<?, ?> m) {
+            return m;
+        }
+        throw bad(where, what + " as a YAML map of keys", o == null ? "nothing" : "'" + o + "'");
+    }
+
+    private static void unknownKeys(Map<?, ?> m, Set<String> allowed, String where, String what) {
+        for (Object k : m.keySet()) {
+            if (!allowed.contains(String.valueOf(k))) {
+                throw new InputException(ErrorKey.UNKNOWN_OPTION, where, what + ": one of " + allowed.stream().sorted().toList(),
+                        "'" + k + "'", "Correct or remove the key.");
+            }
+        }
+    }
+
+    private static InputException bad(String where, String expected, String found) {
+        return new InputException(ErrorKey.BAD_OPTION_VALUE, where, expected, found,
+                "Correct the acceptance profile file (its format is in docs/criteria.md).");
+    }
+
+    private static String firstLine(Exception e) {
+        String m = String.valueOf(e.getMessage());
+        int nl = m.indexOf('\n');
+        return nl < 0 ? m : m.substring(0, nl);
+    }
+}

@@ -1,0 +1,16 @@
+package org.meritbook.criteria;
+
+import java.util.Optional;
+import org.meritbook.analysis.SectionResult;
+
+/** One acceptance rule of a profile: it judges the sections it applies to. */
+public sealed interface Rule permits QuantityRule, DeviationRule {
+    /** The rule as the dossier states it, e.g. "r² ≥ 0.995". */
+    String text();
+
+    /** Where the limit comes from (a guideline, an SOP, or "common practice"), as the profile states it. */
+    String source();
+
+    /** The verdict on one section, or empty when the rule does not apply to that section. */
+    Optional<Verdict> judge(SectionResult section);
+}

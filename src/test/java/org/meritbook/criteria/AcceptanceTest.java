@@ -1,0 +1,134 @@
+package org.meritbook.criteria;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.meritbook.analysis.DataTable;
+import org.meritbook.analysis.Quantity;
+import org.meritbook.analysis.SectionResult;
+import org.meritbook.analysis.Setting;
+import org.meritbook.analysis.TableCell;
+import org.meritbook.error.ErrorKey;
+import org.meritbook.error.InputException;
+import org.meritbook.study.AnalysisKind;
+import org.meritbook.study.StudyParser;
+import org.meritbook.trail.Step;
+import org.meritbook.trail.StepInput;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class AcceptanceTest {
+    @TempDir
+    Path dir;
+
+    /**
+     * A calibration section with the given nominal levels and % deviations; point i is labelled Pi
+     * and is excluded when its label is listed.
+     */
+    private static SectionResult calibration(double[] nominal, double[] deviation, String model, double rSquared,
+                                             List<String> excluded) {
+        List<Quantity> quantities = new ArrayList<>();
+        List<Step> steps = new ArrayList<>();
+        List<DataTable.Row> rows = new ArrayList<>();
+        quantities.add(new Quantity("r_squared", "r²", rSquared, null, "cal.r_squared", null, true));
+        steps.add(new Step("cal.r_squared", "r²", "r²", List.of(), rSquared, null, null));
+        for (int i = 0; i < nominal.length; i++) {
+            String label = "P" + i;
+            String id = "cal.deviation_percent:" + label;
+            quantities.add(new Quantity("deviation_percent:" + label, "dev", deviation[i], "%", id, null, false));
+            steps.add(new Step(id, "dev", "%dev = (x̂ − x) / x × 100",
+                    List.of(StepInput.number("x", nominal[i], "ng/mL", "Cal!A" + (i + 2))), deviation[i], "%", null));
+            rows.add(new DataTable.Row(label, List.of(TableCell.raw("1", "Cal!A" + (i + 2))),
+                    excluded.contains(label) ? "failed injection" : null));
+        }
+        return new SectionResult("cal", AnalysisKind.CALIBRATION, "Linearity", List.of(new Setting("Model", model)),
+                quantities, steps, new DataTable(List.of("Conc"), rows), List.of(), List.of(), List.of());
+    }
+
+    private static final double[] LEVELS = {1, 2, 5, 10, 20, 50, 100, 200};
+
+    @Test
+    void standardsWithinFifteenPercentAndTwentyAtTheLowestLevelPass() {
+        // ICH M10 calibration-curve criteria (±15 %, ±20 % at the LLOQ, ≥ 75 % of standards), from memory.
+        DeviationRule rule = new DeviationRule("Back-calculated standards", 15, 20, 0.75, "ICH M10");
+        double[] dev = {-18, 3, -2, 16.5, 1, 0, -4, 2}; // lowest level −18 % is within ±20 %; 10 ng/mL at +16.5 % is not
+        Verdict v = rule.judge(calibration(LEVELS, dev, "straight line", 0.999, List.of())).orElseThrow();
+        assertEquals(Verdict.Outcome.PASS, v.outcome(), v.reason());
+        assertEquals("7 of 8 standards within their limit; outside: P3 (16.5 %)", v.reason());
+
+        double[] worse = {-22, 3, -2, 16.5, 1, 0, -15.5, 2}; // 5 of 8 = 62.5 % < 75 %
+        Verdict f = rule.judge(calibration(LEVELS, worse, "straight line", 0.999, List.of())).orElseThrow();
+        assertEquals(Verdict.Outcome.FAIL, f.outcome());
+        assertEquals("5 of 8 standards within their limit; outside: P0 (−22 %), P3 (16.5 %), P6 (−15.5 %)", f.reason());
+    }
+
+    @Test
+    void excludedStandardsAreNotJudged() {
+        DeviationRule rule = new DeviationRule("Back-calculated standards", 15, 20, 1.0, "all must pass");
+        double[] dev = {1, 2, -40, 3, 1, 0, -4, 2};
+        assertEquals(Verdict.Outcome.PASS, rule.judge(calibration(LEVELS, dev, "straight line", 0.999, List.of("P2")))
+                .orElseThrow().outcome());
+        assertEquals(Verdict.Outcome.FAIL, rule.judge(calibration(LEVELS, dev, "straight line", 0.999, List.of()))
+                .orElseThrow().outcome());
+    }
+
+    @Test
+    void aQuantityRulePassesFailsOrIsNotEvaluable() {
+        QuantityRule r2 = new QuantityRule(AnalysisKind.CALIBRATION, "Linearity", "r_squared", true, 0.995, "r²", null, "x");
+        double[] dev = {0, 0, 0, 0, 0, 0, 0, 0};
+        Verdict pass = r2.judge(calibration(LEVELS, dev, "straight line", 0.9991, List.of())).orElseThrow();
+        assertEquals(Verdict.Outcome.PASS, pass.outcome());
+        assertEquals("r² = 0.9991", pass.reason());
+        assertEquals(Verdict.Outcome.FAIL, r2.judge(calibration(LEVELS, dev, "straight line", 0.99, List.of()))
+                .orElseThrow().outcome());
+        QuantityRule mandel = new QuantityRule(AnalysisKind.CALIBRATION, "No curvature", "mandel_p", true, 0.05,
+                "Mandel p", "straight line", "x");
+        assertEquals(Verdict.Outcome.NOT_EVALUABLE, mandel.judge(calibration(LEVELS, dev, "straight line", 1, List.of()))
+                .orElseThrow().outcome());
+        assertTrue(mandel.judge(calibration(LEVELS, dev, "quadratic, y = a + b·x + c·x²", 1, List.of())).isEmpty(),
+                "Mandel's rule does not judge a quadratic calibration");
+    }
+
+    @Test
+    void aLabProfileFileIsReadAndItsMistakesLocated() throws Exception {
+        Path file = dir.resolve("lab.yaml");
+        Files.writeString(file, """
+                name: QC lab linearity
+                rules:
+                  - quantity: r_squared
+                    at-least: 0.998
+                    characteristic: Linearity
+                    source: SOP QA-12
+                  - quantity: deviation_percent
+                    within: 10
+                    lowest-level-within: 15
+                    fraction: 0.8
+                """);
+        AcceptanceProfile p = ProfileFile.read(file, "lab.yaml");
+        assertEquals("QC lab linearity", p.name());
+        assertEquals("r_squared ≥ 0.998", p.rules().get(0).text());
+        assertEquals(new DeviationRule("deviation_percent", 10, 15, 0.8, "laboratory profile"), p.rules().get(1));
+
+        Files.writeString(file, "rules:\n  - quantity: r_squared\n    at-least: high\n");
+        InputException e = assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml"));
+        assertEquals(ErrorKey.BAD_OPTION_VALUE, e.key());
+        assertEquals("lab.yaml: expected rule 1: a non-negative number for 'at-least' but found 'high'. Correct the "
+                + "acceptance profile file (its format is in docs/criteria.md).", e.getMessage());
+        Files.writeString(file, "rules:\n  - quantity: r_squared\n    atleast: 0.9\n");
+        assertEquals(ErrorKey.UNKNOWN_OPTION, assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).key());
+    }
+
+    @Test
+    void anUnknownProfileNameListsTheBuiltInOnes() {
+        var study = StudyParser.parse("---\ntitle: t\ncriteria: trace-metals\n---\n", dir.resolve("s.md"));
+        InputException e = assertThrows(InputException.class, () -> AcceptanceProfiles.of(study));
+        assertTrue(e.getMessage().startsWith("s.md line 3: expected a built-in acceptance profile "
+                + "(linearity-basic, bioanalytical-calibration) or a .yaml profile file but found 'trace-metals'."),
+                e.getMessage());
+    }
+}
