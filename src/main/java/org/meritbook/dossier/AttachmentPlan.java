@@ -6,6 +6,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.study.SourceFile;
 
@@ -29,6 +30,9 @@ final class AttachmentPlan {
             out.add(new Attachment(unique(s.path().getFileName().toString(), used), mime(s.path()), "Source",
                     "Workbook '" + s.alias() + "'", s.alias(), s.path()));
         }
+        AcceptanceProfiles.file(results.study()).ifPresent(profile -> out.add(new Attachment(
+                unique(profile.getFileName().toString(), used), "application/yaml", "Source",
+                "Acceptance profile", AcceptanceProfiles.MANIFEST_ALIAS, profile)));
         out.add(new Attachment(unique(RESULTS_NAME, used), "application/json", "Data",
                 "Results of this run (full precision)", "results", null));
         return List.copyOf(out);

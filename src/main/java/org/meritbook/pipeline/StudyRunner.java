@@ -97,6 +97,9 @@ public final class StudyRunner {
                                           WorkbookReader reader) {
         List<InputFile> inputs = new ArrayList<>();
         inputs.add(file("notebook", study.file().getFileName().toString(), study.file(), List.of(), null));
+        // A laboratory's own acceptance profile is an input like the workbooks: checksummed and attached.
+        AcceptanceProfiles.file(study).ifPresent(profile ->
+                inputs.add(file(AcceptanceProfiles.MANIFEST_ALIAS, study.frontMatter().criteria().strip(), profile, List.of(), null)));
         for (SourceFile source : study.sources().values()) {
             if (!Files.isRegularFile(source.path())) {
                 throw new InputException(ErrorKey.FILE_NOT_FOUND,

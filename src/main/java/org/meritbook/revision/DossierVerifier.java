@@ -16,9 +16,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
 import java.util.stream.Stream;
+import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.pipeline.StudyResults;
+import org.meritbook.study.FrontMatter;
 import org.meritbook.study.SourceFile;
 import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
@@ -95,7 +97,14 @@ public final class DossierVerifier {
             sources.put(s.alias(), new SourceFile(s.alias(), file == null ? s.path() : file, s.written(), s.line()));
         }
         Files.copy(notebookFile, study.file());
-        return new Study(study.file(), study.text(), study.frontMatter(), sources, study.elements());
+        FrontMatter fm = study.frontMatter();
+        Path profile = unpacked.get(AcceptanceProfiles.MANIFEST_ALIAS);
+        if (profile != null) {
+            // The lab's acceptance profile, as attached, stands in for the file the notebook names.
+            fm = new FrontMatter(fm.title(), fm.method(), fm.laboratory(), fm.revision(), fm.revisionReason(),
+                    fm.preparedBy(), fm.date(), profile.toString(), fm.all());
+        }
+        return new Study(study.file(), study.text(), fm, sources, study.elements());
     }
 
     private static Verification compare(String pdf, JsonNode recorded, JsonNode rerun) {

@@ -94,6 +94,30 @@ class VerifyCommandTest {
     }
 
     @Test
+    void aDossierJudgedByALabProfileCarriesTheProfileAndVerifies() throws Exception {
+        Path study = dir.resolve("lab-profile");
+        Files.createDirectories(study.resolve("profiles"));
+        Files.copy(Path.of("demo-data/hmf-honey-validation.xlsx"), study.resolve("hmf-honey-validation.xlsx"));
+        Files.writeString(study.resolve("profiles/qc.yaml"), """
+                name: QC lab linearity
+                rules:
+                  - quantity: r_squared
+                    at-least: 0.998
+                """);
+        Path notebook = study.resolve("hmf-honey-validation.md");
+        Files.writeString(notebook, Files.readString(Path.of("demo-data/hmf-honey-validation.md"))
+                .replace("criteria: linearity-basic", "criteria: profiles/qc.yaml"));
+        assertEquals(0, execute("run", notebook.toString(), "-o", study.resolve("out").toString()).code());
+        Path pdf = study.resolve("out/hmf-honey-validation/hmf-honey-validation-rev1.pdf");
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            assertTrue(doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames().containsKey("qc.yaml"),
+                    "the profile is attached");
+        }
+        Outcome o = execute("verify", pdf.toString());
+        assertEquals(0, o.code(), o.out() + o.err());
+    }
+
+    @Test
     void aFileThatIsNotADossierIsBadInput() throws Exception {
         Path notPdf = dir.resolve("notes.pdf");
         Files.writeString(notPdf, "not a pdf");
