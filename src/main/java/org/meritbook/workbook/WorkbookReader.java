@@ -42,6 +42,12 @@ public final class WorkbookReader implements BlockReader {
         return workbook(file, ReadErrors.fileName(file)).recordedSaveTime();
     }
 
+    /** The sheets, defined names and Excel tables of a workbook, in workbook order. */
+    public WorkbookContents contents(Path file) {
+        SourceWorkbook wb = workbook(file, ReadErrors.fileName(file));
+        return new WorkbookContents(wb.sheetNames(), wb.definedNames(), wb.tableNames());
+    }
+
     private SourceWorkbook workbook(Path file, String where) {
         Path key = file.toAbsolutePath().normalize();
         SourceWorkbook wb = open.get(key);
