@@ -13,7 +13,8 @@ import picocli.CommandLine.Command;
 @Command(name = "meritbook", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Computes the figures of merit of a quantitative analytical method from lab workbooks "
                 + "named in a study notebook, and writes a reproducible validation record.",
-        subcommands = {RunCommand.class, DemoCommand.class, VerifyCommand.class, DiffCommand.class, NewCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {RunCommand.class, DemoCommand.class, NewCommand.class, VerifyCommand.class, DiffCommand.class,
+            QualifyCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     public static final int DONE = 0;
     public static final int ACCEPTANCE_FAILED = 1;

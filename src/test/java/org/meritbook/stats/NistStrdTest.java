@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.meritbook.qualification.NistDataset;
 
 /**
  * Ordinary least squares against NIST StRD certified values (linear regression category,
@@ -17,7 +18,7 @@ class NistStrdTest {
     // Source: NIST StRD Norris.dat (lower difficulty, y = B0 + B1·x, 36 observations), certified values.
     @Test
     void norrisWithIntercept() {
-        NistLinearDataset nist = NistLinearDataset.load("Norris");
+        NistDataset nist = NistDataset.load("Norris");
         LineFit fit = LeastSquares.fitLine(nist.x(), nist.y(), Weighting.NONE, LineModel.WITH_INTERCEPT);
 
         assertDigits("B0", fit.intercept(), nist.estimate("B0"));
@@ -31,20 +32,20 @@ class NistStrdTest {
     // NIST certifies the uncentred R² for the no-intercept model.
     @Test
     void noInt1ThroughOrigin() {
-        assertThroughOrigin(NistLinearDataset.load("NoInt1"));
+        assertThroughOrigin(NistDataset.load("NoInt1"));
     }
 
     // Source: NIST StRD NoInt2.dat (average difficulty, y = B1·x, 3 observations), certified values.
     @Test
     void noInt2ThroughOrigin() {
-        assertThroughOrigin(NistLinearDataset.load("NoInt2"));
+        assertThroughOrigin(NistDataset.load("NoInt2"));
     }
 
     // Source: NIST StRD Pontius.dat (lower difficulty, quadratic y = B0 + B1·x + B2·x², 40 observations),
     // certified values. x runs to 3·10⁶, so the raw-power normal equations lose about 25 digits.
     @Test
     void pontiusQuadratic() {
-        NistLinearDataset nist = NistLinearDataset.load("Pontius");
+        NistDataset nist = NistDataset.load("Pontius");
         QuadraticFit fit = LeastSquares.fitQuadratic(nist.x(), nist.y(), Weighting.NONE);
 
         assertDigits("B0", fit.intercept(), nist.estimate("B0"));
@@ -65,20 +66,20 @@ class NistStrdTest {
     // Source: NIST StRD Norris.dat and NoInt2.dat, the data lines as printed in the files.
     @Test
     void parserReadsTheStatedDataLinesInTheNamedColumnOrder() {
-        NistLinearDataset norris = NistLinearDataset.load("Norris");
+        NistDataset norris = NistDataset.load("Norris");
         assertEquals(36, norris.x().length);
         assertEquals(0.2, norris.x()[0]);
         assertEquals(0.1, norris.y()[0]);
         assertEquals(337.4, norris.x()[1]);
         assertEquals(338.8, norris.y()[1]);
-        NistLinearDataset noInt2 = NistLinearDataset.load("NoInt2");
+        NistDataset noInt2 = NistDataset.load("NoInt2");
         assertEquals(3, noInt2.x().length);
         assertEquals(6, noInt2.x()[2]);
         assertEquals(4, noInt2.y()[2]);
         assertEquals(2, noInt2.residualDf());
     }
 
-    private static void assertThroughOrigin(NistLinearDataset nist) {
+    private static void assertThroughOrigin(NistDataset nist) {
         LineFit fit = LeastSquares.fitLine(nist.x(), nist.y(), Weighting.NONE, LineModel.THROUGH_ORIGIN);
         assertDigits("B1", fit.slope(), nist.estimate("B1"));
         assertDigits("sd(B1)", fit.slopeSe(), nist.standardDeviation("B1"));
@@ -86,7 +87,7 @@ class NistStrdTest {
         assertCommon(nist, fit);
     }
 
-    private static void assertCommon(NistLinearDataset nist, LineFit fit) {
+    private static void assertCommon(NistDataset nist, LineFit fit) {
         assertEquals(nist.residualDf(), fit.degreesOfFreedom(), "residual degrees of freedom");
         assertDigits("residual SD", fit.residualSd(), nist.residualSd());
         assertDigits("R-squared", fit.rSquared(), nist.rSquared());

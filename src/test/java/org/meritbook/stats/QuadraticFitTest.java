@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.meritbook.qualification.NistDataset;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 
@@ -67,7 +68,7 @@ class QuadraticFitTest {
     // cancellation-free root formula must still return the near root to full precision.
     @Test
     void inverseUndoesPredictOnAnAlmostStraightCurve() {
-        NistLinearDataset nist = NistLinearDataset.load("Pontius");
+        NistDataset nist = NistDataset.load("Pontius");
         QuadraticFit fit = LeastSquares.fitQuadratic(nist.x(), nist.y(), Weighting.NONE);
         for (double x0 : new double[] {150000, 987654.3, 3000000}) {
             assertEquals(x0, fit.inverse(fit.predict(x0), 150000, 3000000), 1e-9 * x0);

@@ -1,4 +1,4 @@
-package org.meritbook.stats;
+package org.meritbook.qualification;
 
 import java.io.BufferedReader;
 import java.io.IOException;
@@ -18,7 +18,7 @@ import java.util.regex.Pattern;
  * from the lines the header's "Certified Values (lines a to b)" names, the data from its
  * "Data (lines a to b)" lines, the columns as named by the "Data:" line just before them.
  */
-record NistLinearDataset(String name, double[] x, double[] y, Map<String, double[]> parameters,
+public record NistDataset(String name, double[] x, double[] y, Map<String, double[]> parameters,
         double residualSd, double rSquared, int residualDf, double ssRegression, double ssResidual) {
 
     private static final Pattern CERTIFIED_LINES = Pattern.compile("Certified Values\\s*\\(lines (\\d+) to (\\d+)\\)");
@@ -30,12 +30,12 @@ record NistLinearDataset(String name, double[] x, double[] y, Map<String, double
     private static final Pattern REGRESSION = Pattern.compile("^\\s*Regression\\s+\\d+\\s+(\\S+)\\s+\\S+\\s+\\S+\\s*$");
     private static final Pattern RESIDUAL = Pattern.compile("^\\s*Residual\\s+(\\d+)\\s+(\\S+)\\s+\\S+\\s*$");
 
-    /** Reads {@code /nist-strd/<name>.dat} from the test classpath. */
-    static NistLinearDataset load(String name) {
-        String resource = "/nist-strd/" + name + ".dat";
-        try (InputStream in = NistLinearDataset.class.getResourceAsStream(resource)) {
+    /** Reads one of the NIST files meritbook ships ({@code nist-strd/<name>.dat} beside this class). */
+    public static NistDataset load(String name) {
+        String resource = "nist-strd/" + name + ".dat";
+        try (InputStream in = NistDataset.class.getResourceAsStream(resource)) {
             if (in == null) {
-                throw new IllegalStateException("missing test resource " + resource);
+                throw new IllegalStateException("missing resource " + resource);
             }
             BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.US_ASCII));
             return parse(name, reader.lines().toList());
@@ -44,7 +44,7 @@ record NistLinearDataset(String name, double[] x, double[] y, Map<String, double
         }
     }
 
-    static NistLinearDataset parse(String name, List<String> lines) {
+    static NistDataset parse(String name, List<String> lines) {
         int[] certified = range(lines, CERTIFIED_LINES);
         int[] data = range(lines, DATA_LINES);
         Map<String, double[]> parameters = new HashMap<>();
@@ -94,16 +94,16 @@ record NistLinearDataset(String name, double[] x, double[] y, Map<String, double
         }
         double[] x = rows.stream().mapToDouble(row -> row[0]).toArray();
         double[] y = rows.stream().mapToDouble(row -> row[1]).toArray();
-        return new NistLinearDataset(name, x, y, parameters, residualSd, rSquared, residualDf, ssRegression, ssResidual);
+        return new NistDataset(name, x, y, parameters, residualSd, rSquared, residualDf, ssRegression, ssResidual);
     }
 
     /** Certified estimate of parameter "B0", "B1", … */
-    double estimate(String parameter) {
+    public double estimate(String parameter) {
         return parameters.get(parameter)[0];
     }
 
     /** Certified standard deviation of the estimate of a parameter. */
-    double standardDeviation(String parameter) {
+    public double standardDeviation(String parameter) {
         return parameters.get(parameter)[1];
     }
 
