@@ -14,7 +14,7 @@ import picocli.CommandLine.Command;
         description = "Computes the figures of merit of a quantitative analytical method from lab workbooks "
                 + "named in a study notebook, and writes a reproducible validation record.",
         subcommands = {RunCommand.class, DemoCommand.class, NewCommand.class, VerifyCommand.class, DiffCommand.class,
-            QualifyCommand.class, CommandLine.HelpCommand.class})
+            QualifyCommand.class, ServeCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     public static final int DONE = 0;
     public static final int ACCEPTANCE_FAILED = 1;

@@ -59,6 +59,31 @@ public final class DossierRenderer {
      * @param revisions the earlier revisions' history and the changes since the latest one
      */
     public RenderedDossier render(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
+        Prepared p = prepare(results, resultsJson, revisions);
+        byte[] html = templates.render(p.view().forPdf(false)).getBytes(StandardCharsets.UTF_8);
+        String xhtml = templates.render(p.view());
+        FrontMatter fm = results.study().frontMatter();
+        String subject = "Validation dossier, method " + p.view().cover().method() + ", revision " + fm.revision();
+        PdfAFinisher.Metadata meta = new PdfAFinisher.Metadata(fm.title(), p.view().cover().preparedBy(), subject,
+                "meritbook " + meritbookVersion, p.date().calendar(), p.id());
+        byte[] pdfBytes = finisher.finish(pdf.render(xhtml), meta, p.files());
+        return new RenderedDossier(html, pdfBytes);
+    }
+
+    /**
+     * The HTML dossier alone, the same bytes {@link #render} gives as its HTML; for the live
+     * preview, which skips the PDF (about a second of work) on every change.
+     */
+    public byte[] renderHtml(StudyResults results, byte[] resultsJson) {
+        Prepared p = prepare(results, resultsJson, RevisionContext.none());
+        return templates.render(p.view().forPdf(false)).getBytes(StandardCharsets.UTF_8);
+    }
+
+    /** What both renderings need: the attached files' bytes, the document id and date, the view-model. */
+    private record Prepared(DossierView view, List<PdfAFinisher.Embedded> files, byte[] id, DocumentDate date) {
+    }
+
+    private Prepared prepare(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
         List<Attachment> plan = AttachmentPlan.of(results);
         List<PdfAFinisher.Embedded> files = new ArrayList<>();
         for (Attachment a : plan) {
@@ -66,17 +91,9 @@ public final class DossierRenderer {
         }
         byte[] id = documentId(files);
         String idHex = HexFormat.of().formatHex(id);
-        FrontMatter fm = results.study().frontMatter();
-        DocumentDate date = DocumentDate.of(fm, results.inputs());
+        DocumentDate date = DocumentDate.of(results.study().frontMatter(), results.inputs());
         DossierView view = model.build(results, files, date, idHex, revisions);
-
-        byte[] html = templates.render(view.forPdf(false)).getBytes(StandardCharsets.UTF_8);
-        String xhtml = templates.render(view);
-        String subject = "Validation dossier, method " + view.cover().method() + ", revision " + fm.revision();
-        PdfAFinisher.Metadata meta = new PdfAFinisher.Metadata(fm.title(), view.cover().preparedBy(), subject,
-                "meritbook " + meritbookVersion, date.calendar(), id);
-        byte[] pdfBytes = finisher.finish(pdf.render(xhtml), meta, files);
-        return new RenderedDossier(html, pdfBytes);
+        return new Prepared(view, files, id, date);
     }
 
     /** Reads an input to attach, checking it is still the file the run read (same SHA-256). */

@@ -1,0 +1,159 @@
+package org.meritbook.serve;
+
+import com.sun.net.httpserver.Headers;
+import com.sun.net.httpserver.HttpExchange;
+import com.sun.net.httpserver.HttpServer;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.net.InetAddress;
+import java.net.InetSocketAddress;
+import java.net.URI;
+import java.nio.charset.StandardCharsets;
+import java.util.Locale;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicInteger;
+
+/**
+ * The routes of the live preview, on the JDK's own HTTP server bound to 127.0.0.1 only:
+ * {@code /} the page, {@code /status} the state as JSON, {@code /dossier} the latest good HTML
+ * dossier, {@code /results.json} its results. Read-only: any method but GET and HEAD is refused.
+ */
+public final class LiveServer implements AutoCloseable {
+    private static final String HTML = "text/html; charset=utf-8";
+    private static final String JSON = "application/json; charset=utf-8";
+    /** The page loads only its own script and style, and talks only to this server. */
+    private static final String PAGE_POLICY = "default-src 'none'; script-src 'self'; style-src 'self'; connect-src 'self'; "
+            + "frame-src 'self'; img-src 'self'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
+    /** The dossier keeps its inline styles and images, runs no script, and may be framed by the page only. */
+    private static final String DOSSIER_POLICY = "script-src 'none'; object-src 'none'; base-uri 'none'; frame-ancestors 'self'";
+
+    private final HttpServer server;
+    private final ExecutorService executor;
+    private final LiveStudy study;
+
+    private LiveServer(HttpServer server, ExecutorService executor, LiveStudy study) {
+        this.server = server;
+        this.executor = executor;
+        this.study = study;
+    }
+
+    /** Binds 127.0.0.1:port (0 for any free port) and starts answering. */
+    public static LiveServer start(int port, LiveStudy study) throws IOException {
+        InetAddress loopback = InetAddress.getByAddress("localhost", new byte[] {127, 0, 0, 1});
+        HttpServer server = HttpServer.create(new InetSocketAddress(loopback, port), 0);
+        AtomicInteger count = new AtomicInteger();
+        ExecutorService executor = Executors.newFixedThreadPool(2, r -> {
+            Thread t = new Thread(r, "meritbook-live-http-" + count.incrementAndGet());
+            t.setDaemon(true);
+            return t;
+        });
+        LiveServer live = new LiveServer(server, executor, study);
+        server.createContext("/", live::handle);
+        server.setExecutor(executor);
+        server.start();
+        return live;
+    }
+
+    public InetSocketAddress address() {
+        return server.getAddress();
+    }
+
+    public URI uri() {
+        return URI.create("http://127.0.0.1:" + address().getPort() + "/");
+    }
+
+    private void handle(HttpExchange exchange) throws IOException {
+        try (exchange) {
+            String method = exchange.getRequestMethod();
+            if (!method.equals("GET") && !method.equals("HEAD")) {
+                exchange.getResponseHeaders().set("Allow", "GET, HEAD");
+                send(exchange, 405, "text/plain; charset=utf-8", bytes("Only GET and HEAD are answered.\n"));
+                return;
+            }
+            if (!fromThisMachine(exchange)) {
+                // A page elsewhere could point a host name at 127.0.0.1 (DNS rebinding) and read the lab's data.
+                send(exchange, 403, "text/plain; charset=utf-8", bytes("Open the preview as " + uri() + "\n"));
+                return;
+            }
+            route(exchange);
+        }
+    }
+
+    private void route(HttpExchange exchange) throws IOException {
+        Snapshot s = study.snapshot();
+        Snapshot.Issued issued = s.issued();
+        switch (exchange.getRequestURI().getPath()) {
+            case "/" -> {
+                exchange.getResponseHeaders().set("Content-Security-Policy", PAGE_POLICY);
+                send(exchange, 200, HTML, LivePage.HTML);
+            }
+            case "/live.css" -> send(exchange, 200, "text/css; charset=utf-8", LivePage.CSS);
+            case "/live.js" -> send(exchange, 200, "text/javascript; charset=utf-8", LivePage.SCRIPT);
+            case "/status" -> send(exchange, 200, JSON, StatusJson.of(s, study.notebook().getFileName().toString()));
+            case "/dossier" -> {
+                exchange.getResponseHeaders().set("Content-Security-Policy", DOSSIER_POLICY);
+                if (issued == null) {
+                    send(exchange, 503, HTML, bytes("<!DOCTYPE html><html lang=\"en\"><head><meta charset=\"utf-8\">"
+                            + "<title>No dossier yet</title></head><body><p>No run has succeeded yet.</p></body></html>\n"));
+                } else {
+                    send(exchange, 200, HTML, issued.html());
+                }
+            }
+            case "/results.json" -> {
+                if (issued == null) {
+                    send(exchange, 503, JSON, bytes("{\"error\":\"no run has succeeded yet\"}\n"));
+                } else {
+                    send(exchange, 200, JSON, issued.json());
+                }
+            }
+            default -> send(exchange, 404, "text/plain; charset=utf-8", bytes("Not found. The preview is at " + uri() + "\n"));
+        }
+    }
+
+    /** Requests must name this server by its loopback address or as localhost. */
+    private boolean fromThisMachine(HttpExchange exchange) {
+        String host = exchange.getRequestHeaders().getFirst("Host");
+        if (host == null) {
+            return false;
+        }
+        String port = ":" + address().getPort();
+        String h = host.toLowerCase(Locale.ROOT);
+        return h.equals("127.0.0.1" + port) || h.equals("localhost" + port);
+    }
+
+    private static void send(HttpExchange exchange, int status, String type, byte[] body) throws IOException {
+        Headers headers = exchange.getResponseHeaders();
+        headers.set("Content-Type", type);
+        headers.set("Cache-Control", "no-store");
+        headers.set("X-Content-Type-Options", "nosniff");
+        headers.set("Referrer-Policy", "no-referrer");
+        if (exchange.getRequestMethod().equals("HEAD")) {
+            exchange.sendResponseHeaders(status, -1);
+            return;
+        }
+        exchange.sendResponseHeaders(status, body.length == 0 ? -1 : body.length);
+        try (OutputStream out = exchange.getResponseBody()) {
+            out.write(body);
+        }
+    }
+
+    private static byte[] bytes(String text) {
+        return text.getBytes(StandardCharsets.UTF_8);
+    }
+
+    /** Stops answering, closes the port and ends the request threads. */
+    @Override
+    public void close() {
+        server.stop(0);
+        executor.shutdown();
+        try {
+            if (!executor.awaitTermination(5, TimeUnit.SECONDS)) {
+                executor.shutdownNow();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}

@@ -1,0 +1,76 @@
+package org.meritbook.serve;
+
+import java.io.IOException;
+import java.net.URI;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.Set;
+import java.util.function.Consumer;
+import org.meritbook.dossier.DossierRenderer;
+
+/**
+ * {@code meritbook serve} assembled: the study, the watcher that re-runs it and the server that
+ * shows it. Closing stops all three and leaves no thread or port behind.
+ */
+public final class LiveSession implements AutoCloseable {
+    /** Editors often write a file in several steps; one run after they settle is enough. */
+    static final Duration DEBOUNCE = Duration.ofMillis(300);
+
+    private final LiveStudy study;
+    private final FileWatcher watcher;
+    private final LiveServer server;
+
+    private LiveSession(LiveStudy study, FileWatcher watcher, LiveServer server) {
+        this.study = study;
+        this.watcher = watcher;
+        this.server = server;
+    }
+
+    /**
+     * Starts serving on 127.0.0.1:port (0 for any free port) and runs the study once.
+     *
+     * @param finished told each completed run (for the console); called on the worker thread
+     */
+    public static LiveSession start(Path notebook, int port, DossierRenderer renderer, Consumer<Snapshot> finished)
+            throws IOException {
+        LiveStudy[] study = new LiveStudy[1];
+        FileWatcher watcher = new FileWatcher(DEBOUNCE, () -> study[0].request());
+        study[0] = new LiveStudy(notebook, renderer, watcher::watch, finished);
+        LiveServer server;
+        try {
+            // The notebook is watched from the start, so an edit during a failed first parse is seen.
+            watcher.watch(Set.of(study[0].notebook()));
+            watcher.start();
+            server = LiveServer.start(port, study[0]);
+        } catch (IOException | RuntimeException e) {
+            watcher.close();
+            throw e;
+        }
+        study[0].start();
+        return new LiveSession(study[0], watcher, server);
+    }
+
+    public URI uri() {
+        return server.uri();
+    }
+
+    public LiveServer server() {
+        return server;
+    }
+
+    public Snapshot snapshot() {
+        return study.snapshot();
+    }
+
+    /** The files watched now: the notebook and what its last parse declared. */
+    public Set<Path> watched() {
+        return watcher.watched();
+    }
+
+    @Override
+    public void close() {
+        server.close();
+        watcher.close();
+        study.close();
+    }
+}

@@ -1,0 +1,153 @@
+package org.meritbook.serve;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.Consumer;
+import org.meritbook.criteria.AcceptanceProfiles;
+import org.meritbook.dossier.DossierRenderer;
+import org.meritbook.error.InputException;
+import org.meritbook.pipeline.StudyResults;
+import org.meritbook.pipeline.StudyRunner;
+import org.meritbook.revision.ResultsJson;
+import org.meritbook.study.SourceFile;
+import org.meritbook.study.Study;
+import org.meritbook.study.StudyParser;
+
+/**
+ * A notebook kept up to date: runs the ordinary pipeline (parse, {@link StudyRunner}, results.json,
+ * the HTML dossier) on one background thread whenever {@link #request()} is called. Requests that
+ * arrive during a run are folded into a single following run, so a burst of saves costs at most
+ * one extra run. Writes nothing to disk.
+ */
+public final class LiveStudy implements AutoCloseable {
+    private final Path notebook;
+    private final StudyRunner runner = StudyRunner.withBuiltInAnalyses();
+    private final DossierRenderer renderer;
+    private final Consumer<Set<Path>> inputsChanged;
+    private final Consumer<Snapshot> finished;
+    private final AtomicReference<Snapshot> current = new AtomicReference<>(Snapshot.initial());
+    private final Object lock = new Object();
+    private final Thread worker;
+    private boolean requested;
+    private boolean closed;
+
+    /**
+     * @param notebook      the study notebook
+     * @param renderer      renders the HTML dossier (default or a lab's templates)
+     * @param inputsChanged told the files the notebook reads (itself, its workbooks, a profile file) after each parse
+     * @param finished      told each completed run's snapshot (for the console)
+     */
+    public LiveStudy(Path notebook, DossierRenderer renderer, Consumer<Set<Path>> inputsChanged, Consumer<Snapshot> finished) {
+        this.notebook = notebook.toAbsolutePath().normalize();
+        this.renderer = renderer;
+        this.inputsChanged = inputsChanged;
+        this.finished = finished;
+        this.worker = new Thread(this::work, "meritbook-live-runner");
+        this.worker.setDaemon(true);
+    }
+
+    public Path notebook() {
+        return notebook;
+    }
+
+    /** Starts the worker and the first run. */
+    public void start() {
+        worker.start();
+        request();
+    }
+
+    /** Asks for a run; returns at once. */
+    public void request() {
+        synchronized (lock) {
+            requested = true;
+            lock.notifyAll();
+        }
+    }
+
+    public Snapshot snapshot() {
+        return current.get();
+    }
+
+    private void work() {
+        while (true) {
+            synchronized (lock) {
+                while (!requested && !closed) {
+                    try {
+                        lock.wait();
+                    } catch (InterruptedException e) {
+                        return;
+                    }
+                }
+                if (closed) {
+                    return;
+                }
+                requested = false;
+            }
+            runOnce();
+        }
+    }
+
+    private void runOnce() {
+        Snapshot before = current.updateAndGet(Snapshot::running);
+        long start = System.nanoTime();
+        Snapshot.Issued issued = before.issued();
+        List<ShownProblem> problems = new ArrayList<>();
+        int run = before.run() + 1;
+        try {
+            Study study = StudyParser.parse(notebook);
+            inputsChanged.accept(inputs(study));
+            StudyResults results = runner.run(study);
+            byte[] json = ResultsJson.toBytes(results);
+            byte[] html = renderer.renderHtml(results, json);
+            issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json);
+        } catch (InputException e) {
+            e.problems().forEach(p -> problems.add(ShownProblem.of(p)));
+        } catch (RuntimeException e) {
+            // The preview keeps serving; the error is shown on the page and its stack trace on the console.
+            problems.add(ShownProblem.internal(notebook.getFileName().toString(), e));
+            e.printStackTrace(System.err);
+        }
+        long elapsed = TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - start);
+        Snapshot.State state = problems.isEmpty() ? Snapshot.State.OK : Snapshot.State.ERROR;
+        Snapshot done = new Snapshot(run, state, problems, elapsed, Instant.now(), issued);
+        current.set(done);
+        finished.accept(done);
+    }
+
+    /** The files a run reads: the notebook, each declared workbook, and a laboratory's profile file. */
+    private Set<Path> inputs(Study study) {
+        Set<Path> files = new LinkedHashSet<>();
+        files.add(notebook);
+        for (SourceFile source : study.sources().values()) {
+            files.add(source.path().toAbsolutePath().normalize());
+        }
+        Optional<Path> profile = AcceptanceProfiles.file(study);
+        profile.ifPresent(p -> files.add(p.toAbsolutePath().normalize()));
+        return files;
+    }
+
+    /** Stops the worker after the run in progress, if any (a run takes about a second). */
+    @Override
+    public void close() {
+        synchronized (lock) {
+            closed = true;
+            lock.notifyAll();
+        }
+        try {
+            worker.join(TimeUnit.SECONDS.toMillis(30));
+            if (worker.isAlive()) {
+                worker.interrupt();
+                worker.join(TimeUnit.SECONDS.toMillis(5));
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}

@@ -1,0 +1,51 @@
+package org.meritbook.serve;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.nio.charset.StandardCharsets;
+
+/**
+ * The body of {@code GET /status}. Written with Jackson, so any text from a notebook or a workbook
+ * inside a problem arrives in the browser as a JSON string, never as markup.
+ */
+final class StatusJson {
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
+    private StatusJson() {
+    }
+
+    static byte[] of(Snapshot s, String notebookName) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("run", s.run());
+        root.put("state", s.state().word());
+        ArrayNode problems = root.putArray("problems");
+        for (ShownProblem p : s.problems()) {
+            problems.addObject().put("key", p.key()).put("where", p.where()).put("expected", p.expected())
+                    .put("found", p.found()).put("fix", p.fix()).put("message", p.message());
+        }
+        if (s.elapsedMs() < 0) {
+            root.putNull("elapsed_ms");
+        } else {
+            root.put("elapsed_ms", s.elapsedMs());
+        }
+        root.put("finished_at", s.finishedAt() == null ? null : s.finishedAt().toString());
+        Snapshot.Issued issued = s.issued();
+        if (issued == null) {
+            root.putNull("revision");
+            root.putNull("title");
+        } else {
+            root.put("revision", issued.revision());
+            root.put("title", issued.title());
+        }
+        // The run whose dossier /dossier serves: the page reloads its view when this changes.
+        root.put("dossier_run", issued == null ? 0 : issued.run());
+        root.put("notebook", notebookName);
+        try {
+            return MAPPER.writeValueAsString(root).getBytes(StandardCharsets.UTF_8);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("status could not be serialised", e);
+        }
+    }
+}
