@@ -135,6 +135,20 @@ class LiveSessionTest {
     }
 
     @Test
+    void aSourceDeclaredByAnEditIsWatchedToo() throws Exception {
+        awaitStatus(s -> s.get("state").asText().equals("ok"));
+        Path folder = Files.createDirectories(dir.resolve("more"));
+        Path extra = Files.copy(dir.resolve(NAME + ".xlsx"), folder.resolve("second.xlsx"));
+        save(Files.readString(notebook).replaceFirst("  lab: " + NAME + ".xlsx\n", "  lab: " + NAME + ".xlsx\n  extra: more/second.xlsx\n"));
+        Path expected = extra.toAbsolutePath().normalize();
+        awaitStatus(s -> session.watched().contains(expected));
+        int before = awaitStatus(s -> s.get("state").asText().equals("ok")).get("run").asInt();
+
+        Files.write(extra, Files.readAllBytes(extra));
+        awaitStatus(s -> s.get("run").asInt() > before && s.get("state").asText().equals("ok"));
+    }
+
+    @Test
     void theServerAnswersOnTheLoopbackAddressOnly() throws Exception {
         assertTrue(session.server().address().getAddress().isLoopbackAddress());
         assertEquals("127.0.0.1", session.server().address().getAddress().getHostAddress());

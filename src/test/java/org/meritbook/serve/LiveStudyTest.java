@@ -1,0 +1,98 @@
+package org.meritbook.serve;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.Set;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.meritbook.dossier.DossierRenderer;
+import org.meritbook.pipeline.StudyResults;
+import org.meritbook.pipeline.StudyRunner;
+import org.meritbook.revision.ResultsJson;
+
+/** The worker folds requests made during a run into one more run, and previews what run would issue. */
+class LiveStudyTest {
+    private static final String NAME = "hmf-honey-validation";
+
+    @TempDir
+    Path dir;
+
+    private Path demoCopy() throws Exception {
+        Files.copy(Path.of("demo-data", NAME + ".xlsx"), dir.resolve(NAME + ".xlsx"));
+        return Files.copy(Path.of("demo-data", NAME + ".md"), dir.resolve(NAME + ".md"));
+    }
+
+    @Test
+    void requestsDuringARunGiveAtMostOneMoreRun() throws Exception {
+        Path notebook = demoCopy();
+        CountDownLatch release = new CountDownLatch(1);
+        CountDownLatch inFirstRun = new CountDownLatch(1);
+        LinkedBlockingQueue<Snapshot> done = new LinkedBlockingQueue<>();
+        // The first run waits inside the pipeline (after parsing) until the requests are made.
+        LiveStudy study = new LiveStudy(notebook, new DossierRenderer(Optional.empty()), files -> {
+            inFirstRun.countDown();
+            await(release);
+        }, done::add);
+        try {
+            study.start();
+            assertTrue(inFirstRun.await(15, TimeUnit.SECONDS), "the first run started");
+            for (int i = 0; i < 5; i++) {
+                study.request();
+            }
+            release.countDown();
+            assertEquals(1, poll(done).run());
+            assertEquals(2, poll(done).run());
+            assertEquals(null, done.poll(1, TimeUnit.SECONDS), "five requests during run 1 give one more run, not five");
+        } finally {
+            study.close();
+        }
+    }
+
+    @Test
+    void thePreviewIsTheHtmlThatRunWouldIssueAndTheInputsAreReported() throws Exception {
+        Path notebook = demoCopy();
+        DossierRenderer renderer = new DossierRenderer(Optional.empty());
+        LinkedBlockingQueue<Set<Path>> inputs = new LinkedBlockingQueue<>();
+        LinkedBlockingQueue<Snapshot> done = new LinkedBlockingQueue<>();
+        LiveStudy study = new LiveStudy(notebook, renderer, inputs::add, done::add);
+        Snapshot first;
+        try {
+            study.start();
+            first = poll(done);
+        } finally {
+            study.close();
+        }
+        assertEquals(Snapshot.State.OK, first.state());
+        assertEquals(Set.of(notebook.toAbsolutePath().normalize(), dir.resolve(NAME + ".xlsx").toAbsolutePath().normalize()),
+                inputs.poll(15, TimeUnit.SECONDS));
+
+        StudyResults results = StudyRunner.withBuiltInAnalyses().run(notebook);
+        byte[] json = ResultsJson.toBytes(results);
+        assertArrayEquals(json, first.issued().json());
+        assertArrayEquals(renderer.render(results, json).html(), first.issued().html());
+    }
+
+    private static Snapshot poll(LinkedBlockingQueue<Snapshot> done) throws InterruptedException {
+        Snapshot s = done.poll(15, TimeUnit.SECONDS);
+        if (s == null) {
+            throw new AssertionError("no run completed within 15 s");
+        }
+        return s;
+    }
+
+    private static void await(CountDownLatch latch) {
+        try {
+            latch.await(15, TimeUnit.SECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}

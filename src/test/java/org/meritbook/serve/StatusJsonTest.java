@@ -1,0 +1,48 @@
+package org.meritbook.serve;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.time.Instant;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.meritbook.error.ErrorKey;
+import org.meritbook.error.Problem;
+
+/** /status carries user text as JSON strings, exactly, whatever characters it holds. */
+class StatusJsonTest {
+    @Test
+    void userTextInAProblemRoundTripsAsAStringAndIsNeverRaw() throws Exception {
+        String hostile = "</script><img src=x onerror=alert(1)> \"quoted\" \\ \u2028 line";
+        Problem p = new Problem(ErrorKey.NOT_A_NUMBER, "runs.xlsx, Cal!B4", "a number", "'" + hostile + "'", "Enter the value.");
+        Snapshot s = new Snapshot(3, Snapshot.State.ERROR, List.of(ShownProblem.of(p)), 812, Instant.parse("2026-11-20T10:15:30Z"),
+                new Snapshot.Issued(2, "Study <b>", 4, new byte[0], new byte[0]));
+
+        byte[] bytes = StatusJson.of(s, "study.md");
+        JsonNode status = new ObjectMapper().readTree(bytes);
+
+        assertEquals(3, status.get("run").asInt());
+        assertEquals("error", status.get("state").asText());
+        assertEquals(812, status.get("elapsed_ms").asLong());
+        assertEquals(4, status.get("revision").asInt());
+        assertEquals(2, status.get("dossier_run").asInt());
+        assertEquals("2026-11-20T10:15:30Z", status.get("finished_at").asText());
+        JsonNode problem = status.get("problems").get(0);
+        assertEquals("NOT_A_NUMBER", problem.get("key").asText());
+        assertEquals("runs.xlsx, Cal!B4", problem.get("where").asText());
+        assertEquals("'" + hostile + "'", problem.get("found").asText());
+        assertEquals(p.message(), problem.get("message").asText());
+    }
+
+    @Test
+    void beforeTheFirstRunNothingIsClaimed() throws Exception {
+        JsonNode status = new ObjectMapper().readTree(StatusJson.of(Snapshot.initial(), "study.md"));
+        assertEquals(0, status.get("run").asInt());
+        assertEquals("running", status.get("state").asText());
+        assertTrue(status.get("elapsed_ms").isNull());
+        assertTrue(status.get("revision").isNull());
+        assertEquals(0, status.get("dossier_run").asInt());
+    }
+}
