@@ -1,6 +1,8 @@
 package org.meritbook.analysis.calibration;
 
 import java.util.OptionalDouble;
+import java.util.function.DoubleBinaryOperator;
+import java.util.function.DoubleUnaryOperator;
 import org.meritbook.stats.LineFit;
 import org.meritbook.stats.QuadraticFit;
 
@@ -38,61 +40,42 @@ interface CalibrationCurve {
     double[] standardizedResiduals();
 
     static CalibrationCurve of(LineFit fit) {
-        return new CalibrationCurve() {
-            @Override
-            public double predict(double x) {
-                return fit.predict(x);
-            }
-
-            @Override
-            public double inverse(double y) {
-                return fit.inverse(y);
-            }
-
-            @Override
-            public double confidenceHalfWidth(double x, double level) {
-                return fit.confidenceHalfWidth(x, level);
-            }
-
-            @Override
-            public double predictionHalfWidth(double x, double level) {
-                return fit.predictionHalfWidth(x, level);
-            }
-
-            @Override
-            public double[] standardizedResiduals() {
-                return fit.standardizedResiduals();
-            }
-        };
+        return new Fitted(fit::predict, fit::inverse, fit::confidenceHalfWidth, fit::predictionHalfWidth,
+                fit.standardizedResiduals());
     }
 
     /** A quadratic, inverted on the calibrated span [xLow, xHigh] (the root there is the physical one). */
     static CalibrationCurve of(QuadraticFit fit, double xLow, double xHigh) {
-        return new CalibrationCurve() {
-            @Override
-            public double predict(double x) {
-                return fit.predict(x);
-            }
+        return new Fitted(fit::predict, y -> fit.inverse(y, xLow, xHigh), fit::confidenceHalfWidth,
+                fit::predictionHalfWidth, fit.standardizedResiduals());
+    }
 
-            @Override
-            public double inverse(double y) {
-                return fit.inverse(y, xLow, xHigh);
-            }
+    /** Either model, as the functions the figures, table and back-calculation call. */
+    record Fitted(DoubleUnaryOperator predictor, DoubleUnaryOperator inverter, DoubleBinaryOperator confidence,
+                  DoubleBinaryOperator prediction, double[] residuals) implements CalibrationCurve {
+        @Override
+        public double predict(double x) {
+            return predictor.applyAsDouble(x);
+        }
 
-            @Override
-            public double confidenceHalfWidth(double x, double level) {
-                return fit.confidenceHalfWidth(x, level);
-            }
+        @Override
+        public double inverse(double y) {
+            return inverter.applyAsDouble(y);
+        }
 
-            @Override
-            public double predictionHalfWidth(double x, double level) {
-                return fit.predictionHalfWidth(x, level);
-            }
+        @Override
+        public double confidenceHalfWidth(double x, double level) {
+            return confidence.applyAsDouble(x, level);
+        }
 
-            @Override
-            public double[] standardizedResiduals() {
-                return fit.standardizedResiduals();
-            }
-        };
+        @Override
+        public double predictionHalfWidth(double x, double level) {
+            return prediction.applyAsDouble(x, level);
+        }
+
+        @Override
+        public double[] standardizedResiduals() {
+            return residuals.clone();
+        }
     }
 }
