@@ -1,0 +1,94 @@
+package org.meritbook.serve;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.Optional;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.meritbook.dossier.DossierRenderer;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebDriver;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.chrome.ChromeDriverService;
+import org.openqa.selenium.chrome.ChromeOptions;
+import org.openqa.selenium.support.ui.WebDriverWait;
+
+/**
+ * The live notebook in a real browser (Debian's chromium through chromedriver, which CI installs):
+ * the page's script polls the status, shows located problems, and reloads the dossier after a fix.
+ */
+class BrowserPreviewTest {
+    private static final Path CHROMIUM = Path.of("/usr/bin/chromium");
+    private static final Path CHROMEDRIVER = Path.of("/usr/bin/chromedriver");
+    private static final String NAME = "hmf-honey-validation";
+
+    @TempDir
+    Path dir;
+    private LiveSession session;
+    private WebDriver browser;
+
+    @BeforeEach
+    void start() throws Exception {
+        assumeTrue(Files.isExecutable(CHROMIUM) && Files.isExecutable(CHROMEDRIVER),
+                "needs Debian's chromium and chromium-driver (.ci/run installs them)");
+        Files.copy(Path.of("demo-data", NAME + ".md"), dir.resolve(NAME + ".md"));
+        Files.copy(Path.of("demo-data", NAME + ".xlsx"), dir.resolve(NAME + ".xlsx"));
+        session = LiveSession.start(dir.resolve(NAME + ".md"), 0, new DossierRenderer(Optional.empty()), s -> { });
+        ChromeOptions options = new ChromeOptions().setBinary(CHROMIUM.toFile()).addArguments("--headless",
+                "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
+                "--disable-component-update", "--disable-sync", "--user-data-dir=" + dir.resolve("profile"));
+        ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(CHROMEDRIVER.toFile())
+                .usingAnyFreePort().build();
+        browser = new ChromeDriver(service, options);
+    }
+
+    @AfterEach
+    void stop() {
+        if (browser != null) {
+            browser.quit();
+        }
+        if (session != null) {
+            session.close();
+        }
+    }
+
+    private void waitFor(String what, java.util.function.Function<WebDriver, Boolean> condition) {
+        new WebDriverWait(browser, Duration.ofSeconds(20)).withMessage(what).until(condition);
+    }
+
+    private String dossierText() {
+        browser.switchTo().frame(browser.findElement(By.id("dossier")));
+        try {
+            return browser.findElement(By.tagName("body")).getText();
+        } finally {
+            browser.switchTo().defaultContent();
+        }
+    }
+
+    @Test
+    void aBrokenNotebookIsShownWithItsLineAndAFixReloadsTheDossier() throws Exception {
+        browser.get(session.uri().toString());
+        waitFor("the first run is shown", b -> b.findElement(By.id("state")).getText().equals("up to date"));
+        waitFor("the dossier is shown", b -> dossierText().contains("Validation of 5-hydroxymethylfurfural"));
+
+        Path notebook = dir.resolve(NAME + ".md");
+        String good = Files.readString(notebook);
+        Files.writeString(notebook, good.replaceFirst("weighting: 1/x\n", "weighting: 1/x\nsmoothing: yes\n"));
+        waitFor("the problem is shown", b -> b.findElement(By.id("state")).getText().equals("input needs attention"));
+        String problems = browser.findElement(By.id("problem-list")).getText();
+        assertTrue(problems.contains(NAME + ".md line") && problems.contains("UNKNOWN_OPTION")
+                && problems.contains("'smoothing'"), problems);
+
+        Files.writeString(notebook, good.replaceFirst("weighting: 1/x\n", "weighting: none\n"));
+        waitFor("the fix is run", b -> b.findElement(By.id("state")).getText().equals("up to date"));
+        waitFor("the dossier is reloaded with the new weighting",
+                b -> dossierText().contains("Weighting none") || dossierText().contains("Weighting\nnone"));
+        assertTrue(browser.findElement(By.id("problems")).getDomAttribute("hidden") != null, "problems hidden again");
+    }
+}
