@@ -6,8 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.OutputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -16,25 +14,12 @@ import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
+import org.meritbook.cli.Cli.Outcome;
 
 /** Exit codes and messages as a user meets them (DESIGN §6 and §7). */
 class CommandLineTest {
     @TempDir
     Path dir;
-
-    private record Outcome(int code, String out, String err) {
-    }
-
-    private static Outcome execute(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new Outcome(code, out.toString(), err.toString());
-    }
 
     /** A small workbook: Cal!A1:B6 with header "Conc (mg/L)", "Area"; one text entry when asked. */
     private Path workbook(String badEntry) throws Exception {
@@ -80,7 +65,7 @@ class CommandLineTest {
     @Test
     void aGoodStudyExitsZero() throws Exception {
         workbook(null);
-        Outcome o = execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());
+        Outcome o = Cli.execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());
         assertEquals(0, o.code(), o.err());
         assertTrue(Files.exists(dir.resolve("out/study/results.json")));
         assertTrue(Files.exists(dir.resolve("out/study/trail.md")));
@@ -91,21 +76,21 @@ class CommandLineTest {
         workbook(null);
         Path nb = notebook("runs!Cal!A1:B6");
         String out = dir.resolve("out").toString();
-        assertEquals(0, execute("run", nb.toString(), "-o", out).code());
+        assertEquals(0, Cli.execute("run", nb.toString(), "-o", out).code());
         Path results = dir.resolve("out/study/results.json");
         Path pdf = dir.resolve("out/study/study-rev1.pdf");
         byte[] firstResults = Files.readAllBytes(results);
         byte[] firstPdf = Files.readAllBytes(pdf);
-        assertEquals(0, execute("run", nb.toString(), "-o", out).code(), "an identical re-run is fine");
+        assertEquals(0, Cli.execute("run", nb.toString(), "-o", out).code(), "an identical re-run is fine");
 
         Files.writeString(nb, Files.readString(nb).replace("y: Area", "y: Area\nweighting: 1/x"));
-        Outcome refused = execute("run", nb.toString(), "-o", out);
+        Outcome refused = Cli.execute("run", nb.toString(), "-o", out);
         assertEquals(2, refused.code());
         assertTrue(refused.err().contains("Raise 'revision:' in the notebook's front matter"), refused.err());
         assertArrayEquals(firstResults, Files.readAllBytes(results), "results.json untouched");
         assertArrayEquals(firstPdf, Files.readAllBytes(pdf), "dossier untouched");
 
-        assertEquals(0, execute("run", nb.toString(), "-o", out, "--force").code());
+        assertEquals(0, Cli.execute("run", nb.toString(), "-o", out, "--force").code());
         assertFalse(java.util.Arrays.equals(firstPdf, Files.readAllBytes(pdf)), "--force replaced the dossier");
         try (var files = Files.list(dir.resolve("out/study"))) {
             assertEquals(List.of("results.json", "study-rev1.html", "study-rev1.pdf", "trail.md"),
@@ -125,7 +110,7 @@ class CommandLineTest {
                     characteristic: Linearity
                 """);
         Files.writeString(nb, Files.readString(nb).replace("title: Exit code check", "title: Exit code check\ncriteria: strict.yaml"));
-        Outcome o = execute("run", nb.toString(), "-o", dir.resolve("out").toString());
+        Outcome o = Cli.execute("run", nb.toString(), "-o", dir.resolve("out").toString());
         assertEquals(1, o.code(), o.err());
         assertTrue(o.out().contains("acceptance (strict.yaml): 0 passed, 1 failed, 0 not evaluable"), o.out());
         assertTrue(o.out().contains("FAIL Linearity: r_squared = 0.99"), o.out());
@@ -135,7 +120,7 @@ class CommandLineTest {
     @Test
     void textInANumericColumnExitsTwoNamingTheCell() throws Exception {
         workbook("<0.05");
-        Outcome o = execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());
+        Outcome o = Cli.execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("runs.xlsx, Cal!B4: expected a number in column 'Area' but found the censored "
                 + "result '<0.05'."), o.err());
@@ -145,7 +130,7 @@ class CommandLineTest {
     @Test
     void aMissingSheetExitsTwo() throws Exception {
         workbook(null);
-        Outcome o = execute("run", notebook("runs!Calibration!A1:B6").toString());
+        Outcome o = Cli.execute("run", notebook("runs!Calibration!A1:B6").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("runs.xlsx, data reference 'runs!Calibration!A1:B6' (notebook line 8): expected a "
                 + "sheet named 'Calibration' but found only the sheet 'Cal'. Correct the sheet name in the data "
@@ -155,7 +140,7 @@ class CommandLineTest {
     @Test
     void anUndeclaredSourceExitsTwoWithTheLine() throws Exception {
         workbook(null);
-        Outcome o = execute("run", notebook("lab!Cal!A1:B6").toString());
+        Outcome o = Cli.execute("run", notebook("lab!Cal!A1:B6").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("study.md line 8"), o.err());
         assertTrue(o.err().contains("runs"), o.err());
@@ -164,7 +149,7 @@ class CommandLineTest {
     @Test
     void aCorruptWorkbookExitsTwo() throws Exception {
         Files.writeString(dir.resolve("runs.xlsx"), "this is not a workbook");
-        Outcome o = execute("run", notebook("runs!Cal!A1:B6").toString());
+        Outcome o = Cli.execute("run", notebook("runs!Cal!A1:B6").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("runs.xlsx, data reference 'runs!Cal!A1:B6' (notebook line 8): expected an Excel "
                 + "workbook (.xlsx) but found a file that is not a workbook (neither a zip package nor an OLE2 file)."),
@@ -173,14 +158,14 @@ class CommandLineTest {
 
     @Test
     void aMissingNotebookExitsTwo() {
-        Outcome o = execute("run", dir.resolve("nope.md").toString());
+        Outcome o = Cli.execute("run", dir.resolve("nope.md").toString());
         assertEquals(2, o.code());
         assertTrue(o.err().contains("nope.md"), o.err());
     }
 
     @Test
     void qualifyWritesADatedRecordAndPasses() throws Exception {
-        Outcome o = execute("qualify", "-o", dir.toString());
+        Outcome o = Cli.execute("qualify", "-o", dir.toString());
         assertEquals(0, o.code(), o.err());
         assertTrue(o.out().startsWith("meritbook: qualification passed: 22 of 22 NIST certified figures"), o.out());
         try (var files = Files.list(dir.resolve("qualification"))) {
@@ -192,13 +177,13 @@ class CommandLineTest {
 
     @Test
     void versionAndHelpAnswer() {
-        Outcome v = execute("--version");
+        Outcome v = Cli.execute("--version");
         assertEquals(0, v.code());
         assertTrue(v.out().startsWith("meritbook "), v.out());
-        Outcome h = execute("--help");
+        Outcome h = Cli.execute("--help");
         assertEquals(0, h.code());
         assertTrue(h.out().contains("run") && h.out().contains("demo"), h.out());
-        Outcome bad = execute("frobnicate");
+        Outcome bad = Cli.execute("frobnicate");
         assertEquals(2, bad.code());
     }
 }

@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.InputStream;
 import java.io.OutputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -18,7 +16,6 @@ import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.meritbook.dossier.PdfAssertions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /** A data correction issued as revision 2, and {@code meritbook diff} between the two dossiers. */
 class DiffCommandTest {
@@ -26,13 +23,9 @@ class DiffCommandTest {
     Path dir;
 
     private static String execute(int expectedCode, String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        assertEquals(expectedCode, cl.execute(args), out + "\n" + err);
-        return out.toString();
+        Cli.Outcome o = Cli.execute(args);
+        assertEquals(expectedCode, o.code(), o.out() + "\n" + o.err());
+        return o.out();
     }
 
     @Test

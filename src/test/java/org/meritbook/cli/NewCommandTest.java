@@ -3,8 +3,6 @@ package org.meritbook.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.meritbook.study.AnalysisCell;
@@ -12,7 +10,6 @@ import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /** {@code meritbook new}: a starter notebook that names the workbook's blocks and runs as written. */
 class NewCommandTest {
@@ -20,10 +17,7 @@ class NewCommandTest {
     Path dir;
 
     private static int execute(String... args) {
-        CommandLine cl = Main.commandLine();
-        cl.setOut(new PrintWriter(new StringWriter()));
-        cl.setErr(new PrintWriter(new StringWriter()));
-        return cl.execute(args);
+        return Cli.execute(args).code();
     }
 
     @Test

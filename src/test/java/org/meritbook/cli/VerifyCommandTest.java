@@ -4,8 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayInputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -17,7 +15,7 @@ import org.apache.pdfbox.pdmodel.common.filespecification.PDEmbeddedFile;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
+import org.meritbook.cli.Cli.Outcome;
 
 /** {@code meritbook verify}: a dossier re-run from its own attachments, and tampering caught. */
 class VerifyCommandTest {
@@ -25,21 +23,9 @@ class VerifyCommandTest {
     static Path dir;
     static Path dossier;
 
-    private record Outcome(int code, String out, String err) {
-    }
-
-    private static Outcome execute(String... args) {
-        CommandLine cl = Main.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        return new Outcome(cl.execute(args), out.toString(), err.toString());
-    }
-
     @BeforeAll
     static void writeTheDemoDossier() {
-        assertEquals(0, execute("demo", "-o", dir.toString()).code());
+        assertEquals(0, Cli.execute("demo", "-o", dir.toString()).code());
         dossier = dir.resolve("hmf-honey-validation/hmf-honey-validation-rev1.pdf");
     }
 
@@ -58,7 +44,7 @@ class VerifyCommandTest {
 
     @Test
     void theDemoDossierIsReproducedFromItsAttachments() {
-        Outcome o = execute("verify", dossier.toString());
+        Outcome o = Cli.execute("verify", dossier.toString());
         assertEquals(0, o.code(), o.out() + o.err());
         assertTrue(o.out().matches("(?s)meritbook: verified hmf-honey-validation-rev1.pdf: all \\d+ results of 2 sections "
                 + "reproduced exactly from its attached inputs.\\s*"), o.out());
@@ -74,7 +60,7 @@ class VerifyCommandTest {
             int end = json.indexOf(',', value);
             return (json.substring(0, value) + "41.0" + json.substring(end)).getBytes(StandardCharsets.UTF_8);
         });
-        Outcome o = execute("verify", copy.toString());
+        Outcome o = Cli.execute("verify", copy.toString());
         assertEquals(1, o.code(), o.out() + o.err());
         assertTrue(o.out().contains("NOT verified"), o.out());
         assertTrue(o.out().contains("linearity.slope: recorded 41.0, re-run gives 41.7"), o.out());
@@ -87,7 +73,7 @@ class VerifyCommandTest {
             b[b.length / 2] ^= 1;
             return b;
         });
-        Outcome o = execute("verify", copy.toString());
+        Outcome o = Cli.execute("verify", copy.toString());
         assertEquals(2, o.code(), o.out() + o.err());
         assertTrue(o.err().contains("expected an attached file with the SHA-256 the manifest records for 'lab' "
                 + "(hmf-honey-validation.xlsx) but found none: the attachment is missing or was altered."), o.err());
@@ -107,13 +93,13 @@ class VerifyCommandTest {
         Path notebook = study.resolve("hmf-honey-validation.md");
         Files.writeString(notebook, Files.readString(Path.of("demo-data/hmf-honey-validation.md"))
                 .replace("criteria: linearity-basic", "criteria: profiles/qc.yaml"));
-        assertEquals(0, execute("run", notebook.toString(), "-o", study.resolve("out").toString()).code());
+        assertEquals(0, Cli.execute("run", notebook.toString(), "-o", study.resolve("out").toString()).code());
         Path pdf = study.resolve("out/hmf-honey-validation/hmf-honey-validation-rev1.pdf");
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             assertTrue(doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames().containsKey("qc.yaml"),
                     "the profile is attached");
         }
-        Outcome o = execute("verify", pdf.toString());
+        Outcome o = Cli.execute("verify", pdf.toString());
         assertEquals(0, o.code(), o.out() + o.err());
     }
 
@@ -121,6 +107,6 @@ class VerifyCommandTest {
     void aFileThatIsNotADossierIsBadInput() throws Exception {
         Path notPdf = dir.resolve("notes.pdf");
         Files.writeString(notPdf, "not a pdf");
-        assertEquals(2, execute("verify", notPdf.toString()).code());
+        assertEquals(2, Cli.execute("verify", notPdf.toString()).code());
     }
 }
