@@ -36,8 +36,7 @@ final class StudyOutput {
         StudyResults results = StudyRunner.withBuiltInAnalyses().run(notebook);
         Path folder = options.out.resolve(baseName(notebook));
         String stem = baseName(notebook);
-        RevisionContext revisions = PreviousRevisions.find(folder, stem, results.study().frontMatter().revision(),
-                ResultsJson.toTree(results));
+        RevisionContext revisions = PreviousRevisions.find(folder, stem, results);
         byte[] json = ResultsJson.toBytes(results, revisions.earlier());
         RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates))
                 .render(results, json, revisions);

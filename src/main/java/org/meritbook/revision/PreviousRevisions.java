@@ -11,6 +11,7 @@ import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
+import org.meritbook.pipeline.StudyResults;
 
 /**
  * Finds the latest earlier revision's dossier ({@code <stem>-rev<M>.pdf}, M below the current
@@ -24,10 +25,10 @@ public final class PreviousRevisions {
     /**
      * @param folder   the study's output folder
      * @param stem     the notebook's name without .md
-     * @param revision the revision being issued
-     * @param current  the results tree of the run being issued
+     * @param current  the run being issued (its results tree is built only when there is an earlier revision)
      */
-    public static RevisionContext find(Path folder, String stem, int revision, JsonNode current) {
+    public static RevisionContext find(Path folder, String stem, StudyResults current) {
+        int revision = current.study().frontMatter().revision();
         Optional<Path> latest = latestEarlier(folder, stem, revision);
         if (latest.isEmpty()) {
             return RevisionContext.none();
@@ -36,7 +37,8 @@ public final class PreviousRevisions {
         JsonNode previous = RevisionDiffer.read(pdf);
         List<RevisionEntry> history = new ArrayList<>(ResultsJson.history(previous));
         history.add(ResultsJson.entry(previous));
-        RevisionDiff diff = RevisionDiffer.diff(pdf.getFileName().toString(), previous, "this revision", current);
+        RevisionDiff diff = RevisionDiffer.diff(pdf.getFileName().toString(), previous, "this revision",
+                ResultsJson.toTree(current));
         return new RevisionContext(history, Optional.of(diff), pdf.getFileName().toString());
     }
 
