@@ -2,11 +2,11 @@ package org.meritbook.qualification;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.meritbook.stats.LeastSquares;
-import org.meritbook.stats.LineFit;
-import org.meritbook.stats.LineModel;
-import org.meritbook.stats.QuadraticFit;
-import org.meritbook.stats.Weighting;
+import org.meritbook.stats.regression.LeastSquares;
+import org.meritbook.stats.regression.LineFit;
+import org.meritbook.stats.regression.LineModel;
+import org.meritbook.stats.regression.QuadraticFit;
+import org.meritbook.stats.regression.Weighting;
 
 /**
  * The tool's own qualification: the calibration fits recompute NIST StRD certified values (the

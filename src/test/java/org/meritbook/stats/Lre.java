@@ -5,15 +5,15 @@ package org.meritbook.stats;
  * reliability of statistical software", The American Statistician 52, 1998): the number of
  * significant digits on which a computed value agrees with a certified one.
  */
-final class Lre {
+public final class Lre {
 
     /** Digits a double can carry; a perfect match scores this. */
-    static final double CAP = 15.9;
+    public static final double CAP = 15.9;
 
     private Lre() {
     }
 
-    static double of(double computed, double certified) {
+    public static double of(double computed, double certified) {
         double error = certified == 0 ? Math.abs(computed) : Math.abs(computed - certified) / Math.abs(certified);
         return error == 0 ? CAP : Math.min(CAP, -Math.log10(error));
     }

@@ -11,10 +11,10 @@ import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
-import org.meritbook.stats.LeastSquares;
-import org.meritbook.stats.LineFit;
-import org.meritbook.stats.QuadraticFit;
-import org.meritbook.stats.Weighting;
+import org.meritbook.stats.regression.LeastSquares;
+import org.meritbook.stats.regression.LineFit;
+import org.meritbook.stats.regression.QuadraticFit;
+import org.meritbook.stats.regression.Weighting;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.trail.StepInput;
 

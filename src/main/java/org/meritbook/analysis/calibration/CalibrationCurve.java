@@ -3,8 +3,8 @@ package org.meritbook.analysis.calibration;
 import java.util.OptionalDouble;
 import java.util.function.DoubleBinaryOperator;
 import java.util.function.DoubleUnaryOperator;
-import org.meritbook.stats.LineFit;
-import org.meritbook.stats.QuadraticFit;
+import org.meritbook.stats.regression.LineFit;
+import org.meritbook.stats.regression.QuadraticFit;
 
 /**
  * What the table, figures and back-calculation need of a fitted calibration function, whatever the

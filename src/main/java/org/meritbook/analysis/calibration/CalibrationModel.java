@@ -3,7 +3,7 @@ package org.meritbook.analysis.calibration;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
-import org.meritbook.stats.LineModel;
+import org.meritbook.stats.regression.LineModel;
 
 /** The notebook's {@code model:} option: the calibration function fitted. */
 enum CalibrationModel {

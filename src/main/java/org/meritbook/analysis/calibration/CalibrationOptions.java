@@ -3,7 +3,7 @@ package org.meritbook.analysis.calibration;
 import java.util.List;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
-import org.meritbook.stats.Weighting;
+import org.meritbook.stats.regression.Weighting;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.DataReference;
 import org.meritbook.study.DataReferences;

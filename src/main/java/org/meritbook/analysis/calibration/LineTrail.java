@@ -3,8 +3,8 @@ package org.meritbook.analysis.calibration;
 import java.util.List;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
-import org.meritbook.stats.LineFit;
-import org.meritbook.stats.LineModel;
+import org.meritbook.stats.regression.LineFit;
+import org.meritbook.stats.regression.LineModel;
 import org.meritbook.trail.StepInput;
 
 /**

@@ -4,14 +4,14 @@ import java.util.List;
 import java.util.Optional;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
-import org.meritbook.stats.LackOfFit;
-import org.meritbook.stats.LeastSquares;
-import org.meritbook.stats.LineFit;
-import org.meritbook.stats.LineModel;
-import org.meritbook.stats.MandelTest;
-import org.meritbook.stats.QuadraticFit;
-import org.meritbook.stats.ShapiroWilk;
-import org.meritbook.stats.Weighting;
+import org.meritbook.stats.regression.LackOfFit;
+import org.meritbook.stats.regression.LeastSquares;
+import org.meritbook.stats.regression.LineFit;
+import org.meritbook.stats.regression.LineModel;
+import org.meritbook.stats.regression.MandelTest;
+import org.meritbook.stats.regression.QuadraticFit;
+import org.meritbook.stats.tests.ShapiroWilk;
+import org.meritbook.stats.regression.Weighting;
 import org.meritbook.trail.StepInput;
 
 /**

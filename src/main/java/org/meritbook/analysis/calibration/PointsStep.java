@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
-import org.meritbook.stats.Weighting;
+import org.meritbook.stats.regression.Weighting;
 import org.meritbook.trail.StepInput;
 
 /**

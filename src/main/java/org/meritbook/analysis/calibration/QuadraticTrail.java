@@ -3,7 +3,7 @@ package org.meritbook.analysis.calibration;
 import java.util.List;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
-import org.meritbook.stats.QuadraticFit;
+import org.meritbook.stats.regression.QuadraticFit;
 import org.meritbook.trail.StepInput;
 
 /** Records a quadratic calibration y = a + b·x + c·x² as named quantities with their trail steps. */

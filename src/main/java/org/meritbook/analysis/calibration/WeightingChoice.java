@@ -1,7 +1,7 @@
 package org.meritbook.analysis.calibration;
 
 import java.util.Optional;
-import org.meritbook.stats.Weighting;
+import org.meritbook.stats.regression.Weighting;
 
 /**
  * The notebook's {@code weighting:} option: a fixed weighting, or {@code auto}, which fits every

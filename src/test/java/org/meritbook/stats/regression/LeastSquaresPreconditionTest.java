@@ -1,4 +1,4 @@
-package org.meritbook.stats;
+package org.meritbook.stats.regression;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

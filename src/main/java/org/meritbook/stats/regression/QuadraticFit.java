@@ -1,4 +1,6 @@
-package org.meritbook.stats;
+package org.meritbook.stats.regression;
+
+import org.meritbook.stats.Interval;
 
 import java.util.Arrays;
 import java.util.Objects;

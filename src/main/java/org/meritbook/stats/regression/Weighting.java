@@ -1,4 +1,4 @@
-package org.meritbook.stats;
+package org.meritbook.stats.regression;
 
 import java.util.Locale;
 import java.util.Objects;

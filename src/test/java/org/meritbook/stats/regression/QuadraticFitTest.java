@@ -1,4 +1,6 @@
-package org.meritbook.stats;
+package org.meritbook.stats.regression;
+
+import org.meritbook.stats.Interval;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;

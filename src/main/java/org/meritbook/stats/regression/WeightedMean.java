@@ -1,4 +1,4 @@
-package org.meritbook.stats;
+package org.meritbook.stats.regression;
 
 /** The weighted mean both least-squares fits centre on, computed in two passes for accuracy. */
 final class WeightedMean {

@@ -1,4 +1,4 @@
-package org.meritbook.stats;
+package org.meritbook.stats.regression;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;

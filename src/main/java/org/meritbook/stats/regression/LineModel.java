@@ -1,4 +1,4 @@
-package org.meritbook.stats;
+package org.meritbook.stats.regression;
 
 /** The straight-line model of a calibration: with an intercept, or forced through the origin. */
 public enum LineModel {
