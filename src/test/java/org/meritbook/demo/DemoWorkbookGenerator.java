@@ -101,6 +101,39 @@ public final class DemoWorkbookGenerator {
     static final String[] DAY_ANALYST = {"IH", "PN", "IH", "PN"};
     static final LocalDate FIRST_DAY = LocalDate.of(2026, 11, 10);
 
+    // Detection-limit studies run on the results (mg/kg), in a sugar-syrup blank matrix free of HMF.
+    /** A second stream, so that the sheets added for the limit studies leave the earlier sheets unchanged. */
+    static final long LIMITS_SEED = 20261116L;
+    static final double MDL_SPIKE = 0.50;
+    static final int MDL_SPIKES = 8;
+    static final double MDL_SPIKE_CV = 0.045;
+    static final int MDL_BLANKS = 10;
+    static final double MDL_BLANK_MEAN = 0.02;
+    static final double MDL_BLANK_SD = 0.018;
+    static final String[] MDL_BATCH = {"B1", "B1", "B1", "B2", "B2", "B2", "B3", "B3"};
+    // CLSI EP17-style study: blank results and three low-level samples, six replicates each.
+    static final int LOB_BLANKS = 20;
+    static final double LOB_BLANK_MEAN = 0.01;
+    static final double LOB_BLANK_SD = 0.02;
+    static final String[] LOW_SAMPLE = {"LL-1", "LL-2", "LL-3"};
+    static final double[] LOW_TRUE = {0.08, 0.12, 0.20};
+    static final double LOW_SD = 0.022;
+    static final int LOW_REPLICATES = 6;
+    // Signal-to-noise of the lowest standard (S1, 0.10 mg/L): peak height and baseline noise in mAU.
+    static final double SN_HEIGHT = 0.62;
+    static final double SN_NOISE = 0.021;
+    // Routine samples and QCs read back through the reporting calibration (mg/kg in honey).
+    static final String[] SAMPLE_ID = {"H-26-201", "H-26-202", "H-26-203", "H-26-204", "H-26-205", "H-26-206",
+        "H-26-206"};
+    static final double[] SAMPLE_TRUE = {3.2, 12.5, 27.8, 41.3, 0.35, 152.0, 152.0};
+    /** H-26-206 is above the calibrated span undiluted, then rerun diluted 1 + 4. */
+    static final int[] SAMPLE_DILUTION = {1, 1, 1, 1, 1, 1, 5};
+    static final String[] QC_ID = {"QC-L", "QC-M", "QC-H"};
+    static final double[] QC_NOMINAL = {2.0, 20.0, 80.0};
+    static final double PORTION_G = 5.00;
+    static final double PORTION_SD_G = 0.015;
+    static final double FINAL_VOLUME_ML = 50.0;
+
     private DemoWorkbookGenerator() {
     }
 
@@ -156,6 +189,11 @@ public final class DemoWorkbookGenerator {
         blanks(wb, styles, random);
         spikes(wb, styles, random);
         precision(wb, styles, random);
+        Random limits = new Random(LIMITS_SEED);
+        mdlStudy(wb, styles, limits);
+        lowLevelStudy(wb, styles, limits);
+        signalNoise(wb, styles, limits);
+        samples(wb, styles, limits);
         // Stores cached results, as Excel would on save, so a reader can use them without evaluating.
         XSSFFormulaEvaluator.evaluateAllFormulaCells(wb);
         POIXMLProperties.CoreProperties core = wb.getProperties().getCoreProperties();
@@ -331,6 +369,132 @@ public final class DemoWorkbookGenerator {
         table.getCTTable().addNewTableStyleInfo().setName("TableStyleLight9");
         table.getCTTable().getTableStyleInfo().setShowRowStripes(true);
         widths(sh, 6, 12, 9, 8, 10, 15);
+    }
+
+    /** Spiked blank-matrix samples and method blanks for the replicate-spike MDL procedure, in two blocks. */
+    private static void mdlStudy(XSSFWorkbook wb, Styles styles, Random random) {
+        XSSFSheet sh = wb.createSheet("MDL");
+        text(sh, 1, 0, "Method detection limit – spiked sugar syrup and method blanks (results in mg/kg)", styles.title);
+        text(sh, 2, 0, "Blank matrix: HMF-free sugar syrup; three preparation batches on three days.", null);
+        String[] spikeHeader = {"Sample ID", "Batch", "Prepared", "Spiked (mg/kg)", "Result (mg/kg)"};
+        String[] blankHeader = {"Blank ID", "Batch", "Prepared", "Result (mg/kg)"};
+        for (int c = 0; c < spikeHeader.length; c++) {
+            text(sh, 4, c, spikeHeader[c], styles.header);
+        }
+        for (int c = 0; c < blankHeader.length; c++) {
+            text(sh, 4, 6 + c, blankHeader[c], styles.header);
+        }
+        for (int i = 0; i < MDL_SPIKES; i++) {
+            int row = 5 + i;
+            int batch = MDL_BATCH[i].charAt(1) - '1';
+            text(sh, row, 0, String.format(Locale.ROOT, "MS-%02d", i + 1), null);
+            text(sh, row, 1, MDL_BATCH[i], null);
+            date(sh, row, 2, FIRST_DAY.plusDays(7L + batch), styles.date);
+            number(sh, row, 3, MDL_SPIKE, styles.twoDecimals);
+            number(sh, row, 4, round(MDL_SPIKE * (1 + MDL_SPIKE_CV * random.nextGaussian()), 3), styles.threeDecimals);
+        }
+        for (int i = 0; i < MDL_BLANKS; i++) {
+            int row = 5 + i;
+            int batch = i * 3 / MDL_BLANKS;
+            text(sh, row, 6, String.format(Locale.ROOT, "MB-%02d", i + 1), null);
+            text(sh, row, 7, "B" + (batch + 1), null);
+            date(sh, row, 8, FIRST_DAY.plusDays(7L + batch), styles.date);
+            number(sh, row, 9, round(MDL_BLANK_MEAN + MDL_BLANK_SD * random.nextGaussian(), 3), styles.threeDecimals);
+        }
+        widths(sh, 11, 7, 12, 14, 14, 3, 10, 7, 12, 14);
+    }
+
+    /** Blank results and low-level samples for the limit of blank and limit of detection, in two blocks. */
+    private static void lowLevelStudy(XSSFWorkbook wb, Styles styles, Random random) {
+        XSSFSheet sh = wb.createSheet("LowLevel");
+        text(sh, 1, 0, "Limit of blank and limit of detection – results in mg/kg", styles.title);
+        text(sh, 2, 0, "Blank honey-free syrup and three low-level samples, measured over five days.", null);
+        String[] blankHeader = {"Blank ID", "Day", "Result (mg/kg)"};
+        String[] lowHeader = {"Sample", "Replicate", "Day", "Result (mg/kg)"};
+        for (int c = 0; c < blankHeader.length; c++) {
+            text(sh, 4, c, blankHeader[c], styles.header);
+        }
+        for (int c = 0; c < lowHeader.length; c++) {
+            text(sh, 4, 4 + c, lowHeader[c], styles.header);
+        }
+        for (int i = 0; i < LOB_BLANKS; i++) {
+            int row = 5 + i;
+            text(sh, row, 0, String.format(Locale.ROOT, "LB-%02d", i + 1), null);
+            number(sh, row, 1, i / 4 + 1, null);
+            number(sh, row, 2, round(LOB_BLANK_MEAN + LOB_BLANK_SD * random.nextGaussian(), 3), styles.threeDecimals);
+        }
+        int row = 5;
+        for (int s = 0; s < LOW_SAMPLE.length; s++) {
+            for (int rep = 1; rep <= LOW_REPLICATES; rep++) {
+                text(sh, row, 4, LOW_SAMPLE[s], null);
+                number(sh, row, 5, rep, null);
+                number(sh, row, 6, (rep - 1) % 5 + 1, null);
+                number(sh, row, 7, round(LOW_TRUE[s] + LOW_SD * random.nextGaussian(), 3), styles.threeDecimals);
+                row++;
+            }
+        }
+        widths(sh, 10, 6, 14, 3, 9, 10, 6, 14);
+    }
+
+    /** Peak height and baseline noise of the lowest standard, as read off the chromatograms. */
+    private static void signalNoise(XSSFWorkbook wb, Styles styles, Random random) {
+        XSSFSheet sh = wb.createSheet("SignalNoise");
+        text(sh, 1, 0, "Signal-to-noise of standard S1 (0.10 mg/L), run CAL-261109-A", styles.title);
+        text(sh, 2, 0, "Noise: peak-to-peak baseline over 1 min either side of the HMF peak.", null);
+        String[] header = {"Injection", "Nominal (mg/L)", "Peak height (mAU)", "Noise (mAU)"};
+        for (int c = 0; c < header.length; c++) {
+            text(sh, 4, c, header[c], styles.header);
+        }
+        for (int inj = 1; inj <= INJECTIONS; inj++) {
+            int row = 4 + inj;
+            number(sh, row, 0, inj, null);
+            number(sh, row, 1, LEVELS[0], styles.twoDecimals);
+            number(sh, row, 2, round(SN_HEIGHT * (1 + 0.02 * random.nextGaussian()), 3), styles.threeDecimals);
+            number(sh, row, 3, round(SN_NOISE * (1 + 0.08 * random.nextGaussian()), 4), null);
+        }
+        widths(sh, 10, 15, 17, 12);
+    }
+
+    /** Routine honey samples and QC samples, two injections each, with test-portion mass and dilution. */
+    private static void samples(XSSFWorkbook wb, Styles styles, Random random) {
+        XSSFSheet sh = wb.createSheet("Samples");
+        text(sh, 1, 0, "Routine samples and QCs – run RS-261125-A, read back through the reporting calibration",
+                styles.title);
+        text(sh, 2, 0, "Test portion about 5 g made up to 50 mL; H-26-206 rerun diluted 1 + 4.", null);
+        String[] header = {"Sample ID", "Type", "Injection", "Peak area (mAU·s)", "Mass (g)", "Volume (mL)",
+            "Dilution", "Nominal (mg/kg)", "Notes"};
+        for (int c = 0; c < header.length; c++) {
+            text(sh, 4, c, header[c], styles.header);
+        }
+        int row = 5;
+        for (int i = 0; i < SAMPLE_ID.length + QC_ID.length; i++) {
+            boolean qc = i >= SAMPLE_ID.length;
+            String id = qc ? QC_ID[i - SAMPLE_ID.length] : SAMPLE_ID[i];
+            double content = qc ? QC_NOMINAL[i - SAMPLE_ID.length] * (1 + 0.02 * random.nextGaussian())
+                    : SAMPLE_TRUE[i];
+            int dilution = qc ? 1 : SAMPLE_DILUTION[i];
+            double mass = round(PORTION_G + PORTION_SD_G * random.nextGaussian(), 3);
+            double solution = content * mass / FINAL_VOLUME_ML / dilution;
+            for (int inj = 1; inj <= 2; inj++) {
+                double mean = INTERCEPT + SLOPE * solution;
+                double area = mean + Math.hypot(AREA_CV * mean, AREA_FLOOR_SD) * random.nextGaussian();
+                text(sh, row, 0, id, null);
+                text(sh, row, 1, qc ? "QC" : "sample", null);
+                number(sh, row, 2, inj, null);
+                number(sh, row, 3, round(area, 2), styles.twoDecimals);
+                number(sh, row, 4, mass, styles.threeDecimals);
+                number(sh, row, 5, FINAL_VOLUME_ML, styles.oneDecimal);
+                number(sh, row, 6, dilution, null);
+                if (qc) {
+                    number(sh, row, 7, QC_NOMINAL[i - SAMPLE_ID.length], styles.oneDecimal);
+                }
+                if (!qc && i == SAMPLE_ID.length - 2 && inj == 1) {
+                    text(sh, row, 8, "above the top standard; rerun diluted", null);
+                }
+                row++;
+            }
+        }
+        widths(sh, 11, 8, 10, 18, 9, 11, 9, 16, 36);
     }
 
     // --- cell helpers (1-based rows as Excel shows them, 0-based columns) ---
