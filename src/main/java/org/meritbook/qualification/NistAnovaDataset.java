@@ -52,13 +52,16 @@ public record NistAnovaDataset(String name, List<double[]> groups, BigDecimal ce
     /** Reads one of the shipped files ({@code nist-strd/<name>.dat}). */
     public static NistAnovaDataset load(String name) {
         List<String> lines = NistFile.lines(name);
-        List<String> certified = NistFile.slice(lines, NistFile.range(lines, CERTIFIED_LINES));
+        int[] data = NistFile.range(lines, DATA_LINES);
+        // The certified block runs to the data: AtmWtAg's header names lines 41 to 47, but its
+        // residual SD stands on line 48.
+        int[] certifiedLines = {NistFile.range(lines, CERTIFIED_LINES)[0], data[0] - 1};
+        List<String> certified = NistFile.slice(lines, certifiedLines);
         Matcher between = NistFile.find(name, certified, BETWEEN, "between-treatment line");
         Matcher within = NistFile.find(name, certified, WITHIN, "within-treatment line");
         double rSquared = NistFile.number(NistFile.find(name, certified, R_SQUARED, "R-squared").group(1));
         double residualSd = NistFile.number(NistFile.find(name, certified, RESIDUAL_SD, "residual SD").group(1));
 
-        int[] data = NistFile.range(lines, DATA_LINES);
         if (!lines.get(data[0] - 2).trim().startsWith("Data:")) {
             throw new IllegalStateException(name + ": expected the column line 'Data: ...' before the data");
         }

@@ -22,7 +22,8 @@ public final class SampleChecks {
         Objects.requireNonNull(values, name);
         if (values.length < minimum) {
             throw new UnusableDataException(UnusableDataException.Reason.TOO_FEW_VALUES,
-                    name + ": at least " + minimum + " values are needed, but there are " + values.length);
+                    name + ": at least " + minimum + (minimum == 1 ? " value is" : " values are") + " needed, but there are "
+                            + values.length);
         }
         for (int i = 0; i < values.length; i++) {
             if (!Double.isFinite(values[i])) {
