@@ -24,6 +24,8 @@ public class UnusableDataException extends IllegalArgumentException {
         ZERO_MEAN,
         /** The calibration slope is zero or negative where a detection limit needs a rising line. */
         NON_POSITIVE_SLOPE,
+        /** The calibration slope is zero, so no concentration corresponds to a response. */
+        ZERO_SLOPE,
         /** A value lies outside the domain of the formula (e.g. a mass fraction above 1). */
         OUT_OF_DOMAIN
     }
@@ -32,6 +34,12 @@ public class UnusableDataException extends IllegalArgumentException {
 
     public UnusableDataException(Reason reason, String message) {
         super(message);
+        this.reason = Objects.requireNonNull(reason, "reason");
+    }
+
+    /** As {@link #UnusableDataException(Reason, String)}, keeping the lower-level exception that found it. */
+    public UnusableDataException(Reason reason, String message, Throwable cause) {
+        super(message, cause);
         this.reason = Objects.requireNonNull(reason, "reason");
     }
 
