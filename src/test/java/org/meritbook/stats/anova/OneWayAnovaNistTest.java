@@ -5,8 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.ValueSource;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.meritbook.qualification.NistAnovaDataset;
 import org.meritbook.stats.ExactMoments;
 import org.meritbook.stats.Lre;
@@ -22,10 +24,9 @@ class OneWayAnovaNistTest {
 
     // Source: NIST StRD SiRstv, SmLs01-09, AtmWtAg certified ANOVA tables, R² and residual SD.
     @ParameterizedTest
-    @ValueSource(strings = {"SiRstv", "SmLs01", "SmLs02", "SmLs03", "AtmWtAg", "SmLs04", "SmLs05", "SmLs06", "SmLs07",
-        "SmLs08", "SmLs09"})
+    @MethodSource("names")
     void centredDataReachEveryCertifiedFigure(String name) {
-        NistAnovaDataset d = NistAnovaDataset.load(name);
+        NistAnovaDataset d = load(name);
         OneWayAnova a = OneWayAnova.of(d.centredGroups());
         assertEquals(d.dfBetween(), a.dfBetween());
         assertEquals(d.dfWithin(), a.dfWithin());
@@ -41,10 +42,9 @@ class OneWayAnovaNistTest {
 
     // Source: NIST StRD files (data) and exact decimal arithmetic on the same doubles (ExactMoments).
     @ParameterizedTest
-    @ValueSource(strings = {"SiRstv", "SmLs01", "SmLs02", "SmLs03", "AtmWtAg", "SmLs04", "SmLs05", "SmLs06", "SmLs07",
-        "SmLs08", "SmLs09"})
+    @MethodSource("names")
     void onTheNearestDoublesTheAlgorithmLosesNothing(String name) {
-        List<double[]> groups = NistAnovaDataset.load(name).groups();
+        List<double[]> groups = load(name).groups();
         OneWayAnova a = OneWayAnova.of(groups);
         double[] exact = ExactMoments.anovaSums(groups);
         assertDigits(name + " SS between (exact of doubles)", a.ssBetween(), exact[0], 15); // measured ≥ 15.7
@@ -53,10 +53,9 @@ class OneWayAnovaNistTest {
 
     // Source: NIST StRD certified values; the bars are the representation limits of the doubles, measured.
     @ParameterizedTest
-    @ValueSource(strings = {"SiRstv", "SmLs01", "SmLs02", "SmLs03", "AtmWtAg", "SmLs04", "SmLs05", "SmLs06", "SmLs07",
-        "SmLs08", "SmLs09"})
+    @MethodSource("names")
     void onTheNearestDoublesOnlyRepresentationLimitsTheDigits(String name) {
-        NistAnovaDataset d = NistAnovaDataset.load(name);
+        NistAnovaDataset d = load(name);
         OneWayAnova a = OneWayAnova.of(d.groups());
         // Measured: SmLs07-09 3.9 to 4.4 digits (13 constant leading digits), AtmWtAg and SmLs04-06
         // 9.9 to 10.9 (7 constant digits), the lower-difficulty sets 13.1 or more.
@@ -68,6 +67,16 @@ class OneWayAnovaNistTest {
         assertDigits(name + " SS between (raw)", a.ssBetween(), d.ssBetween(), bar);
         assertDigits(name + " SS within (raw)", a.ssWithin(), d.ssWithin(), bar);
         assertDigits(name + " F (raw)", a.f(), d.f(), bar);
+    }
+
+    private static final Map<String, NistAnovaDataset> LOADED = new ConcurrentHashMap<>();
+
+    private static NistAnovaDataset load(String name) {
+        return LOADED.computeIfAbsent(name, NistAnovaDataset::load);
+    }
+
+    static List<String> names() {
+        return NistAnovaDataset.NAMES;
     }
 
     static void assertDigits(String what, double computed, double certified, double bar) {

@@ -2,9 +2,10 @@ package org.meritbook.stats.descriptive;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
 import java.util.Locale;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.ValueSource;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.meritbook.qualification.NistUnivariateDataset;
 import org.meritbook.stats.ExactMoments;
 import org.meritbook.stats.Lre;
@@ -27,7 +28,7 @@ class SampleSummaryNistTest {
 
     // Source: NIST StRD Michelso, Mavro, NumAcc1-4, Lew, Lottery, PiDigits certified mean and SD.
     @ParameterizedTest
-    @ValueSource(strings = {"PiDigits", "Lottery", "Lew", "Mavro", "Michelso", "NumAcc1", "NumAcc2", "NumAcc3", "NumAcc4"})
+    @MethodSource("names")
     void centredDataReachTheCertifiedDigits(String name) {
         NistUnivariateDataset d = NistUnivariateDataset.load(name);
         SampleSummary s = SampleSummary.of(d.centredValues());
@@ -38,7 +39,7 @@ class SampleSummaryNistTest {
 
     // Source: NIST StRD files (data) and exact decimal arithmetic on the same doubles (ExactMoments).
     @ParameterizedTest
-    @ValueSource(strings = {"PiDigits", "Lottery", "Lew", "Mavro", "Michelso", "NumAcc1", "NumAcc2", "NumAcc3", "NumAcc4"})
+    @MethodSource("names")
     void onTheNearestDoublesTheAlgorithmLosesNothing(String name) {
         double[] v = NistUnivariateDataset.load(name).values();
         SampleSummary s = SampleSummary.of(v);
@@ -48,7 +49,7 @@ class SampleSummaryNistTest {
 
     // Source: NIST StRD certified values; the bars are the representation limits measured on these doubles.
     @ParameterizedTest
-    @ValueSource(strings = {"PiDigits", "Lottery", "Lew", "Mavro", "Michelso", "NumAcc1", "NumAcc2", "NumAcc3", "NumAcc4"})
+    @MethodSource("names")
     void onTheNearestDoublesOnlyNumAcc3And4FallShortOfTheCertificate(String name) {
         NistUnivariateDataset d = NistUnivariateDataset.load(name);
         SampleSummary s = SampleSummary.of(d.values());
@@ -59,6 +60,10 @@ class SampleSummaryNistTest {
         };
         assertDigits(name + " mean", s.mean(), d.certifiedMean(), 15);
         assertDigits(name + " SD", s.sd(), d.certifiedSd(), sdBar);
+    }
+
+    static List<String> names() {
+        return NistUnivariateDataset.NAMES;
     }
 
     static void assertDigits(String what, double computed, double certified, double bar) {

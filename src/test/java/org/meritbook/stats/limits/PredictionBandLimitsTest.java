@@ -44,13 +44,14 @@ class PredictionBandLimitsTest {
 
     // Source: Monte Carlo check of the defining property (seeded, deterministic): for a true blank the
     // standardized difference (y0 − ŷ(0))/(s·h(0)) is Student t with n − 2 df, so a new blank exceeds y_C
-    // with probability α exactly. 20 000 simulated calibrations on Miller & Miller's design, true line
-    // y = 1.5 + 1.9x, σ = 0.43: the exceedance rate must lie within 0.05 ± 0.005 (3.2 standard errors).
+    // with probability α exactly. 8 000 simulated calibrations on Miller & Miller's design, true line
+    // y = 1.5 + 1.9x, σ = 0.43: the exceedance rate must lie within 0.05 ± 0.007 (2.9 standard errors);
+    // a normal quantile in place of t (rate about 0.085) or a two-sided t (0.025) would fail.
     @Test
     void aBlankExceedsTheCriticalResponseWithProbabilityAlpha() {
         Random random = new Random(11843L);
         int exceed = 0;
-        int runs = 20000;
+        int runs = 8000;
         double[] y = new double[MM_X.length];
         for (int r = 0; r < runs; r++) {
             for (int i = 0; i < y.length; i++) {
@@ -63,7 +64,7 @@ class PredictionBandLimitsTest {
             }
         }
         double rate = (double) exceed / runs;
-        assertTrue(Math.abs(rate - 0.05) <= 0.005, "false-positive rate " + rate);
+        assertTrue(Math.abs(rate - 0.05) <= 0.007, "false-positive rate " + rate);
     }
 
     // Source: R 4.2.2, an independent solution: lm(y ~ x, weights = w), w = 1/x normalised to mean 1;
