@@ -22,7 +22,8 @@ import picocli.CommandLine.Option;
 
 /** {@code meritbook qualify}: recompute NIST certified values on this machine and keep the record. */
 @Command(name = "qualify", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
-        description = {"Recompute NIST StRD certified values with meritbook's calibration fits on this machine and "
+        description = {"Recompute NIST StRD certified values with meritbook's statistics (calibration fits, mean and SD, "
+                + "one-way ANOVA) on this machine and "
                 + "write a dated qualification record (DIR/qualification/).",
             "Exit 0 when every figure agrees on at least 9 significant digits, 1 otherwise."})
 final class QualifyCommand implements Callable<Integer> {

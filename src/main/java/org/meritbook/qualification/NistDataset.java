@@ -1,11 +1,5 @@
 package org.meritbook.qualification;
 
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -32,21 +26,12 @@ public record NistDataset(String name, double[] x, double[] y, Map<String, doubl
 
     /** Reads one of the NIST files meritbook ships ({@code nist-strd/<name>.dat} beside this class). */
     public static NistDataset load(String name) {
-        String resource = "nist-strd/" + name + ".dat";
-        try (InputStream in = NistDataset.class.getResourceAsStream(resource)) {
-            if (in == null) {
-                throw new IllegalStateException("missing resource " + resource);
-            }
-            BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.US_ASCII));
-            return parse(name, reader.lines().toList());
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        return parse(name, NistFile.lines(name));
     }
 
     static NistDataset parse(String name, List<String> lines) {
-        int[] certified = range(lines, CERTIFIED_LINES);
-        int[] data = range(lines, DATA_LINES);
+        int[] certified = NistFile.range(lines, CERTIFIED_LINES);
+        int[] data = NistFile.range(lines, DATA_LINES);
         Map<String, double[]> parameters = new HashMap<>();
         Double residualSd = null;
         Double rSquared = null;
@@ -107,16 +92,6 @@ public record NistDataset(String name, double[] x, double[] y, Map<String, doubl
         return parameters.get(parameter)[1];
     }
 
-    private static int[] range(List<String> lines, Pattern pattern) {
-        for (String line : lines) {
-            Matcher m = pattern.matcher(line);
-            if (m.find()) {
-                return new int[] {Integer.parseInt(m.group(1)), Integer.parseInt(m.group(2))};
-            }
-        }
-        throw new IllegalStateException("header line not found: " + pattern);
-    }
-
     private static int observations(List<String> lines) {
         for (String line : lines) {
             Matcher m = OBSERVATIONS.matcher(line);
@@ -128,6 +103,6 @@ public record NistDataset(String name, double[] x, double[] y, Map<String, doubl
     }
 
     private static double number(String text) {
-        return Double.parseDouble(text);
+        return NistFile.number(text);
     }
 }

@@ -66,6 +66,37 @@ class HandbookExampleTest {
         assertEquals(6, fit.inverse(13.1), 1e-12);
     }
 
+    // Source: Miller & Miller, ch. 5, the same fluorescence calibration read back (from memory): single
+    // readings y0 = 2.9, 13.5, 23.0 give x0 = 0.72, 6.21, 11.13 pg/mL with s(x0) = 0.26, 0.24, 0.26 and
+    // 95 % confidence limits x0 ± 0.68, ± 0.62, ± 0.68 (t = 2.57).
+    @Test
+    void readsBackTheBooksThreeSamples() {
+        double[][] book = {{2.9, 0.72, 0.26, 0.68}, {13.5, 6.21, 0.24, 0.62}, {23.0, 11.13, 0.26, 0.68}};
+        for (double[] row : book) {
+            InversePrediction p = InversePrediction.of(fit, new double[] {row[0]});
+            assertEquals(row[1], p.x0(), 0.005, "x0 for y0 = " + row[0]);
+            assertEquals(row[2], p.standardError(), 0.005, "s(x0) for y0 = " + row[0]);
+            Interval ci = p.interval(0.95);
+            assertEquals(row[3], (ci.high() - ci.low()) / 2, 0.005, "half-width for y0 = " + row[0]);
+            assertEquals(1, p.replicates());
+            assertEquals(5, p.degreesOfFreedom());
+        }
+    }
+
+    // Source: hand arithmetic for y0 = 2.9 with the exact sums above: s(x0) = (s/b)·√(1 + 1/7 + (2.9 − 13.1)²/(b²·112)).
+    @Test
+    void inversePredictionByHand() {
+        double b = 216.2 / 112;
+        double s = Math.sqrt((418.28 - 216.2 * 216.2 / 112) / 5);
+        double expected = s / b * Math.sqrt(1 + 1.0 / 7 + Math.pow(2.9 - 13.1, 2) / (b * b * 112));
+        InversePrediction p = InversePrediction.of(fit, 2.9, 1);
+        assertRelative(expected, p.standardError());
+        assertRelative((2.9 - (13.1 - 6 * b)) / b, p.x0());
+        // Four replicate readings of the same sample shrink only the 1/m term.
+        double four = s / b * Math.sqrt(0.25 + 1.0 / 7 + Math.pow(2.9 - 13.1, 2) / (b * b * 112));
+        assertRelative(four, InversePrediction.of(fit, new double[] {2.8, 3.0, 2.9, 2.9}).standardError());
+    }
+
     private static void assertRelative(double expected, double actual) {
         assertEquals(expected, actual, 1e-12 * Math.abs(expected));
     }
