@@ -46,6 +46,7 @@ final class StudyOutput {
         AtomicFiles.write(folder.resolve("trail.md"), trail(results).getBytes(StandardCharsets.UTF_8));
         out.println("meritbook: " + results.study().frontMatter().title() + ", revision "
                 + results.study().frontMatter().revision());
+        results.warnings().forEach(w -> out.println("  warning: " + w));
         DisplayFormatter format = new DisplayFormatter();
         for (SectionResult s : results.sections()) {
             String summary = s.quantities().stream().filter(Quantity::summary)

@@ -121,6 +121,8 @@ public final class ResultsJson {
                 rules.addObject().put("rule", rule.text()).put("source", rule.source());
             }
         }
+        ArrayNode warnings = n.putArray("warnings");
+        results.warnings().forEach(warnings::add);
         return n;
     }
 
