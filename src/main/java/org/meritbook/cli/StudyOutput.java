@@ -37,7 +37,7 @@ final class StudyOutput {
         Path folder = options.out.resolve(baseName(notebook));
         String stem = baseName(notebook);
         RevisionContext revisions = PreviousRevisions.find(folder, stem, results);
-        byte[] json = ResultsJson.toBytes(results, revisions.earlier());
+        byte[] json = ResultsJson.toBytes(results, revisions);
         RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates))
                 .render(results, json, revisions);
         List<Path> written = new DossierWriter().write(dossier, folder, DossierWriter.baseName(results.study()),

@@ -1,7 +1,6 @@
 package org.meritbook.revision;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
@@ -54,7 +53,7 @@ public final class DossierVerifier {
                     attached.isEmpty() ? "no attached files" : "the attachments " + attached.keySet(),
                     "Verify the PDF that meritbook run wrote, not a copy printed or re-saved by another program.");
         }
-        JsonNode recorded = json(resultsBytes, name);
+        JsonNode recorded = ReceivedResults.parse(resultsBytes, name + " (attached results.json)");
         Path folder = null;
         try {
             folder = Files.createTempDirectory("meritbook-verify-");
@@ -151,20 +150,6 @@ public final class DossierVerifier {
         Map<String, JsonNode> out = new LinkedHashMap<>();
         results.get("sections").forEach(s -> out.put(s.get("id").asText(), s));
         return out;
-    }
-
-    private static JsonNode json(byte[] bytes, String pdf) {
-        try {
-            JsonNode tree = new ObjectMapper().readTree(bytes);
-            if (!ResultsJson.SCHEMA.equals(tree.path("schema").asText())) {
-                throw new InputException(ErrorKey.CORRUPT_FILE, pdf, "attached results.json of schema " + ResultsJson.SCHEMA,
-                        "schema '" + tree.path("schema").asText() + "'", "Verify it with the meritbook version that wrote it.");
-            }
-            return tree;
-        } catch (IOException e) {
-            throw new InputException(ErrorKey.CORRUPT_FILE, pdf, "an attached results.json in JSON",
-                    "text that is not JSON", "The attachment was altered; treat the dossier as not verified.");
-        }
     }
 
     private static void delete(Path folder) {

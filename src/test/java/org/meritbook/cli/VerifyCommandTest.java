@@ -3,6 +3,8 @@ package org.meritbook.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -64,6 +66,33 @@ class VerifyCommandTest {
         assertEquals(1, o.code(), o.out() + o.err());
         assertTrue(o.out().contains("NOT verified"), o.out());
         assertTrue(o.out().contains("linearity.slope: recorded 41.0, re-run gives 41.7"), o.out());
+    }
+
+    @Test
+    void aResultsFieldRemovedOrOfTheWrongTypeIsALocatedInputError() throws Exception {
+        Path removed = tampered("results.json", bytes -> json(bytes, tree ->
+                ((ObjectNode) tree.get("sections").get(0)).remove("quantities")));
+        Outcome o = Cli.execute("verify", removed.toString());
+        assertEquals(2, o.code(), o.out() + o.err());
+        assertTrue(o.err().contains("tampered-results.json.pdf (attached results.json), at $.sections[0].quantities: "
+                + "expected the field 'quantities' but found nothing (the field is missing)."), o.err());
+
+        Path wrongType = tampered("results.json", bytes -> json(bytes, tree ->
+                ((ObjectNode) tree.get("study")).put("file", 42)));
+        o = Cli.execute("verify", wrongType.toString());
+        assertEquals(2, o.code(), o.out() + o.err());
+        assertTrue(o.err().contains("at $.study.file: expected a text but found the number 42."), o.err());
+    }
+
+    private static byte[] json(byte[] bytes, java.util.function.Consumer<ObjectNode> change) {
+        try {
+            ObjectMapper mapper = new ObjectMapper();
+            ObjectNode tree = (ObjectNode) mapper.readTree(bytes);
+            change.accept(tree);
+            return mapper.writeValueAsBytes(tree);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
     }
 
     @Test
