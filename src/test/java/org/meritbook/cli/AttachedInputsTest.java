@@ -92,7 +92,7 @@ class AttachedInputsTest {
                 + "it: it was not read, checksummed or attached.";
         assertTrue(o.out().contains("warning: " + warning), o.out());
 
-        Path pdf = dir.resolve("out/study/study-rev1.pdf");
+        Path pdf = dir.resolve("out/study/rev1/study-rev1.pdf");
         assertEquals(Set.of("study.md", "runs.csv", "results.json"), attachments(pdf));
         String text;
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
@@ -102,7 +102,7 @@ class AttachedInputsTest {
         assertTrue(text.contains("is declared but no cell reads it"), text);
         assertFalse(text.contains("private-notes.csv, SHA") || text.contains("a secret"), "not in the manifest");
 
-        JsonNode results = new ObjectMapper().readTree(dir.resolve("out/study/results.json").toFile());
+        JsonNode results = new ObjectMapper().readTree(dir.resolve("out/study/rev1/results.json").toFile());
         assertEquals(warning + " Remove it from sources: or use it in a cell.",
                 results.get("study").get("warnings").get(0).asText());
         List<String> aliases = new ArrayList<>();
@@ -123,6 +123,6 @@ class AttachedInputsTest {
         Outcome o = run(study("", "RUNS.CSV"));
         assertEquals(0, o.code(), o.out() + o.err());
         assertEquals(Set.of("study.md", "RUNS.CSV", "results.json"),
-                attachments(dir.resolve("out/study/study-rev1.pdf")));
+                attachments(dir.resolve("out/study/rev1/study-rev1.pdf")));
     }
 }

@@ -50,8 +50,8 @@ class DiffCommandTest {
                 .replace("revision-reason: \"First issue\"", "revision-reason: \"D16 corrected from 21.08 to 21.80\""));
         execute(0, "run", notebook.toString(), "-o", out);
 
-        Path rev1 = dir.resolve("out/hmf-honey-validation/hmf-honey-validation-rev1.pdf");
-        Path rev2 = dir.resolve("out/hmf-honey-validation/hmf-honey-validation-rev2.pdf");
+        Path rev1 = dir.resolve("out/hmf-honey-validation/rev1/hmf-honey-validation-rev1.pdf");
+        Path rev2 = dir.resolve("out/hmf-honey-validation/rev2/hmf-honey-validation-rev2.pdf");
         assertTrue(Files.exists(rev1), "revision 1 is kept beside revision 2");
         String report = execute(1, "diff", rev1.toString(), rev2.toString());
         assertTrue(report.contains("Calibration!D16: 21.08 → 21.8"), report);
@@ -70,12 +70,12 @@ class DiffCommandTest {
         assertTrue(text.contains("Calibration!D16 21.08 21.8"), "the corrected cell in the changes");
         assertTrue(text.contains("1 2026-11-20 First issue"), "revision 1 in the history");
         assertTrue(text.contains("D16 corrected from 21.08 to 21.80"), "revision 2's reason");
-        JsonNode results = new ObjectMapper().readTree(dir.resolve("out/hmf-honey-validation/results.json").toFile());
+        JsonNode results = new ObjectMapper().readTree(dir.resolve("out/hmf-honey-validation/rev2/results.json").toFile());
         assertEquals(1, results.get("study").get("history").get(0).get("revision").asInt());
         assertEquals("First issue", results.get("study").get("history").get(0).get("reason").asText());
         PdfAssertions.assertPdfA3(Files.readAllBytes(rev2)); // veraPDF, with the changes tables
 
-        String same = execute(0, "diff", rev2.toString(), dir.resolve("out/hmf-honey-validation/results.json").toString());
+        String same = execute(0, "diff", rev2.toString(), dir.resolve("out/hmf-honey-validation/rev2/results.json").toString());
         assertTrue(same.contains(": none"), same);
 
         // --json for tools, with the same exit codes.

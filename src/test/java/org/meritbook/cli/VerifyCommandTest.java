@@ -28,7 +28,7 @@ class VerifyCommandTest {
     @BeforeAll
     static void writeTheDemoDossier() {
         assertEquals(0, Cli.execute("demo", "-o", dir.toString()).code());
-        dossier = dir.resolve("hmf-honey-validation/hmf-honey-validation-rev1.pdf");
+        dossier = dir.resolve("hmf-honey-validation/rev1/hmf-honey-validation-rev1.pdf");
     }
 
     /** A copy of the dossier with one attachment's bytes replaced. */
@@ -123,7 +123,7 @@ class VerifyCommandTest {
         Files.writeString(notebook, Files.readString(Path.of("demo-data/hmf-honey-validation.md"))
                 .replace("criteria: linearity-basic", "criteria: profiles/qc.yaml"));
         assertEquals(0, Cli.execute("run", notebook.toString(), "-o", study.resolve("out").toString()).code());
-        Path pdf = study.resolve("out/hmf-honey-validation/hmf-honey-validation-rev1.pdf");
+        Path pdf = study.resolve("out/hmf-honey-validation/rev1/hmf-honey-validation-rev1.pdf");
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             assertTrue(doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames().containsKey("qc.yaml"),
                     "the profile is attached");
