@@ -65,10 +65,16 @@ public final class RevisionDiffer {
         }
         boolean pdf = name.toLowerCase(Locale.ROOT).endsWith(".pdf");
         byte[] bytes;
-        try {
-            bytes = pdf ? DossierAttachments.read(file).get("results.json") : Files.readAllBytes(file);
-        } catch (IOException e) {
-            throw new InputException(ErrorKey.CORRUPT_FILE, name, "a readable file", e.getMessage(), "Check the file.");
+        if (pdf) {
+            try (ReceivedDossier dossier = ReceivedDossier.open(file)) {
+                bytes = dossier.attachments().get("results.json");
+            }
+        } else {
+            try {
+                bytes = Files.readAllBytes(file);
+            } catch (IOException e) {
+                throw new InputException(ErrorKey.CORRUPT_FILE, name, "a readable file", e.getMessage(), "Check the file.");
+            }
         }
         if (bytes == null) {
             throw new InputException(ErrorKey.CORRUPT_FILE, name, "a dossier PDF carrying results.json",
