@@ -74,6 +74,10 @@ class DiffCommandTest {
         assertEquals(1, results.get("study").get("history").get(0).get("revision").asInt());
         assertEquals("First issue", results.get("study").get("history").get(0).get("reason").asText());
         PdfAssertions.assertPdfA3(Files.readAllBytes(rev2)); // veraPDF, with the changes tables
+        // results.json records the changes, so verify renders the changes chapter again from the attachments.
+        assertEquals("hmf-honey-validation-rev1.pdf", results.get("study").get("changes").get("since").asText());
+        Cli.Outcome verified = Cli.execute("verify", rev2.toString());
+        assertEquals(0, verified.code(), verified.out() + verified.err());
 
         String same = execute(0, "diff", rev2.toString(), dir.resolve("out/hmf-honey-validation/rev2/results.json").toString());
         assertTrue(same.contains(": none"), same);
