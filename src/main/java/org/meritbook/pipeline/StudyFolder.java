@@ -11,7 +11,6 @@ import java.nio.file.StandardOpenOption;
 import java.security.SecureRandom;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Comparator;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
@@ -156,12 +155,12 @@ public final class StudyFolder {
                 Matcher staging = STAGED_NAME.matcher(name);
                 Matcher aside = SET_ASIDE_NAME.matcher(name);
                 if (staging.matches()) {
-                    deleteTree(p);
+                    Folders.deleteTree(p);
                     notes.add("removed " + name + ", an output set an interrupted run left unfinished");
                 } else if (aside.matches()) {
                     Path original = folder.resolve(aside.group(1));
                     if (Files.exists(original)) {
-                        deleteTree(p);
+                        Folders.deleteTree(p);
                         notes.add("removed " + name + ", the set an interrupted --force run had already replaced");
                     } else {
                         rename(p, original);
@@ -203,7 +202,7 @@ public final class StudyFolder {
                 Path aside = folder.resolve(SET_ASIDE + revisionName(revision) + "-" + suffix());
                 rename(target, aside);
                 rename(staged, target);
-                deleteTree(aside);
+                Folders.deleteTree(aside);
                 return new Published(target, paths, Outcome.REPLACED);
             }
             rename(staged, target);
@@ -223,7 +222,7 @@ public final class StudyFolder {
                     }
                 }
             } catch (IOException e) {
-                deleteTree(staged);
+                Folders.deleteTree(staged);
                 throw new UncheckedIOException("cannot write the output set into " + staged, e);
             }
             return staged;
@@ -298,19 +297,6 @@ public final class StudyFolder {
             Files.deleteIfExists(p);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot remove " + p, e);
-        }
-    }
-
-    static void deleteTree(Path root) {
-        if (!Files.exists(root)) {
-            return;
-        }
-        try (Stream<Path> walk = Files.walk(root)) {
-            for (Path p : walk.sorted(Comparator.reverseOrder()).toList()) {
-                Files.deleteIfExists(p);
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot remove " + root, e);
         }
     }
 

@@ -7,18 +7,17 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Comparator;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.Function;
-import java.util.stream.Stream;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
+import org.meritbook.pipeline.Folders;
 import org.meritbook.pipeline.SoftwareInventory;
 import org.meritbook.pipeline.SourceTypes;
 import org.meritbook.pipeline.StudyResults;
@@ -104,7 +103,7 @@ public final class DossierVerifier {
             } catch (IOException e) {
                 throw new UncheckedIOException("cannot unpack the dossier's inputs into a temporary folder", e);
             } finally {
-                delete(folder);
+                Folders.deleteTree(folder);
             }
             int pages = comparePages(received, expectedPdf, differences, notes);
             String version = recordedVersion(recorded);
@@ -303,18 +302,5 @@ public final class DossierVerifier {
         Map<String, JsonNode> out = new LinkedHashMap<>();
         results.get("sections").forEach(s -> out.put(s.get("id").asText(), s));
         return out;
-    }
-
-    private static void delete(Path folder) {
-        if (folder == null) {
-            return;
-        }
-        try (Stream<Path> files = Files.walk(folder)) {
-            for (Path p : files.sorted(Comparator.reverseOrder()).toList()) {
-                Files.deleteIfExists(p);
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot remove the temporary folder " + folder, e);
-        }
     }
 }

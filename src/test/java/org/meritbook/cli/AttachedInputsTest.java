@@ -24,14 +24,7 @@ class AttachedInputsTest {
     Path dir;
 
     private Path study(String extraSources, String workbookName) throws Exception {
-        Files.writeString(dir.resolve(workbookName), """
-                Conc (mg/L),Area
-                1,10.2
-                2,19.9
-                4,40.5
-                8,79.4
-                16,161.0
-                """);
+        SmallCalibration.csv(dir.resolve(workbookName));
         String sheet = workbookName.substring(0, workbookName.lastIndexOf('.'));
         Path nb = dir.resolve("study.md");
         Files.writeString(nb, """

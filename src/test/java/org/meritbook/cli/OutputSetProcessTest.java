@@ -91,15 +91,7 @@ class OutputSetProcessTest {
 
     /** A small study (a CSV calibration) in {@code folder}, as {@code study.md}. */
     private static Path study(Path folder, int revision, String weighting) throws IOException {
-        Files.createDirectories(folder);
-        Files.writeString(folder.resolve("runs.csv"), """
-                Conc (mg/L),Area
-                1,10.2
-                2,19.9
-                4,40.5
-                8,79.4
-                16,161.0
-                """);
+        SmallCalibration.csv(folder.resolve("runs.csv"));
         Path nb = folder.resolve("study.md");
         Files.writeString(nb, """
                 ---
