@@ -18,6 +18,8 @@ import picocli.CommandLine.Command;
 public final class Main implements Runnable {
     public static final int DONE = 0;
     public static final int ACCEPTANCE_FAILED = 1;
+    /** {@code diff}: the two runs differ (the convention of diff(1) and git diff --exit-code). */
+    public static final int DIFFERENCES = 1;
     public static final int BAD_INPUT = 2;
     public static final int INTERNAL_ERROR = 3;
 

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Collectors;
 import org.meritbook.analysis.Quantity;
@@ -13,7 +14,7 @@ import org.meritbook.dossier.DisplayFormatter;
 import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.dossier.DossierWriter;
 import org.meritbook.dossier.RenderedDossier;
-import org.meritbook.pipeline.AtomicFiles;
+import org.meritbook.pipeline.StudyFolder;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.revision.InputFile;
@@ -29,23 +30,34 @@ final class StudyOutput {
     }
 
     /**
-     * Runs the notebook, renders the dossier, and only then writes anything: a refused dossier
-     * (same revision, different content) leaves every earlier output as it was.
+     * Runs the notebook, renders the dossier, and only then publishes the revision's output set, as
+     * one folder: a refused set (same revision, different content) leaves every earlier output as it
+     * was. The study folder's lock is held from reading the earlier revisions to publishing, so two
+     * runs of one study at the same time cannot both issue the same revision.
      */
     static int runAndWrite(Path notebook, OutputOptions options, PrintWriter out) {
         StudyResults results = StudyRunner.withBuiltInAnalyses().run(notebook);
-        Path folder = options.out.resolve(baseName(notebook));
         String stem = baseName(notebook);
-        RevisionContext revisions = PreviousRevisions.find(folder, stem, results);
-        byte[] json = ResultsJson.toBytes(results, revisions.earlier());
-        RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates))
-                .render(results, json, revisions);
-        List<Path> written = new DossierWriter().write(dossier, folder, DossierWriter.baseName(results.study()),
-                options.force);
-        AtomicFiles.write(folder.resolve("results.json"), json);
-        AtomicFiles.write(folder.resolve("trail.md"), trail(results).getBytes(StandardCharsets.UTF_8));
+        StudyFolder folder = new StudyFolder(options.out.resolve(stem));
+        StudyFolder.Published published;
+        List<String> cleaned;
+        try (StudyFolder.Lock lock = folder.lock(() -> {
+            out.println("meritbook: waiting for another run that is publishing into " + folder.path());
+            out.flush();
+        })) {
+            cleaned = lock.cleanUp();
+            RevisionContext revisions = PreviousRevisions.find(folder.path(), stem, results);
+            byte[] json = ResultsJson.toBytes(results, revisions);
+            RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates))
+                    .render(results, json, revisions);
+            Map<String, byte[]> files = DossierWriter.outputSet(DossierWriter.baseName(results.study()), dossier, json,
+                    trail(results).getBytes(StandardCharsets.UTF_8));
+            published = lock.publish(results.study().frontMatter().revision(), files, options.force);
+        }
         out.println("meritbook: " + results.study().frontMatter().title() + ", revision "
                 + results.study().frontMatter().revision());
+        cleaned.forEach(c -> out.println("  cleaned up: " + c));
+        results.warnings().forEach(w -> out.println("  warning: " + w));
         DisplayFormatter format = new DisplayFormatter();
         for (SectionResult s : results.sections()) {
             String summary = s.quantities().stream().filter(Quantity::summary)
@@ -61,9 +73,12 @@ final class StudyOutput {
             verdicts.stream().filter(v -> v.outcome() == Verdict.Outcome.FAIL)
                     .forEach(v -> out.println("    FAIL " + v.characteristic() + ": " + v.reason()));
         }
-        written.forEach(p -> out.println("  wrote " + p));
-        out.println("  wrote " + folder.resolve("results.json"));
-        out.println("  wrote " + folder.resolve("trail.md"));
+        String verb = switch (published.outcome()) {
+            case NEW -> "wrote ";
+            case REPLACED -> "replaced ";
+            case UNCHANGED -> "unchanged ";
+        };
+        published.files().forEach(p -> out.println("  " + verb + p));
         out.flush();
         return count(verdicts, Verdict.Outcome.FAIL) > 0 ? Main.ACCEPTANCE_FAILED : Main.DONE;
     }

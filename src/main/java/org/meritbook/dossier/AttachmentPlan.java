@@ -11,8 +11,11 @@ import org.meritbook.pipeline.StudyResults;
 import org.meritbook.study.SourceFile;
 
 /**
- * Which files the dossier carries, in a fixed order (notebook, workbooks in notebook order,
- * results.json) and under unique names, so that the manifest and the PDF agree.
+ * Which files the dossier carries, in a fixed order (notebook, workbooks in notebook order, the lab's
+ * profile file, results.json) and under unique names, so that the manifest and the PDF agree. Only
+ * what the run read is attached: a declared source that no cell used is not among the run's inputs
+ * and so never leaves the disk. Names come from the paths as written in the notebook, not from
+ * where the files happen to lie, so a re-run from unpacked attachments names them the same.
  */
 final class AttachmentPlan {
     static final String RESULTS_NAME = "results.json";
@@ -26,13 +29,20 @@ final class AttachmentPlan {
         Path notebook = results.study().file();
         out.add(new Attachment(unique(notebook.getFileName().toString(), used), "text/markdown", "Source",
                 "Study notebook", "notebook", notebook));
+        Set<String> read = new HashSet<>();
+        results.inputs().forEach(f -> read.add(f.alias()));
         for (SourceFile s : results.study().sources().values()) {
-            out.add(new Attachment(unique(s.path().getFileName().toString(), used), mime(s.path()), "Source",
-                    "Workbook '" + s.alias() + "'", s.alias(), s.path()));
+            if (read.contains(s.alias())) {
+                String name = fileName(s.written());
+                out.add(new Attachment(unique(name, used), mime(name), "Source", "Workbook '" + s.alias() + "'",
+                        s.alias(), s.path()));
+            }
         }
-        AcceptanceProfiles.file(results.study()).ifPresent(profile -> out.add(new Attachment(
-                unique(profile.getFileName().toString(), used), "application/yaml", "Source",
-                "Acceptance profile", AcceptanceProfiles.MANIFEST_ALIAS, profile)));
+        if (read.contains(AcceptanceProfiles.MANIFEST_ALIAS)) {
+            AcceptanceProfiles.file(results.study()).ifPresent(profile -> out.add(new Attachment(
+                    unique(fileName(results.study().frontMatter().criteria().strip()), used), "application/yaml",
+                    "Source", "Acceptance profile", AcceptanceProfiles.MANIFEST_ALIAS, profile)));
+        }
         out.add(new Attachment(unique(RESULTS_NAME, used), "application/json", "Data",
                 "Results of this run (full precision)", "results", null));
         return List.copyOf(out);
@@ -47,10 +57,19 @@ final class AttachmentPlan {
         return candidate;
     }
 
-    static String mime(Path p) {
-        String n = p.getFileName().toString().toLowerCase(Locale.ROOT);
+    /** The last segment of a path as written (either separator). */
+    private static String fileName(String written) {
+        String name = written.replace('\\', '/');
+        return name.substring(name.lastIndexOf('/') + 1);
+    }
+
+    static String mime(String fileName) {
+        String n = fileName.toLowerCase(Locale.ROOT);
         if (n.endsWith(".xlsx")) {
             return "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
+        }
+        if (n.endsWith(".xlsm")) {
+            return "application/vnd.ms-excel.sheet.macroEnabled.12";
         }
         if (n.endsWith(".xls")) {
             return "application/vnd.ms-excel";

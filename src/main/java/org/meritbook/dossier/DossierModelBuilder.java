@@ -95,7 +95,8 @@ final class DossierModelBuilder {
         toc.add(new TocEntry("B", "Input manifest", "manifest", List.of()));
         toc.add(new TocEntry("C", "Software and environment", "software", List.of()));
 
-        Summary summary = summary(summaryNumber, results.sections(), sections, profile(results.acceptance()));
+        Summary summary = summary(summaryNumber, results.sections(), sections, profile(results.acceptance()),
+                results.warnings());
         Cover cover = new Cover(fm.title(), orDash(fm.method()), orDash(fm.laboratory()),
                 String.valueOf(fm.revision()), date.display(), orDash(fm.preparedBy()), status(fm), summary.counts(),
                 fm.criteria() == null ? "none named" : fm.criteria(), documentId);
@@ -166,7 +167,8 @@ final class DossierModelBuilder {
                 p.rules().stream().map(r -> new ProfileRule(r.text(), r.source())).toList());
     }
 
-    private Summary summary(String number, List<SectionResult> results, List<SectionView> views, Profile profile) {
+    private Summary summary(String number, List<SectionResult> results, List<SectionView> views, Profile profile,
+                            List<String> warnings) {
         List<SummaryRow> rows = new ArrayList<>();
         int pass = 0, fail = 0, na = 0, none = 0;
         for (SectionResult r : results) {
@@ -209,7 +211,7 @@ final class DossierModelBuilder {
         }
         String counts = pass + " passed, " + fail + " failed, " + na + " not evaluable; " + none
                 + (none == 1 ? " result" : " results") + " without a criterion";
-        return new Summary(number, rows, counts, profile);
+        return new Summary(number, rows, counts, profile, warnings);
     }
 
     private List<InputRow> inputs(StudyResults results, List<PdfAFinisher.Embedded> files) {

@@ -79,9 +79,11 @@ public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions,
         }
     }
 
-    public record Summary(String number, List<SummaryRow> rows, String counts, Profile profile) {
+    /** @param warnings warnings about the study as a whole (e.g. a declared source no cell reads) */
+    public record Summary(String number, List<SummaryRow> rows, String counts, Profile profile, List<String> warnings) {
         public Summary {
             rows = List.copyOf(rows);
+            warnings = List.copyOf(warnings);
         }
     }
 

@@ -21,6 +21,9 @@ public final class SoftwareInventory {
                 new SoftwareComponent("meritbook", ownVersion()),
                 new SoftwareComponent("Java runtime", System.getProperty("java.vendor") + " "
                         + System.getProperty("java.runtime.version")),
+                // Recorded so that verify renders the environment page the dossier shows, wherever it runs.
+                new SoftwareComponent("Operating system", System.getProperty("os.name") + " "
+                        + System.getProperty("os.arch")),
                 library("Apache Commons Math", "org.apache.commons", "commons-math3"),
                 // POI and FreeMarker carry no Maven metadata in their jars but report their own versions.
                 new SoftwareComponent("Apache POI", org.apache.poi.Version.getVersion()),

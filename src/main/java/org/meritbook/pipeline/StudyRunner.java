@@ -54,6 +54,7 @@ public final class StudyRunner {
 
     public StudyResults run(Study study) {
         checkKindsAvailable(study);
+        checkSourceTypes(study);
         AcceptanceProfile profile = AcceptanceProfiles.of(study);
         Map<String, Set<String>> rangesBySource = new LinkedHashMap<>();
         List<SectionResult> sections = new ArrayList<>();
@@ -71,7 +72,7 @@ public final class StudyRunner {
                 sections.add(profile == null ? section : profile.judge(section));
             }
             return new StudyResults(study, inputs(study, rangesBySource, reader), sections,
-                    SoftwareInventory.components(), profile);
+                    SoftwareInventory.components(), profile, unusedSources(study, rangesBySource));
         }
     }
 
@@ -93,6 +94,39 @@ public final class StudyRunner {
         }
     }
 
+    /**
+     * A declared source must name a workbook file, whatever it holds: the run reads, checksums and
+     * attaches only workbooks, never an arbitrary file that a sources: line happens to name.
+     */
+    private static void checkSourceTypes(Study study) {
+        List<org.meritbook.error.Problem> problems = new ArrayList<>();
+        for (SourceFile source : study.sources().values()) {
+            if (!SourceTypes.isWorkbook(source.written())) {
+                problems.add(new org.meritbook.error.Problem(ErrorKey.UNSUPPORTED_FORMAT,
+                        study.file().getFileName() + " line " + source.line(),
+                        "a workbook file (" + SourceTypes.DESCRIPTION + ") for source '" + source.alias() + "'",
+                        "'" + source.written() + "'",
+                        "Name the lab's workbook under sources:, or remove the line."));
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new InputException(problems);
+        }
+    }
+
+    /** A declared source that no cell reads is neither checksummed nor attached; the analyst is told. */
+    private static List<String> unusedSources(Study study, Map<String, Set<String>> rangesBySource) {
+        List<String> warnings = new ArrayList<>();
+        for (SourceFile source : study.sources().values()) {
+            if (!rangesBySource.containsKey(source.alias())) {
+                warnings.add("Source '" + source.alias() + "' (" + source.written() + ", " + study.file().getFileName()
+                        + " line " + source.line() + ") is declared but no cell reads it: it was not read, "
+                        + "checksummed or attached. Remove it from sources: or use it in a cell.");
+            }
+        }
+        return warnings;
+    }
+
     private static List<InputFile> inputs(Study study, Map<String, Set<String>> rangesBySource,
                                           WorkbookReader reader) {
         List<InputFile> inputs = new ArrayList<>();
@@ -101,6 +135,10 @@ public final class StudyRunner {
         AcceptanceProfiles.file(study).ifPresent(profile ->
                 inputs.add(file(AcceptanceProfiles.MANIFEST_ALIAS, study.frontMatter().criteria().strip(), profile, List.of(), null)));
         for (SourceFile source : study.sources().values()) {
+            List<String> ranges = List.copyOf(rangesBySource.getOrDefault(source.alias(), Set.of()));
+            if (ranges.isEmpty()) {
+                continue; // declared but not used: a warning, never an input
+            }
             if (!Files.isRegularFile(source.path())) {
                 throw new InputException(ErrorKey.FILE_NOT_FOUND,
                         study.file().getFileName() + " line " + source.line(),
@@ -108,9 +146,7 @@ public final class StudyRunner {
                         "no such file at " + source.path().toAbsolutePath().normalize(),
                         "Correct the path under sources: (it is relative to the notebook's folder).");
             }
-            List<String> ranges = List.copyOf(rangesBySource.getOrDefault(source.alias(), Set.of()));
-            // Only workbooks that were read are opened again for the save date they record.
-            String savedOn = ranges.isEmpty() ? null : reader.recordedSaveTime(source.path())
+            String savedOn = reader.recordedSaveTime(source.path())
                     .map(t -> LocalDate.ofInstant(t, ZoneOffset.UTC).toString()).orElse(null);
             inputs.add(file(source.alias(), source.written(), source.path(), ranges, savedOn));
         }

@@ -14,9 +14,10 @@ import java.util.stream.Stream;
 import org.meritbook.pipeline.StudyResults;
 
 /**
- * Finds the latest earlier revision's dossier ({@code <stem>-rev<M>.pdf}, M below the current
+ * Finds the latest earlier revision's dossier ({@code rev<M>/<stem>-rev<M>.pdf}, M below the current
  * revision) in a study's output folder, and from its attached results.json the revision history and
- * the changes since. Earlier dossiers are only read, never touched.
+ * the changes since. Earlier dossiers are only read, never touched; only published revision folders
+ * are looked at, never a staging folder.
  */
 public final class PreviousRevisions {
     private PreviousRevisions() {
@@ -46,7 +47,7 @@ public final class PreviousRevisions {
         if (!Files.isDirectory(folder)) {
             return Optional.empty();
         }
-        Pattern name = Pattern.compile(Pattern.quote(stem) + "-rev([0-9]{1,6})\\.pdf");
+        Pattern name = Pattern.compile("rev([0-9]{1,6})");
         Path best = null;
         int bestRevision = 0;
         try (Stream<Path> files = Files.list(folder)) {
@@ -54,8 +55,9 @@ public final class PreviousRevisions {
                 Matcher m = name.matcher(p.getFileName().toString());
                 if (m.matches()) {
                     int r = Integer.parseInt(m.group(1));
-                    if (r < revision && r > bestRevision) {
-                        best = p;
+                    Path pdf = p.resolve(stem + "-rev" + r + ".pdf");
+                    if (r < revision && r > bestRevision && Files.isRegularFile(pdf)) {
+                        best = pdf;
                         bestRevision = r;
                     }
                 }

@@ -39,13 +39,22 @@ public final class ResultsJson {
 
     /** With the earlier revisions' history, so each revision's results carry the whole chain. */
     public static byte[] toBytes(StudyResults results, List<RevisionEntry> earlier) {
+        return toBytes(results, new RevisionContext(earlier, java.util.Optional.empty(), null));
+    }
+
+    /**
+     * With the earlier revisions' history and the changes since the latest of them, exactly as the
+     * dossier shows them (so that the dossier can be rendered again from its attachments).
+     */
+    public static byte[] toBytes(StudyResults results, RevisionContext revisions) {
         ObjectNode tree = toTree(results);
         ArrayNode history = MAPPER.createArrayNode();
-        for (RevisionEntry e : earlier) {
+        for (RevisionEntry e : revisions.earlier()) {
             history.addObject().put("revision", e.revision()).put("date", e.date()).put("reason", e.reason())
                     .put("prepared_by", e.preparedBy());
         }
         ((ObjectNode) tree.get("study")).set("history", history);
+        ((ObjectNode) tree.get("study")).set("changes", RecordedChanges.toJson(revisions));
         try {
             String text = MAPPER.writeValueAsString(tree) + "\n";
             return text.getBytes(StandardCharsets.UTF_8);
@@ -121,6 +130,8 @@ public final class ResultsJson {
                 rules.addObject().put("rule", rule.text()).put("source", rule.source());
             }
         }
+        ArrayNode warnings = n.putArray("warnings");
+        results.warnings().forEach(warnings::add);
         return n;
     }
 

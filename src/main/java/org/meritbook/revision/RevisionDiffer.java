@@ -1,7 +1,10 @@
 package org.meritbook.revision;
 
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -22,8 +25,7 @@ import org.meritbook.revision.RevisionDiff.Change;
  * corrected value shows up as {@code Calibration!D16: 21.08 → 21.80} next to the results it moved.
  */
 public final class RevisionDiffer {
-    private static final ObjectMapper MAPPER = new ObjectMapper();
-
+    private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     private RevisionDiffer() {
     }
 
@@ -39,6 +41,21 @@ public final class RevisionDiffer {
                 changes(quantities(before), quantities(after)));
     }
 
+    /**
+     * The differences as JSON for tools: {@code {before, after, identical, inputs[], cells[], settings[],
+     * results[]}}, each change {@code {what, before, after}} with null for added or removed.
+     */
+    public static String toJson(RevisionDiff diff) {
+        ObjectNode n = JSON.createObjectNode();
+        n.put("before", diff.before()).put("after", diff.after()).put("identical", diff.identical());
+        RecordedChanges.addGroups(n, diff);
+        try {
+            return JSON.writeValueAsString(n) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("the differences could not be serialised", e);
+        }
+    }
+
     /** results.json of a run: the file itself, or the one attached to a dossier PDF. */
     static JsonNode read(Path file) {
         String name = file.getFileName().toString();
@@ -46,28 +63,24 @@ public final class RevisionDiffer {
             throw new InputException(ErrorKey.FILE_NOT_FOUND, name, "a results.json or a dossier PDF", "no such file",
                     "Give the path of a results.json or a dossier written by meritbook run.");
         }
+        boolean pdf = name.toLowerCase(Locale.ROOT).endsWith(".pdf");
         byte[] bytes;
-        try {
-            bytes = name.toLowerCase(Locale.ROOT).endsWith(".pdf") ? DossierAttachments.read(file).get("results.json")
-                    : Files.readAllBytes(file);
-        } catch (IOException e) {
-            throw new InputException(ErrorKey.CORRUPT_FILE, name, "a readable file", e.getMessage(), "Check the file.");
+        if (pdf) {
+            try (ReceivedDossier dossier = ReceivedDossier.open(file)) {
+                bytes = dossier.attachments().get("results.json");
+            }
+        } else {
+            try {
+                bytes = Files.readAllBytes(file);
+            } catch (IOException e) {
+                throw new InputException(ErrorKey.CORRUPT_FILE, name, "a readable file", e.getMessage(), "Check the file.");
+            }
         }
         if (bytes == null) {
             throw new InputException(ErrorKey.CORRUPT_FILE, name, "a dossier PDF carrying results.json",
                     "no attached results.json", "Give a dossier written by meritbook run, or its results.json.");
         }
-        try {
-            JsonNode tree = MAPPER.readTree(bytes);
-            if (!ResultsJson.SCHEMA.equals(tree.path("schema").asText())) {
-                throw new InputException(ErrorKey.CORRUPT_FILE, name, "results of schema " + ResultsJson.SCHEMA,
-                        "schema '" + tree.path("schema").asText() + "'", "Compare results written by this meritbook version.");
-            }
-            return tree;
-        } catch (IOException e) {
-            throw new InputException(ErrorKey.CORRUPT_FILE, name, "results.json in JSON", "text that is not JSON",
-                    "Give the results.json that meritbook run wrote.");
-        }
+        return ReceivedResults.parse(bytes, pdf ? name + " (attached results.json)" : name);
     }
 
     private static Map<String, String> inputs(JsonNode results) {

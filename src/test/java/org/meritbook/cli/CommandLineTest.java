@@ -67,8 +67,8 @@ class CommandLineTest {
         workbook(null);
         Outcome o = Cli.execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());
         assertEquals(0, o.code(), o.err());
-        assertTrue(Files.exists(dir.resolve("out/study/results.json")));
-        assertTrue(Files.exists(dir.resolve("out/study/trail.md")));
+        assertTrue(Files.exists(dir.resolve("out/study/rev1/results.json")));
+        assertTrue(Files.exists(dir.resolve("out/study/rev1/trail.md")));
     }
 
     @Test
@@ -77,8 +77,8 @@ class CommandLineTest {
         Path nb = notebook("runs!Cal!A1:B6");
         String out = dir.resolve("out").toString();
         assertEquals(0, Cli.execute("run", nb.toString(), "-o", out).code());
-        Path results = dir.resolve("out/study/results.json");
-        Path pdf = dir.resolve("out/study/study-rev1.pdf");
+        Path results = dir.resolve("out/study/rev1/results.json");
+        Path pdf = dir.resolve("out/study/rev1/study-rev1.pdf");
         byte[] firstResults = Files.readAllBytes(results);
         byte[] firstPdf = Files.readAllBytes(pdf);
         assertEquals(0, Cli.execute("run", nb.toString(), "-o", out).code(), "an identical re-run is fine");
@@ -93,8 +93,12 @@ class CommandLineTest {
         assertEquals(0, Cli.execute("run", nb.toString(), "-o", out, "--force").code());
         assertFalse(java.util.Arrays.equals(firstPdf, Files.readAllBytes(pdf)), "--force replaced the dossier");
         try (var files = Files.list(dir.resolve("out/study"))) {
+            assertEquals(List.of(".meritbook.lock", "rev1"),
+                    files.map(p -> p.getFileName().toString()).sorted().toList(), "no staging folder left");
+        }
+        try (var files = Files.list(dir.resolve("out/study/rev1"))) {
             assertEquals(List.of("results.json", "study-rev1.html", "study-rev1.pdf", "trail.md"),
-                    files.map(p -> p.getFileName().toString()).sorted().toList(), "no temporary files left");
+                    files.map(p -> p.getFileName().toString()).sorted().toList(), "the whole set, nothing else");
         }
     }
 
@@ -114,7 +118,7 @@ class CommandLineTest {
         assertEquals(1, o.code(), o.err());
         assertTrue(o.out().contains("acceptance (strict.yaml): 0 passed, 1 failed, 0 not evaluable"), o.out());
         assertTrue(o.out().contains("FAIL Linearity: r_squared = 0.99"), o.out());
-        assertTrue(Files.exists(dir.resolve("out/study/study-rev1.pdf")), "the dossier is written all the same");
+        assertTrue(Files.exists(dir.resolve("out/study/rev1/study-rev1.pdf")), "the dossier is written all the same");
     }
 
     @Test
@@ -124,7 +128,7 @@ class CommandLineTest {
         assertEquals(2, o.code());
         assertTrue(o.err().contains("runs.xlsx, Cal!B4: expected a number in column 'Area' but found the censored "
                 + "result '<0.05'."), o.err());
-        assertFalse(Files.exists(dir.resolve("out/study/results.json")), "no results from bad input");
+        assertFalse(Files.exists(dir.resolve("out/study/rev1/results.json")), "no results from bad input");
     }
 
     @Test

@@ -26,7 +26,7 @@ import picocli.CommandLine;
 
 /** The demo's dossier as a user gets it from {@code meritbook demo}: conformance, content, reproducibility. */
 class DemoDossierTest {
-    private static final String FOLDER = "hmf-honey-validation";
+    private static final String FOLDER = "hmf-honey-validation/rev1";
     private static final String PDF = FOLDER + "/hmf-honey-validation-rev1.pdf";
     private static final String HTML = FOLDER + "/hmf-honey-validation-rev1.html";
 

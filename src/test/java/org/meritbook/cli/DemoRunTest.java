@@ -45,7 +45,7 @@ class DemoRunTest {
         cl.setOut(new PrintWriter(text));
         assertEquals(Main.DONE, cl.execute("run", NOTEBOOK.toString(), "-o", out.toString()));
         stdout = text.toString();
-        results = new ObjectMapper().readTree(out.resolve("hmf-honey-validation/results.json").toFile());
+        results = new ObjectMapper().readTree(out.resolve("hmf-honey-validation/rev1/results.json").toFile());
     }
 
     /** Standards in Calibration!C9:D31 as the analyst sees them, minus the blank row and the excluded D23. */
@@ -146,7 +146,7 @@ class DemoRunTest {
 
     @Test
     void theExcludedInjectionIsKeptVisibleWithItsReason() throws Exception {
-        String trail = Files.readString(out.resolve("hmf-honey-validation/trail.md"));
+        String trail = Files.readString(out.resolve("hmf-honey-validation/rev1/trail.md"));
         assertTrue(trail.contains("excluded Calibration!D23 | Air bubble"), "trail shows the exclusion");
         assertTrue(section("linearity").get("quantities").has("back_calculated:D23"));
     }

@@ -50,10 +50,10 @@ class DiffCommandTest {
                 .replace("revision-reason: \"First issue\"", "revision-reason: \"D16 corrected from 21.08 to 21.80\""));
         execute(0, "run", notebook.toString(), "-o", out);
 
-        Path rev1 = dir.resolve("out/hmf-honey-validation/hmf-honey-validation-rev1.pdf");
-        Path rev2 = dir.resolve("out/hmf-honey-validation/hmf-honey-validation-rev2.pdf");
+        Path rev1 = dir.resolve("out/hmf-honey-validation/rev1/hmf-honey-validation-rev1.pdf");
+        Path rev2 = dir.resolve("out/hmf-honey-validation/rev2/hmf-honey-validation-rev2.pdf");
         assertTrue(Files.exists(rev1), "revision 1 is kept beside revision 2");
-        String report = execute(0, "diff", rev1.toString(), rev2.toString());
+        String report = execute(1, "diff", rev1.toString(), rev2.toString());
         assertTrue(report.contains("Calibration!D16: 21.08 → 21.8"), report);
         assertTrue(report.contains("lab (hmf-honey-validation.xlsx): SHA-256"), report);
         assertTrue(report.contains("linearity.slope: "), report);
@@ -70,12 +70,55 @@ class DiffCommandTest {
         assertTrue(text.contains("Calibration!D16 21.08 21.8"), "the corrected cell in the changes");
         assertTrue(text.contains("1 2026-11-20 First issue"), "revision 1 in the history");
         assertTrue(text.contains("D16 corrected from 21.08 to 21.80"), "revision 2's reason");
-        JsonNode results = new ObjectMapper().readTree(dir.resolve("out/hmf-honey-validation/results.json").toFile());
+        JsonNode results = new ObjectMapper().readTree(dir.resolve("out/hmf-honey-validation/rev2/results.json").toFile());
         assertEquals(1, results.get("study").get("history").get(0).get("revision").asInt());
         assertEquals("First issue", results.get("study").get("history").get(0).get("reason").asText());
         PdfAssertions.assertPdfA3(Files.readAllBytes(rev2)); // veraPDF, with the changes tables
+        // results.json records the changes, so verify renders the changes chapter again from the attachments.
+        assertEquals("hmf-honey-validation-rev1.pdf", results.get("study").get("changes").get("since").asText());
+        Cli.Outcome verified = Cli.execute("verify", rev2.toString());
+        assertEquals(0, verified.code(), verified.out() + verified.err());
 
-        String same = execute(0, "diff", rev2.toString(), dir.resolve("out/hmf-honey-validation/results.json").toString());
+        String same = execute(0, "diff", rev2.toString(), dir.resolve("out/hmf-honey-validation/rev2/results.json").toString());
         assertTrue(same.contains(": none"), same);
+
+        // --json for tools, with the same exit codes.
+        JsonNode json = new ObjectMapper().readTree(execute(1, "diff", "--json", rev1.toString(), rev2.toString()));
+        assertEquals(false, json.get("identical").asBoolean());
+        assertEquals("hmf-honey-validation-rev1.pdf", json.get("before").asText());
+        JsonNode cell = json.get("cells").get(0);
+        assertEquals("Calibration!D16", cell.get("what").asText());
+        assertEquals("21.08", cell.get("before").asText());
+        assertEquals("21.8", cell.get("after").asText());
+        assertTrue(json.get("results").size() > 10, "every moved result is listed");
+        assertEquals(true, new ObjectMapper().readTree(execute(0, "diff", "--json", rev2.toString(), rev2.toString()))
+                .get("identical").asBoolean());
+    }
+
+    @Test
+    void aDamagedResultsFileIsTroubleWithItsLocation() throws Exception {
+        ObjectMapper mapper = new ObjectMapper();
+        Path good = dir.resolve("good.json");
+        Files.write(good, org.meritbook.revision.ResultsJson.toBytes(
+                org.meritbook.dossier.DossierFixtures.results(Files.createDirectories(dir.resolve("fixture")))));
+        com.fasterxml.jackson.databind.node.ObjectNode tree =
+                (com.fasterxml.jackson.databind.node.ObjectNode) mapper.readTree(good.toFile());
+        ((com.fasterxml.jackson.databind.node.ObjectNode) tree.get("inputs").get(0)).remove("sha256");
+        Path removed = dir.resolve("removed.json");
+        mapper.writeValue(removed.toFile(), tree);
+        ((com.fasterxml.jackson.databind.node.ObjectNode) tree.get("inputs").get(0)).put("sha256", "0".repeat(64));
+        tree.put("sections", 7);
+        Path wrongType = dir.resolve("wrong-type.json");
+        mapper.writeValue(wrongType.toFile(), tree);
+
+        Cli.Outcome o = Cli.execute("diff", good.toString(), removed.toString());
+        assertEquals(2, o.code(), o.out() + o.err());
+        assertTrue(o.err().contains("removed.json, at $.inputs[0].sha256: expected the field 'sha256' but found nothing "
+                + "(the field is missing)."), o.err());
+        o = Cli.execute("diff", wrongType.toString(), good.toString());
+        assertEquals(2, o.code(), o.out() + o.err());
+        assertTrue(o.err().contains("wrong-type.json, at $.sections: expected an array but found the number 7."), o.err());
+        assertEquals(0, Cli.execute("diff", good.toString(), good.toString()).code());
+        assertEquals(2, Cli.execute("diff", good.toString(), dir.resolve("absent.json").toString()).code());
     }
 }
