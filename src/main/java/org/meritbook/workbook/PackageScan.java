@@ -29,19 +29,17 @@ import org.meritbook.error.Problem;
  *   <li>the zip's central directory must be readable (a file cut short is not), list each part
  *       once, and declare no more than the byte budget;</li>
  *   <li>every entry is then inflated the way POI reads it (entry by entry from the local headers),
- *       counting the bytes actually produced, so a header that understates a size cannot pass; an
- *       entry that inflates more than 100-fold beyond its first 100 kB is refused as a zip bomb
- *       (POI's own rule, {@code ZipSecureFile}); each entry's CRC-32 and size must match the
- *       directory, so a damaged entry never yields changed numbers;</li>
+ *       counting the bytes actually produced against the budget, so a zip bomb whose headers
+ *       understate its size is stopped once it passes the budget; each entry's CRC-32 and size must
+ *       match the directory, so a damaged entry never yields changed numbers. No limit on the
+ *       compression ratio: genuine repetitive text (a long note) compresses more than 100-fold, and
+ *       the counted bytes already bound what a bomb can cost;</li>
  *   <li>every XML part is read with StAX ({@link XmlPartScan}): no document type declaration (the
  *       way to entity expansion), no absurd nesting, and in each worksheet every row and cell at one
  *       position only; cells and shared strings are counted against the cell budget.</li>
  * </ul>
  */
 final class PackageScan {
-    /** POI's defaults in {@code ZipSecureFile}: the smallest compressed/inflated ratio, after a grace size. */
-    static final double MIN_INFLATE_RATIO = 0.01;
-    static final long GRACE_BYTES = 100 * 1024;
     /** POI's default limit on the number of parts ({@code ZipSecureFile.getMaxFileCount}). */
     static final int MAX_PARTS = 1000;
     /** XML elements allowed per budgeted cell: a sheet needs about two per cell (c and v) and one per row. */
@@ -76,7 +74,7 @@ final class PackageScan {
                     continue;
                 }
                 Meter meter = new Meter(zip, name, total, budget, where);
-                XmlPartScan.Facts facts = read(meter, name, tally, problems, budget);
+                XmlPartScan.Facts facts = read(meter, name, listed, tally, problems, budget);
                 if (facts != null) {
                     parts.put(name, facts);
                 }
@@ -96,7 +94,7 @@ final class PackageScan {
 
     /** The central directory, by entry name, checked for duplicates and declared sizes. */
     private static Map<String, ZipArchiveEntry> directory(byte[] bytes, Problems problems, WorkbookBudget budget) {
-        String where = problems.where;
+        String where = problems.where();
         Map<String, ZipArchiveEntry> byName = new HashMap<>();
         try (ZipFile zip = ZipFile.builder().setSeekableByteChannel(new SeekableInMemoryByteChannel(bytes)).get()) {
             long declared = 0;
@@ -129,10 +127,14 @@ final class PackageScan {
         return byName;
     }
 
-    /** Reads one entry through the meter: XML parts through StAX, others only counted. Null for non-XML parts. */
-    private static XmlPartScan.Facts read(Meter meter, String name, XmlPartScan.Tally tally, Problems problems,
-                                          WorkbookBudget budget) throws IOException {
-        String where = problems.where;
+    /**
+     * Reads one entry through the meter: XML parts through StAX, others only counted. Null for
+     * non-XML parts. When a part cannot be read, the rest of the entry is inflated first: a checksum
+     * that does not match says the entry is damaged, which is the cause to report.
+     */
+    private static XmlPartScan.Facts read(Meter meter, String name, ZipArchiveEntry listed, XmlPartScan.Tally tally,
+                                          Problems problems, WorkbookBudget budget) throws IOException {
+        String where = problems.where();
         String lower = name.toLowerCase(Locale.ROOT);
         if (!lower.endsWith(".xml") && !lower.endsWith(".rels")) {
             meter.drain();
@@ -153,9 +155,14 @@ final class PackageScan {
                         : budget.tooManyCells(where, "more than " + String.format(Locale.ROOT, "%,d",
                                 budget.maxCells() * ELEMENTS_PER_CELL) + " XML elements in its parts");
             }
+            meter.drain();
+            meter.finish(listed, problems);
             throw problems.corrupt(e.getMessage());
         } catch (IOException e) {
-            throw meter.failure() != null ? meter.failure() : e;
+            if (meter.failure() != null) {
+                throw meter.failure();
+            }
+            throw e;
         }
     }
 
@@ -252,9 +259,9 @@ final class PackageScan {
     }
 
     /**
-     * The bytes of one zip entry as they are inflated: counted against the package's byte budget and
-     * the inflation ratio, and checked against the directory's CRC-32 and size at the end. A limit
-     * passed is remembered and reported as an IOException, which stops any reader of the stream.
+     * The bytes of one zip entry as they are inflated: counted against the package's byte budget, and
+     * checked against the directory's CRC-32 and size at the end. The budget passed is remembered and
+     * reported as an IOException, which stops any reader of the stream.
      */
     static final class Meter extends InputStream {
         private final ZipArchiveInputStream zip;
@@ -298,15 +305,7 @@ final class PackageScan {
                 total[0] += n;
                 if (total[0] > budget.maxBytes()) {
                     failure = new Over(budget.tooManyBytes(where, "parts that inflate to more than "
-                            + WorkbookBudget.megabytes(budget.maxBytes())));
-                } else if (inflated > GRACE_BYTES && zip.getCompressedCount() < inflated * MIN_INFLATE_RATIO) {
-                    failure = new Over(new InputException(ErrorKey.WORKBOOK_TOO_LARGE, where,
-                            "zip entries compressed at most 100-fold, as spreadsheet programs write them",
-                            "the entry " + name + ", which inflates more than 100-fold (" + zip.getCompressedCount()
-                                    + " bytes to over " + inflated + "): a zip bomb",
-                            "Use an intact copy of the workbook, saved by a spreadsheet program."));
-                }
-                if (failure != null) {
+                            + WorkbookBudget.megabytes(budget.maxBytes()) + " (" + name + " among them)"));
                     throw failure;
                 }
             }
@@ -331,7 +330,7 @@ final class PackageScan {
         }
     }
 
-    /** A budget or ratio limit passed inside a stream; carries the located error. */
+    /** The budget passed inside a stream; carries the located error. */
     static final class Over extends IOException {
         private static final long serialVersionUID = 1L;
         private final transient InputException error;

@@ -2,6 +2,13 @@ package org.meritbook.workbook;
 
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.PushbackInputStream;
+import java.io.Reader;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.Charset;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.BitSet;
 import java.util.List;
@@ -112,6 +119,8 @@ final class XmlPartScan {
         f.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, false);
         f.setProperty(XMLInputFactory.IS_REPLACING_ENTITY_REFERENCES, false);
         f.setProperty(XMLInputFactory.IS_COALESCING, false);
+        // Problems are reported as located errors; the parser must not also print them to the console.
+        f.setXMLReporter((message, type, info, location) -> { });
         return f;
     }
 
@@ -126,8 +135,9 @@ final class XmlPartScan {
         Facts facts = new Facts();
         XMLStreamReader r;
         try {
+            Reader text = decoded(in);
             synchronized (FACTORY) {
-                r = FACTORY.createXMLStreamReader(in);
+                r = FACTORY.createXMLStreamReader(text);
             }
         } catch (XMLStreamException e) {
             throw notXml(part, e, in);
@@ -146,9 +156,42 @@ final class XmlPartScan {
         return facts;
     }
 
+    /**
+     * The part as text, decoded strictly: OOXML parts are UTF-8 or UTF-16 (ECMA-376 Part 2, from
+     * memory), told apart by their first bytes. Decoding here, not in the parser, keeps a damaged byte
+     * a located error: the JDK's parser would also print it to the console.
+     */
+    private static Reader decoded(InputStream in) throws IOException {
+        PushbackInputStream p = new PushbackInputStream(in, 4);
+        byte[] head = new byte[4];
+        int n = p.readNBytes(head, 0, 4);
+        Charset charset = StandardCharsets.UTF_8;
+        int skip = 0;
+        if (n >= 2 && (head[0] & 0xff) == 0xFE && (head[1] & 0xff) == 0xFF) {
+            charset = StandardCharsets.UTF_16BE;
+            skip = 2;
+        } else if (n >= 2 && (head[0] & 0xff) == 0xFF && (head[1] & 0xff) == 0xFE) {
+            charset = StandardCharsets.UTF_16LE;
+            skip = 2;
+        } else if (n >= 2 && head[0] == '<' && head[1] == 0) {
+            charset = StandardCharsets.UTF_16LE;
+        } else if (n >= 2 && head[0] == 0 && head[1] == '<') {
+            charset = StandardCharsets.UTF_16BE;
+        } else if (n >= 3 && (head[0] & 0xff) == 0xEF && (head[1] & 0xff) == 0xBB && (head[2] & 0xff) == 0xBF) {
+            skip = 3;
+        }
+        if (n > skip) {
+            p.unread(head, skip, n - skip);
+        }
+        return new InputStreamReader(p, charset.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT));
+    }
+
     /** An IOException from the stream (the budget, or a damaged entry) wins over the XML error it caused. */
     private static Refused notXml(String part, XMLStreamException e, InputStream in) throws IOException {
-        if (e.getNestedException() instanceof IOException io) {
+        // The stream's own failure (the budget, a damaged zip entry) is rethrown; bytes that are not
+        // in the part's encoding are the part's damage, reported like any XML that is not well-formed.
+        if (e.getNestedException() instanceof IOException io && !(io instanceof CharacterCodingException)) {
             throw io;
         }
         if (in instanceof PackageScan.Meter m && m.failure() != null) {

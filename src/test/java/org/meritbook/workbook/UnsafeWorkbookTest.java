@@ -71,20 +71,45 @@ class UnsafeWorkbookTest {
         assertTrue(e.getMessage().contains("MERITBOOK_MAX_WORKBOOK_MB"), "says how to raise the limit: " + e.getMessage());
     }
 
-    /** A bomb declaring 1 kB: stopped by the inflation ratio after POI's 100 kB grace, long before its 20 MB. */
+    /** A bomb declaring 1 kB: stopped once the bytes actually inflated pass the budget (here 10 MB), long before its 20 MB. */
     @Test
     void zipBombWithLyingHeadersIsStoppedWhileInflating() throws Exception {
         XlsxParts.Raw raw = new XlsxParts.Raw();
         for (XlsxParts.Raw.Entry e : plain().rawEntries()) {
             raw.add(e.name().equals(SHEET) ? new XlsxParts.Raw.Entry(SHEET, BOMB, 8, 0, 1024, true) : e);
         }
-        InputException e = fails(raw.bytes());
+        InputException e = fails(raw.bytes(), new WorkbookBudget(10_000_000, 1_000_000));
         assertEquals(ErrorKey.WORKBOOK_TOO_LARGE, e.key());
         assertLocated(e);
-        assertTrue(e.problems().get(0).found().contains("inflates more than 100-fold"), e.getMessage());
+        assertEquals("parts that inflate to more than 10 MB (" + SHEET + " among them)", e.problems().get(0).found());
     }
 
-    /** Within the ratio but over the byte budget (here 1 MB): counted as inflated, whatever the headers say. */
+    /** The same bomb within the budget: its header lies about its size, so it is a damaged file. */
+    @Test
+    void aSizeTheDirectoryUnderstatesIsDamage() throws Exception {
+        XlsxParts.Raw raw = new XlsxParts.Raw();
+        for (XlsxParts.Raw.Entry e : plain().rawEntries()) {
+            raw.add(e.name().equals(SHEET) ? new XlsxParts.Raw.Entry(SHEET, BOMB, 8, 0, 1024, true) : e);
+        }
+        InputException e = fails(raw.bytes());
+        assertEquals(ErrorKey.CORRUPT_FILE, e.key());
+        assertLocated(e);
+    }
+
+    /** A long note of repeated text compresses far more than 100-fold; it is read, not taken for a bomb. */
+    @Test
+    void highlyCompressibleTextIsRead() throws Exception {
+        String note = "lot H-26-118 ".repeat(15_000);
+        XlsxParts p = plain().edit(SHEET, x -> x.replaceFirst("(<row r=\"5\"[^>]*>.*?)</row>",
+                "$1<c r=\"F5\" t=\"inlineStr\"><is><t>" + note + "</t></is></c></row>"));
+        Path f = Files.write(dir.resolve("lab.xlsx"), p.zip());
+        try (WorkbookReader reader = new WorkbookReader()) {
+            DataBlock b = reader.read(f, Fixtures.ref("Calibration", "A4:F8"));
+            assertEquals(note.strip(), b.column("F").orElseThrow().values().get(0).raw());
+        }
+    }
+
+    /** Over the byte budget (here 1 MB): counted as inflated, whatever the headers say. */
     @Test
     void inflatedBytesOverTheBudgetAreRefused() throws Exception {
         StringBuilder rows = new StringBuilder();
@@ -100,7 +125,7 @@ class UnsafeWorkbookTest {
         InputException e = fails(raw.bytes(), new WorkbookBudget(1_000_000, 1_000_000));
         assertEquals(ErrorKey.WORKBOOK_TOO_LARGE, e.key());
         assertLocated(e);
-        assertTrue(e.getMessage().contains("parts that inflate to more than 1 MB"), e.getMessage());
+        assertTrue(e.getMessage().contains("parts that inflate to more than 1 MB (" + SHEET + " among them)"), e.getMessage());
     }
 
     @Test
