@@ -9,11 +9,11 @@ import org.meritbook.error.InputException;
  * How much of one workbook meritbook agrees to hold in memory, checked before the workbook is
  * parsed, so that a small file cannot make the reader run out of memory or time.
  *
- * <p>The defaults come from a measurement (README, "Limits"): POI holds about 730 bytes of heap per
- * cell of an .xlsx (500,000 numeric cells took 366 MB), so a million cells need about 0.75 GB, which
- * fits the 2 GB heap Java gives itself on an 8 GB machine, with the workbook's other parts beside
- * them. A million cells also holds a 200,000-row block of several columns; the sheet XML of a million
- * numbers is about 45 MB, so 200 MB of uncompressed parts leaves room for text, styles and images.
+ * <p>The defaults come from a measurement (docs/workbooks.md): POI holds about 720 bytes of heap per
+ * .xlsx cell (a million numbers took 722 MB) and text about five times its size (178 MB of strings
+ * took 869 MB); either fits the 2 GB heap Java gives itself on an 8 GB machine. A million cells also
+ * holds a 200,000-row block of several columns; the sheet XML of a million numbers is about 45 MB, so
+ * 200 MB of uncompressed parts leaves room for text, styles and images.
  *
  * @param maxBytes the largest total size of the workbook's parts once uncompressed (an .xlsx's zip
  *                 entries, counted as they are actually inflated; the file itself for .xls and .csv)

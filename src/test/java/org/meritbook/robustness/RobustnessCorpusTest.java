@@ -111,10 +111,7 @@ class RobustnessCorpusTest {
         SplittableRandom random = new SplittableRandom(SEED);
         Demo demo = new Demo();
         FormatMutations formats = new FormatMutations(demo, random.split());
-        List<CorpusCase> all = cases(demo, formats, random);
-        String only = System.getProperty("corpus.only"); // TEMPORARY
-        List<CorpusCase> cases = only == null ? all
-                : all.stream().filter(c -> java.util.Arrays.asList(only.split(",")).contains(c.category())).toList();
+        List<CorpusCase> cases = cases(demo, formats, random);
 
         Map<String, Fingerprint> baselines = new LinkedHashMap<>();
         try (CaseRunner runner = new CaseRunner(dir.resolve("baselines"))) {
