@@ -29,6 +29,11 @@ public enum ErrorKey {
     NOT_A_NUMBER,
     CENSORED_VALUE,
     FORMULA_WITHOUT_RESULT,
+    FORMULA_NOT_EVALUATED,
+    HIDDEN_CELLS,
+    MERGED_VALUE,
+    MALFORMED_SHEET,
+    WORKBOOK_TOO_LARGE,
     BAD_CELL_ADDRESS,
     // data that cannot support a method
     TOO_FEW_POINTS,

@@ -28,18 +28,24 @@ public record AnalysisCell(String id, AnalysisKind kind, String title, int line,
         return Optional.ofNullable(options.get(name));
     }
 
-    /** The cell's {@code data:} reference, when it has one. */
+    /** The cell's {@code data:} reference, when it has one, carrying the cell's reading options. */
     public Optional<DataReference> dataReference() {
-        return option("data").map(DataReferences::parse);
+        return option("data").map(DataReferences::parse).map(r -> r.withReading(reading()));
     }
 
     /**
      * The {@code data:} reference of a nested data set ({@code blanks}, {@code spikes},
-     * {@code low-samples}), when the cell has that set.
+     * {@code low-samples}), when the cell has that set; the cell's reading options apply to it too.
      */
     public Optional<DataReference> dataReference(String dataSet) {
         return option(dataSet).filter(v -> v.value() instanceof Map)
-                .flatMap(v -> Optional.ofNullable(v.map().get("data"))).map(DataReferences::parse);
+                .flatMap(v -> Optional.ofNullable(v.map().get("data"))).map(DataReferences::parse)
+                .map(r -> r.withReading(reading()));
+    }
+
+    /** How this cell's data are read: its {@code formulas}, {@code hidden} and {@code merged} options. */
+    public ReadingOptions reading() {
+        return ReadingOptions.of(options);
     }
 
     /** The notebook line of an option, or the cell's line when the option is absent. */

@@ -4,27 +4,31 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 
-/** The analysis kinds a notebook cell can name in its info string (DESIGN §3). */
+/**
+ * The analysis kinds a notebook cell can name in its info string (DESIGN §3). Every kind that reads
+ * data also takes the reading options of {@link ReadingOptions} ({@code formulas}, {@code hidden},
+ * {@code merged}).
+ */
 public enum AnalysisKind {
     CALIBRATION("calibration",
             List.of("data", "x", "y"),
-            List.of("weighting", "model", "exclude", "id", "censored")),
+            List.of("weighting", "model", "exclude", "id", "censored", "formulas", "hidden", "merged")),
     DETECTION_LIMIT("detection-limit",
             List.of("methods"),
             List.of("calibration", "blanks", "spikes", "low-samples", "sigma", "k", "alpha", "beta",
-                    "signal", "noise", "exclude", "id", "censored")),
+                    "signal", "noise", "exclude", "id", "censored", "formulas", "hidden", "merged")),
     ACCURACY("accuracy",
             List.of("data", "measured", "known"),
-            List.of("level", "unspiked", "calibration", "exclude", "id", "censored")),
+            List.of("level", "unspiked", "calibration", "exclude", "id", "censored", "formulas", "hidden", "merged")),
     PRECISION("precision",
             List.of("data", "value"),
-            List.of("group", "level", "exclude", "id", "censored")),
+            List.of("group", "level", "exclude", "id", "censored", "formulas", "hidden", "merged")),
     RANGE("range",
             List.of("calibration"),
             List.of("tolerance", "id")),
     UNKNOWNS("unknowns",
             List.of("calibration", "data", "y", "sample"),
-            List.of("replicates", "exclude", "id", "censored"));
+            List.of("replicates", "exclude", "id", "censored", "formulas", "hidden", "merged"));
 
     private final String keyword;
     private final List<String> required;

@@ -13,12 +13,18 @@ final class OptionRules {
     }
 
     /** Options whose value is one word from a fixed list. */
-    static final Map<String, List<String>> CHOICES = Map.of(
-            // 1/x² and 1/y² are accepted as typed with a superscript.
-            "weighting", List.of("none", "1/x", "1/x^2", "1/y", "1/y^2", "auto", "1/x²", "1/y²"),
-            "model", List.of("linear", "quadratic", "linear-through-origin"),
-            "censored", List.of("reject", "drop"),
-            "sigma", List.of("blank", "residual", "intercept"));
+    static final Map<String, List<String>> CHOICES = choices();
+
+    private static Map<String, List<String>> choices() {
+        Map<String, List<String>> all = new java.util.HashMap<>(Map.of(
+                // 1/x² and 1/y² are accepted as typed with a superscript.
+                "weighting", List.of("none", "1/x", "1/x^2", "1/y", "1/y^2", "auto", "1/x²", "1/y²"),
+                "model", List.of("linear", "quadratic", "linear-through-origin"),
+                "censored", List.of("reject", "drop"),
+                "sigma", List.of("blank", "residual", "intercept")));
+        all.putAll(ReadingOptions.choices()); // formulas, hidden, merged
+        return Map.copyOf(all);
+    }
 
     /** How each choice list is shown in messages (the superscript spellings are not advertised). */
     static List<String> shown(String option) {

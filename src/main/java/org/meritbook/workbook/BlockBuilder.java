@@ -2,22 +2,23 @@ package org.meritbook.workbook;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Optional;
-import java.util.Set;
+import org.meritbook.error.InputException;
+import org.meritbook.study.DataReference;
+import org.meritbook.study.ReadingOptions;
 
 /**
  * Builds a {@link DataBlock} from headers and a span of data rows on a grid. Blank rows are
- * skipped and recorded; cells covered by a merged region are read with the region's value and
- * recorded; how values were obtained (formula results, numbers stored as text, dates, error
+ * skipped and recorded. What the workbook leaves open is settled by the notebook's reading options
+ * or reported: hidden rows and columns ({@link HiddenCells}), merged regions ({@link MergedValues}),
+ * formulas without a stored result ({@link FormulaResults}); every problem of the block is raised
+ * in one error. How values were obtained (formula results, numbers stored as text, dates, error
  * values) is summarised per column, so the trail says what the reader did.
  */
 final class BlockBuilder {
     /** Note phrases summarised per column, with their plural wording. */
     private static final String[][] SUMMARISED = {
         {Notes.CACHED, "cached formula results used"},
-        {Notes.NO_CACHED, "formulas without a cached result (saved without calculating), read as text"},
         {Notes.NUMBER_AS_TEXT, "numbers stored as text, read as numbers"},
         {Notes.DATE, "dates read as ISO text"},
         {Notes.ERROR, "error values read as text"},
@@ -27,12 +28,14 @@ final class BlockBuilder {
 
     private final Path file;
     private final Grid grid;
+    private final DataReference reference;
     private final String where;
 
-    BlockBuilder(Path file, Grid grid, String where) {
+    BlockBuilder(Path file, Grid grid, DataReference reference) {
         this.file = file;
         this.grid = grid;
-        this.where = where;
+        this.reference = reference;
+        this.where = ReadErrors.where(file, reference);
     }
 
     /**
@@ -40,6 +43,8 @@ final class BlockBuilder {
      * @param headerTop    the first header row (the top of the block's range)
      * @param firstDataRow the first data row
      * @param lastDataRow  the last data row of the requested or detected range (may lie past the sheet's end)
+     * @throws InputException for hidden cells, merged numbers or formulas without results the notebook
+     *                        did not say how to read, and formulas that could not be evaluated
      */
     DataBlock build(List<HeaderText> headers, int headerTop, int c0, int firstDataRow, int lastDataRow,
             List<String> decisions) {
@@ -49,25 +54,24 @@ final class BlockBuilder {
         if (rows.isEmpty()) {
             throw empty(headers, headerTop, firstDataRow, range);
         }
-        List<Column> columns = new ArrayList<>();
-        Set<Area> mergedUsed = new LinkedHashSet<>();
-        for (int i = 0; i < headers.size(); i++) {
-            int c = c0 + i;
-            List<CellValue> values = new ArrayList<>();
-            for (int r : rows) {
-                values.add(dataCell(r, c, mergedUsed));
-            }
-            HeaderText h = headers.get(i);
-            columns.add(new Column(h.header(), h.name(), h.unit(), CellRef.columnLetters(c), values));
+        ReadingOptions reading = reference.reading();
+        BlockDraft draft = new BlockDraft(file, grid, reference, rows, c0, headers, decisions);
+        HiddenCells.apply(draft, reading.hidden());
+        draft.readValues();
+        MergedValues.apply(draft, reading.merged());
+        FormulaResults.apply(draft, reading.formulas());
+        if (!draft.problems.isEmpty()) {
+            throw new InputException(draft.problems);
         }
-        for (Area m : mergedUsed) {
-            CellValue v = grid.value(m.firstRow(), m.firstCol());
-            decisions.add("cells in merged region " + m.a1() + " read with its value '" + v.raw() + "'");
+        List<Column> columns = new ArrayList<>();
+        for (int i = 0; i < draft.cols.size(); i++) {
+            HeaderText h = draft.headers.get(i);
+            columns.add(new Column(h.header(), h.name(), h.unit(), CellRef.columnLetters(draft.cols.get(i)), draft.column(i)));
         }
         for (Column col : columns) {
             summarise(col, decisions);
         }
-        return new DataBlock(file, grid.name(), range, columns, decisions);
+        return new DataBlock(file, grid.name(), range, columns, decisions, draft.leftOut);
     }
 
     private List<Integer> dataRows(int first, int last, int c0, int c1, List<String> decisions) {
@@ -99,23 +103,6 @@ final class BlockBuilder {
 
     private static String rowSpan(int from, int to) {
         return from == to ? "row " + (from + 1) : "rows " + (from + 1) + " to " + (to + 1);
-    }
-
-    private CellValue dataCell(int r, int c, Set<Area> mergedUsed) {
-        CellValue v = grid.value(r, c);
-        Optional<Area> m = grid.merged(r, c);
-        if (v.kind() != CellValue.Kind.BLANK || m.isEmpty()
-                || (m.get().firstRow() == r && m.get().firstCol() == c)) {
-            return v;
-        }
-        // Excel shows the region's value across the whole region (e.g. "Day 1" merged over its replicates).
-        CellValue src = grid.value(m.get().firstRow(), m.get().firstCol());
-        if (src.kind() == CellValue.Kind.BLANK) {
-            return v;
-        }
-        mergedUsed.add(m.get());
-        return new CellValue(v.ref(), src.kind(), src.number(), src.raw(),
-                Notes.join(src.note(), Notes.MERGED + m.get().a1()));
     }
 
     private static void summarise(Column col, List<String> decisions) {

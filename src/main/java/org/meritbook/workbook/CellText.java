@@ -13,9 +13,6 @@ import java.util.regex.Pattern;
 final class CellText {
     static final String NUMBER_AS_TEXT = "number stored as text";
 
-    /** Plain decimal number: sign, digits, optional '.' fraction, optional exponent. */
-    private static final Pattern NUMBER = Pattern.compile("[+-]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][+-]?\\d+)?");
-
     /** "&lt;0.05", "&lt; 0.05", "&gt;200", "≤0.1": a censored result with its stated limit. */
     private static final Pattern LIMIT = Pattern.compile("(?:<=?|>=?|≤|≥)\\s*([+-]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][+-]?\\d+)?)");
 
@@ -39,21 +36,34 @@ final class CellText {
         if (t.isEmpty()) {
             return new CellValue(ref, CellValue.Kind.BLANK, Double.NaN, "", note);
         }
-        if (NUMBER.matcher(t).matches()) {
-            double d = Double.parseDouble(t);
-            if (Double.isFinite(d)) {
-                String n = note == null ? NUMBER_AS_TEXT : note + "; " + NUMBER_AS_TEXT;
-                return new CellValue(ref, CellValue.Kind.NUMBER, d, t, n);
-            }
+        StoredNumber.Parsed number = StoredNumber.parse(t);
+        if (number.ok()) {
+            String n = note == null ? NUMBER_AS_TEXT : note + "; " + NUMBER_AS_TEXT;
+            return new CellValue(ref, CellValue.Kind.NUMBER, number.value(), t, n);
+        }
+        if (number.problem() != null) {
+            // "1e309", "NaN": text that names a number no double holds is kept as unreadable, not as 0 or ∞.
+            return unreadable(ref, t, number.problem(), note);
         }
         Matcher m = LIMIT.matcher(t);
         if (m.matches()) {
-            return new CellValue(ref, CellValue.Kind.CENSORED, Double.parseDouble(m.group(1)), t, note);
+            StoredNumber.Parsed limit = StoredNumber.parse(m.group(1));
+            return limit.ok() ? new CellValue(ref, CellValue.Kind.CENSORED, limit.value(), t, note)
+                    : unreadable(ref, t, "the censored result '" + t + "', whose limit is no finite number", note);
         }
         if (NO_LIMIT.contains(t.toLowerCase(Locale.ROOT).replaceAll("\\s+", " "))) {
             return new CellValue(ref, CellValue.Kind.CENSORED, Double.NaN, t, note);
         }
         return new CellValue(ref, CellValue.Kind.TEXT, Double.NaN, t, note);
+    }
+
+    /**
+     * A value the sheet stores but that is no number meritbook can read faithfully (a stored NaN, a
+     * number beyond a double's range, an unknown error code, a damaged cell): kept as text with the
+     * reason, so it is reported with its cell if a method needs it as a number.
+     */
+    static CellValue unreadable(CellRef ref, String raw, String reason, String note) {
+        return new CellValue(ref, CellValue.Kind.TEXT, Double.NaN, raw, Notes.join(note, Notes.UNREADABLE + reason));
     }
 
     /** Like {@link #classify} for CSV fields: every field is text, so a number carries no note. */

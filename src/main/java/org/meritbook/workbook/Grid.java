@@ -22,6 +22,25 @@ interface Grid {
     /** The merged region covering the cell, if any. */
     Optional<Area> merged(int row, int col);
 
+    /** True when the workbook hides the row (hidden, or zero height); a CSV file hides nothing. */
+    default boolean rowHidden(int row) {
+        return false;
+    }
+
+    /** True when the workbook hides the column (hidden, or zero width). */
+    default boolean columnHidden(int col) {
+        return false;
+    }
+
+    /**
+     * Evaluates the formula of a cell saved without its result ({@link CellValue#isFormulaWithoutResult()}).
+     *
+     * @throws FormulaFailure when it cannot be evaluated, with the reason
+     */
+    default CellValue evaluate(int row, int col) throws FormulaFailure {
+        throw new FormulaFailure("a cell without a formula to evaluate");
+    }
+
     /** The cell's value, or for a cell inside a merged region the value of the region's first cell. */
     default CellValue shown(int row, int col) {
         Optional<Area> m = merged(row, col);

@@ -12,6 +12,10 @@ final class Notes {
     static final String ERROR = "error value";
     static final String LOGICAL = "logical value, read as text";
     static final String MERGED = "value of merged cells ";
+    /** A stored value that is no number meritbook can read faithfully; the reason follows. */
+    static final String UNREADABLE = "unreadable stored value: ";
+    /** A formula without a stored result, evaluated by meritbook under {@code formulas: evaluate}. */
+    static final String EVALUATED = "evaluated by meritbook: formula ";
 
     private Notes() {
     }

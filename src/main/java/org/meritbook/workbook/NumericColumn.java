@@ -74,6 +74,10 @@ public final class NumericColumn {
     /** Names what the cell holds, so "#DIV/0!" reads as an error value and a date as a date. */
     private static String found(CellValue v) {
         String note = v.note() == null ? "" : v.note();
+        int unreadable = note.indexOf(Notes.UNREADABLE);
+        if (unreadable >= 0) {
+            return note.substring(unreadable + Notes.UNREADABLE.length());
+        }
         if (note.contains(Notes.ERROR)) {
             return "the error value '" + v.raw() + "'";
         }

@@ -5,7 +5,9 @@ import java.io.UncheckedIOException;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Date;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.apache.poi.hssf.usermodel.HSSFWorkbook;
 import org.apache.poi.ss.usermodel.Name;
@@ -21,11 +23,17 @@ final class PoiWorkbook implements SourceWorkbook {
     private final Workbook workbook;
     private final PoiCells cells;
     private final List<String> openingDecisions;
+    private final String fileName;
+    private final WorkbookBudget budget;
+    /** Grids by sheet index, built once: indexing a sheet's merged regions is done once per file. */
+    private final Map<Integer, PoiGrid> grids = new HashMap<>();
 
-    PoiWorkbook(Workbook workbook, List<String> openingDecisions) {
+    PoiWorkbook(Workbook workbook, List<String> openingDecisions, String fileName, WorkbookBudget budget) {
         this.workbook = workbook;
-        this.cells = new PoiCells(workbook);
+        this.cells = new PoiCells(workbook, budget.maxCells());
         this.openingDecisions = List.copyOf(openingDecisions);
+        this.fileName = fileName;
+        this.budget = budget;
     }
 
     @Override
@@ -39,9 +47,10 @@ final class PoiWorkbook implements SourceWorkbook {
 
     @Override
     public Optional<Grid> sheet(String name) {
-        for (Sheet s : workbook) {
+        for (int i = 0; i < workbook.getNumberOfSheets(); i++) {
+            Sheet s = workbook.getSheetAt(i);
             if (s.getSheetName().equalsIgnoreCase(name.strip())) {
-                return Optional.of(new PoiGrid(s, cells));
+                return Optional.of(grids.computeIfAbsent(i, k -> new PoiGrid(s, cells, fileName, budget)));
             }
         }
         return Optional.empty();
@@ -116,11 +125,20 @@ final class PoiWorkbook implements SourceWorkbook {
         return tables().stream()
                 .filter(t -> want.equalsIgnoreCase(t.getName()) || want.equalsIgnoreCase(t.getDisplayName()))
                 .findFirst()
-                .map(t -> new TableRange(t.getName(), t.getSheetName(),
-                        new Area(t.getStartCellReference().getRow(), t.getStartCellReference().getCol(),
-                                t.getEndCellReference().getRow(), t.getEndCellReference().getCol()),
-                        t.getHeaderRowCount(), t.getTotalsRowCount(),
-                        t.getColumns().stream().map(XSSFTableColumn::getName).toList()));
+                .map(this::tableRange);
+    }
+
+    private TableRange tableRange(XSSFTable t) {
+        try {
+            return new TableRange(t.getName(), t.getSheetName(),
+                    new Area(t.getStartCellReference().getRow(), t.getStartCellReference().getCol(),
+                            t.getEndCellReference().getRow(), t.getEndCellReference().getCol()),
+                    t.getHeaderRowCount(), t.getTotalsRowCount(),
+                    t.getColumns().stream().map(XSSFTableColumn::getName).toList());
+        } catch (RuntimeException e) {
+            throw ReadErrors.corrupt(fileName + ", Excel table '" + t.getName() + "'", "an Excel table over one range of cells",
+                    "a table definition whose range cannot be read", e);
+        }
     }
 
     private List<XSSFTable> tables() {

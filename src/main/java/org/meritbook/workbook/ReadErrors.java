@@ -21,6 +21,12 @@ final class ReadErrors {
         return ref.line() > 0 ? w + " (notebook line " + ref.line() + ")" : w;
     }
 
+    /** "data reference 'runs!Calib!A4:C25', notebook line 14", to name the block a cell-located problem belongs to. */
+    static String reference(DataReference ref) {
+        String w = "data reference '" + ref.text() + "'";
+        return ref.line() > 0 ? w + ", notebook line " + ref.line() : w;
+    }
+
     static String fileName(Path file) {
         Path name = file.getFileName();
         return name == null ? file.toString() : name.toString();

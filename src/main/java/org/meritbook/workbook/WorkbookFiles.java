@@ -21,6 +21,8 @@ import org.apache.poi.hssf.usermodel.HSSFWorkbook;
 import org.apache.poi.poifs.crypt.Decryptor;
 import org.apache.poi.poifs.filesystem.FileMagic;
 import org.apache.poi.poifs.filesystem.POIFSFileSystem;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.ss.usermodel.Workbook;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.meritbook.error.InputException;
@@ -33,7 +35,7 @@ final class WorkbookFiles {
     private WorkbookFiles() {
     }
 
-    static SourceWorkbook open(Path file, String where) {
+    static SourceWorkbook open(Path file, String where, WorkbookBudget budget) {
         if (!Files.isRegularFile(file)) {
             throw ReadErrors.fileNotFound(where, file, Files.isDirectory(file));
         }
@@ -43,11 +45,16 @@ final class WorkbookFiles {
         }
         byte[] bytes;
         try {
+            // A zip never shrinks what it stores much below its own size, so the file's size is a first bound for every format.
+            long size = Files.size(file);
+            if (size > budget.maxBytes()) {
+                throw budget.tooManyBytes(where, "a file of " + WorkbookBudget.megabytes(size));
+            }
             bytes = Files.readAllBytes(file);
         } catch (IOException e) {
             throw ReadErrors.corrupt(where, "a readable file", "a file that cannot be read (" + e.getClass().getSimpleName() + ")", e);
         }
-        return ext.equals("csv") ? csv(file, bytes, where) : excel(bytes, ext, where);
+        return ext.equals("csv") ? csv(file, bytes, where, budget) : excel(bytes, file, ext, where, budget);
     }
 
     static String extension(Path file) {
@@ -56,7 +63,7 @@ final class WorkbookFiles {
         return dot < 0 ? "" : name.substring(dot + 1).toLowerCase(Locale.ROOT);
     }
 
-    private static SourceWorkbook excel(byte[] bytes, String ext, String where) {
+    private static SourceWorkbook excel(byte[] bytes, Path file, String ext, String where, WorkbookBudget budget) {
         String expected = "an Excel workbook (." + ext + ")";
         if (bytes.length == 0) {
             throw ReadErrors.corrupt(where, expected, "an empty file", null);
@@ -69,6 +76,8 @@ final class WorkbookFiles {
                 if (ext.equals("xls")) {
                     decisions.add("the file is named .xls but holds an .xlsx workbook; read as .xlsx");
                 }
+                PackageScan.check(bytes, ReadErrors.fileName(file), where, expected, budget);
+                PoiLimits.allow(budget);
                 wb = new XSSFWorkbook(new ByteArrayInputStream(bytes));
             } else if (magic == FileMagic.OLE2) {
                 POIFSFileSystem fs = new POIFSFileSystem(new ByteArrayInputStream(bytes));
@@ -81,11 +90,12 @@ final class WorkbookFiles {
                     decisions.add("the file is named ." + ext + " but holds a legacy .xls workbook; read as .xls");
                 }
                 wb = new HSSFWorkbook(fs);
+                checkCells(wb, where, budget);
             } else {
                 throw ReadErrors.corrupt(where, expected,
                         "a file that is not a workbook (neither a zip package nor an OLE2 file)", null);
             }
-            return new PoiWorkbook(wb, decisions);
+            return new PoiWorkbook(wb, decisions, ReadErrors.fileName(file), budget);
         } catch (InputException e) {
             throw e;
         } catch (EncryptedDocumentException e) {
@@ -95,7 +105,21 @@ final class WorkbookFiles {
         }
     }
 
-    private static SourceWorkbook csv(Path file, byte[] bytes, String where) {
+    /** An .xls holds its cells as records already in memory; counting them is cheap and keeps one rule for all formats. */
+    private static void checkCells(Workbook wb, String where, WorkbookBudget budget) throws IOException {
+        long cells = 0;
+        for (Sheet s : wb) {
+            for (Row r : s) {
+                cells += r.getPhysicalNumberOfCells();
+            }
+        }
+        if (cells > budget.maxCells()) {
+            wb.close();
+            throw budget.tooManyCells(where, String.format(Locale.ROOT, "%,d", cells) + " cells");
+        }
+    }
+
+    private static SourceWorkbook csv(Path file, byte[] bytes, String where, WorkbookBudget budget) {
         List<String> decisions = new ArrayList<>();
         String text = decode(bytes, decisions);
         if (text.startsWith("\uFEFF")) {
@@ -108,7 +132,12 @@ final class WorkbookFiles {
                 .get();
         List<List<String>> records = new ArrayList<>();
         try (CSVParser parser = CSVParser.parse(text, format)) {
+            long fields = 0;
             for (CSVRecord r : parser) {
+                fields += r.size();
+                if (fields > budget.maxCells()) {
+                    throw budget.tooManyCells(where, "more than " + String.format(Locale.ROOT, "%,d", budget.maxCells()) + " fields");
+                }
                 records.add(r.toList());
             }
         } catch (IOException | UncheckedIOException | IllegalStateException e) {

@@ -21,6 +21,17 @@ import org.meritbook.study.DataReference;
  */
 public final class WorkbookReader implements BlockReader {
     private final Map<Path, SourceWorkbook> open = new LinkedHashMap<>();
+    private final WorkbookBudget budget;
+
+    /** A reader with the budget the environment sets ({@link WorkbookBudget#fromEnvironment()}). */
+    public WorkbookReader() {
+        this(WorkbookBudget.fromEnvironment());
+    }
+
+    /** @param budget how large a workbook this reader opens */
+    public WorkbookReader(WorkbookBudget budget) {
+        this.budget = java.util.Objects.requireNonNull(budget, "budget");
+    }
 
     @Override
     public DataBlock read(Path file, DataReference reference) {
@@ -29,9 +40,9 @@ public final class WorkbookReader implements BlockReader {
         List<String> decisions = new ArrayList<>(wb.openingDecisions());
         if (reference.hasRange()) {
             Grid g = sheet(wb, reference.target(), where);
-            return range(file, g, reference.range(), where, decisions);
+            return range(file, g, reference.range(), where, reference, decisions);
         }
-        return named(file, wb, reference.target().strip(), where, decisions);
+        return named(file, wb, reference.target().strip(), where, reference, decisions);
     }
 
     /**
@@ -52,7 +63,7 @@ public final class WorkbookReader implements BlockReader {
         Path key = file.toAbsolutePath().normalize();
         SourceWorkbook wb = open.get(key);
         if (wb == null) {
-            wb = WorkbookFiles.open(file, where);
+            wb = WorkbookFiles.open(file, where, budget);
             open.put(key, wb);
         }
         return wb;
@@ -62,14 +73,15 @@ public final class WorkbookReader implements BlockReader {
         return wb.sheet(name).orElseThrow(() -> ReadErrors.missingSheet(where, name, wb.sheetNames()));
     }
 
-    private static DataBlock range(Path file, Grid g, String text, String where, List<String> decisions) {
+    private static DataBlock range(Path file, Grid g, String text, String where, DataReference reference,
+                                   List<String> decisions) {
         RangeText parsed;
         try {
             parsed = RangeText.parse(text);
         } catch (RangeText.Refused e) {
             throw ReadErrors.badRange(where, e.getMessage());
         }
-        BlockBuilder builder = new BlockBuilder(file, g, where);
+        BlockBuilder builder = new BlockBuilder(file, g, reference);
         if (parsed instanceof RangeText.Cells cells) {
             Area a = cells.area();
             List<HeaderText> headers = Headers.fromRow(g, a.firstRow(), a.firstCol(), a.lastCol(), decisions);
@@ -95,7 +107,8 @@ public final class WorkbookReader implements BlockReader {
         return builder.build(headers, first, cols.firstCol(), first + 1, last, decisions);
     }
 
-    private static DataBlock named(Path file, SourceWorkbook wb, String target, String where, List<String> decisions) {
+    private static DataBlock named(Path file, SourceWorkbook wb, String target, String where, DataReference reference,
+                                   List<String> decisions) {
         Optional<SourceWorkbook.NamedRange> name = wb.definedName(target);
         Optional<SourceWorkbook.TableRange> table = wb.table(target);
         Optional<Grid> sheet = wb.sheet(target);
@@ -107,11 +120,11 @@ public final class WorkbookReader implements BlockReader {
             ambiguity(target, "defined name", table.isPresent(), sheet.isPresent(), decisions);
             decisions.add("read defined name '" + n.name() + "' (" + n.refersTo() + ")");
             Grid g = sheet(wb, n.sheet(), where);
-            return range(file, g, n.range(), where, decisions);
+            return range(file, g, n.range(), where, reference, decisions);
         }
         if (table.isPresent()) {
             ambiguity(target, "Excel table", false, sheet.isPresent(), decisions);
-            return table(file, wb, table.get(), where, decisions);
+            return table(file, wb, table.get(), where, reference, decisions);
         }
         if (sheet.isPresent()) {
             Grid g = sheet.get();
@@ -120,7 +133,7 @@ public final class WorkbookReader implements BlockReader {
                     ? Headers.combined(g, l.upperHeader(), l.header(), l.firstCol(), l.lastCol(), decisions)
                     : Headers.fromRow(g, l.header(), l.firstCol(), l.lastCol(), decisions);
             int top = l.upperHeader() >= 0 ? l.upperHeader() : l.header();
-            return new BlockBuilder(file, g, where).build(headers, top, l.firstCol(), l.header() + 1, l.lastRow(), decisions);
+            return new BlockBuilder(file, g, reference).build(headers, top, l.firstCol(), l.header() + 1, l.lastRow(), decisions);
         }
         throw ReadErrors.missingName(where, target, wb);
     }
@@ -140,7 +153,7 @@ public final class WorkbookReader implements BlockReader {
     }
 
     private static DataBlock table(Path file, SourceWorkbook wb, SourceWorkbook.TableRange t, String where,
-            List<String> decisions) {
+            DataReference reference, List<String> decisions) {
         Grid g = sheet(wb, t.sheet(), where);
         Area a = t.area();
         decisions.add("read Excel table '" + t.name() + "' (" + g.name() + "!" + a.a1() + ")");
@@ -156,7 +169,7 @@ public final class WorkbookReader implements BlockReader {
             headers = Headers.given(t.columnNames(), a.firstRow(), a.firstCol(), decisions);
         }
         int firstData = a.firstRow() + t.headerRows();
-        return new BlockBuilder(file, g, where).build(headers, a.firstRow(), a.firstCol(), firstData, lastData, decisions);
+        return new BlockBuilder(file, g, reference).build(headers, a.firstRow(), a.firstCol(), firstData, lastData, decisions);
     }
 
     /** Closes every file this reader opened. */

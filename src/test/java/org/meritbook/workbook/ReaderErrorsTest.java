@@ -93,8 +93,9 @@ class ReaderErrorsTest {
         Path f = Files.write(dir.resolve("lab.xlsx"), Arrays.copyOf(whole, whole.length / 3));
         InputException e = fails(f, Fixtures.ref("Calibration", "A4:C25"));
         assertEquals(ErrorKey.CORRUPT_FILE, e.key());
-        assertEquals(AT + "expected an Excel workbook (.xlsx) but found a damaged workbook that cannot be read. "
-                + "Open the file in Excel and save it again, or use an intact copy.", e.getMessage());
+        assertEquals(AT + "expected an Excel workbook (.xlsx) but found a zip package whose directory cannot be read "
+                + "(the file is cut short or damaged). Open the file in Excel and save it again, or use an intact copy.",
+                e.getMessage());
         assertNotNull(e.getCause());
     }
 

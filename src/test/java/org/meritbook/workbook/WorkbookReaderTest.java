@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertSame;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.meritbook.workbook.Fixtures.row;
 
@@ -22,7 +23,10 @@ import org.apache.poi.xssf.usermodel.XSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFTable;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.meritbook.error.ErrorKey;
+import org.meritbook.error.InputException;
 import org.meritbook.study.DataReference;
+import org.meritbook.study.ReadingOptions;
 
 class WorkbookReaderTest {
     @TempDir
@@ -86,17 +90,20 @@ class WorkbookReaderTest {
     }
 
     @Test
-    void formulaWithoutCachedResultIsTextSayingSo() {
+    void formulaWithoutCachedResultIsRefusedUnlessEvaluated() {
         Path f = Fixtures.xlsx(dir, "lab.xlsx", wb -> {
             Sheet s = wb.createSheet("Calc");
             row(s, 1, "x", "y");
-            row(s, 2, 1.0, new Fixtures.Formula("A2*2"));
+            row(s, 2, 1.0, new Fixtures.Formula("A2*2")); // POI, like openpyxl, stores no result
         });
-        CellValue y = col(read(f, Fixtures.ref("Calc", "A1:B2")), "y").values().get(0);
-        assertEquals(CellValue.Kind.TEXT, y.kind());
-        assertEquals("=A2*2", y.raw());
-        assertEquals("no cached result of formula =A2*2", y.note());
-        assertTrue(y.isFormulaWithoutResult());
+        InputException e = assertThrows(InputException.class, () -> read(f, Fixtures.ref("Calc", "A1:B2")));
+        assertEquals(ErrorKey.FORMULA_WITHOUT_RESULT, e.key());
+        assertTrue(e.problems().get(0).found().contains("Calc!B2 (=A2*2)"), e.getMessage());
+        DataBlock b = read(f, Fixtures.ref("Calc", "A1:B2").withReading(ReadingOptions.DEFAULT.withFormulas(ReadingOptions.Formulas.EVALUATE)));
+        CellValue y = col(b, "y").values().get(0);
+        assertEquals(2.0, y.number(), 0.0);
+        assertTrue(decided(b, "Calc!B2: formula =A2*2 had no stored result; evaluated by meritbook to '2' (formulas: evaluate)"),
+                b.decisions().toString());
     }
 
     @Test

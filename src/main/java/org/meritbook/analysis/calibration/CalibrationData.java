@@ -61,7 +61,7 @@ record CalibrationData(DataBlock block, Column xColumn, Column yColumn, List<Cal
         for (int i = 0; i < rows; i++) {
             String rx = reasons.get(xColumn.values().get(i).ref());
             String ry = reasons.get(yColumn.values().get(i).ref());
-            rowReason[i] = rx != null ? rx : ry;
+            rowReason[i] = rx != null ? rx : ry != null ? ry : block.leftOut().get(i); // the reader's, e.g. hidden: leave-out
         }
         double[][] xy = numbers(block.file(), xColumn, yColumn, rowReason);
         List<CalibrationPoint> points = new ArrayList<>(rows);

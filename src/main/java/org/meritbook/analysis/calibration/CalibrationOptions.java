@@ -6,7 +6,6 @@ import org.meritbook.error.InputException;
 import org.meritbook.stats.regression.Weighting;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.DataReference;
-import org.meritbook.study.DataReferences;
 import org.meritbook.study.OptionValue;
 import org.meritbook.analysis.AnalysisContext;
 
@@ -24,7 +23,7 @@ record CalibrationOptions(DataReference data, String x, String y, WeightingChoic
                           boolean dropCensored) {
 
     static CalibrationOptions of(AnalysisCell cell, AnalysisContext context) {
-        DataReference data = DataReferences.parse(cell.options().get("data"));
+        DataReference data = cell.dataReference().orElseThrow(); // with the cell's reading options
         String x = cell.options().get("x").text();
         String y = cell.options().get("y").text();
         WeightingChoice weighting = cell.option("weighting")
