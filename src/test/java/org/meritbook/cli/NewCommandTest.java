@@ -79,7 +79,7 @@ class NewCommandTest {
         assertEquals(2, execute("run", notebook.toString(), "-o", out.toString()), "the choice is not made for the analyst");
         Files.writeString(notebook, text.replace("# formulas: evaluate ", "formulas: evaluate #"));
         assertEquals(0, execute("run", notebook.toString(), "-o", out.toString()));
-        String trail = Files.readString(out.resolve("runs/trail.md"));
+        String trail = Files.readString(out.resolve("runs/rev1/trail.md"));
         assertTrue(trail.contains("Calibration!C29: formula =$B$6/2 had no stored result; evaluated by meritbook to '10.00' "
                 + "(formulas: evaluate)"), "the evaluated cell is in the trail with its formula");
     }

@@ -12,7 +12,9 @@ class SoftwareInventoryTest {
     void everyLibraryReportsADottedVersion() {
         List<SoftwareComponent> components = SoftwareInventory.components();
         assertEquals("meritbook", components.get(0).name());
-        for (SoftwareComponent c : components.subList(2, components.size())) {
+        assertEquals(List.of("meritbook", "Java runtime", "Operating system"),
+                components.subList(0, 3).stream().map(SoftwareComponent::name).toList(), "then the machine");
+        for (SoftwareComponent c : components.subList(3, components.size())) {
             assertTrue(c.version().matches("\\d+\\.\\d+(\\.\\d+)?.*"), c.name() + " reports '" + c.version() + "'");
         }
         assertTrue(components.stream().anyMatch(c -> c.name().equals("Apache Commons Math") && c.version().equals("3.6.1")),
