@@ -21,6 +21,7 @@ public final class SectionBuilder {
     private final List<FigureSpec> figures = new ArrayList<>();
     private final List<Verdict> verdicts = new ArrayList<>();
     private final List<String> warnings = new ArrayList<>();
+    private final List<Exported> exports = new ArrayList<>();
 
     public SectionBuilder(AnalysisCell cell) {
         this.cell = cell;
@@ -32,6 +33,12 @@ public final class SectionBuilder {
 
     public SectionBuilder setting(String label, String value) {
         settings.add(new Setting(label, value));
+        return this;
+    }
+
+    /** A setting that is a notebook choice: rules match its {@code key}, the dossier shows {@code value}. */
+    public SectionBuilder setting(String label, String value, String key) {
+        settings.add(new Setting(label, value, key));
         return this;
     }
 
@@ -76,9 +83,23 @@ public final class SectionBuilder {
         return this;
     }
 
+    /** A typed result later cells may use. */
+    public SectionBuilder export(Exported result) {
+        exports.add(result);
+        return this;
+    }
+
+    /**
+     * An input that is a quantity of an earlier cell: the trail links to that cell's step, so a
+     * reviewer follows a detection limit back to the slope it divides by.
+     */
+    public static StepInput fromEarlier(String symbol, Quantity quantity) {
+        return StepInput.number(symbol, quantity.value(), quantity.unit(), quantity.stepId());
+    }
+
     public SectionResult build(DataTable table) {
         return new SectionResult(cell.id(), cell.kind(), cell.title(), settings, quantities, steps, table, figures,
-                verdicts, warnings);
+                verdicts, warnings, exports);
     }
 
     /**

@@ -21,10 +21,11 @@ import org.meritbook.trail.Step;
  * @param figures    figure specifications
  * @param verdicts   acceptance verdicts
  * @param warnings   plain-language warnings (outliers flagged, statistics not evaluable and why)
+ * @param exports    typed results later cells may use (a calibration's line), never rendered
  */
 public record SectionResult(String id, AnalysisKind kind, String title, List<Setting> settings,
                             List<Quantity> quantities, List<Step> steps, DataTable table, List<FigureSpec> figures,
-                            List<Verdict> verdicts, List<String> warnings) {
+                            List<Verdict> verdicts, List<String> warnings, List<Exported> exports) {
     public SectionResult {
         Objects.requireNonNull(id, "id");
         Objects.requireNonNull(kind, "kind");
@@ -34,15 +35,29 @@ public record SectionResult(String id, AnalysisKind kind, String title, List<Set
         figures = List.copyOf(figures);
         verdicts = List.copyOf(verdicts);
         warnings = List.copyOf(warnings);
+        exports = List.copyOf(exports);
         long distinct = quantities.stream().map(Quantity::name).distinct().count();
         if (distinct != quantities.size()) {
             throw new IllegalArgumentException("duplicate quantity names in section " + id);
         }
     }
 
+    /** A section that hands nothing typed to later cells. */
+    public SectionResult(String id, AnalysisKind kind, String title, List<Setting> settings,
+                         List<Quantity> quantities, List<Step> steps, DataTable table, List<FigureSpec> figures,
+                         List<Verdict> verdicts, List<String> warnings) {
+        this(id, kind, title, settings, quantities, steps, table, figures, verdicts, warnings, List.of());
+    }
+
+    /** The typed result of this type the section exports, if any. */
+    public <T extends Exported> Optional<T> export(Class<T> type) {
+        return exports.stream().filter(type::isInstance).map(type::cast).findFirst();
+    }
+
     /** The same section with these verdicts (acceptance is judged after the analysis). */
     public SectionResult withVerdicts(List<Verdict> judged) {
-        return new SectionResult(id, kind, title, settings, quantities, steps, table, figures, judged, warnings);
+        return new SectionResult(id, kind, title, settings, quantities, steps, table, figures, judged, warnings,
+                exports);
     }
 
     public Optional<Quantity> quantity(String name) {

@@ -24,7 +24,7 @@ public record AcceptanceProfile(String name, String description, String origin, 
     public SectionResult judge(SectionResult section) {
         List<Verdict> verdicts = new ArrayList<>(section.verdicts());
         for (Rule rule : rules) {
-            rule.judge(section).ifPresent(verdicts::add);
+            verdicts.addAll(rule.judge(section));
         }
         return section.withVerdicts(verdicts);
     }

@@ -39,9 +39,9 @@ public record DeviationRule(String characteristic, double tolerance, double lowe
     }
 
     @Override
-    public Optional<Verdict> judge(SectionResult section) {
+    public List<Verdict> judge(SectionResult section) {
         if (section.kind() != AnalysisKind.CALIBRATION) {
-            return Optional.empty();
+            return List.of();
         }
         List<double[]> judged = new ArrayList<>(); // nominal, deviation
         List<String> labels = new ArrayList<>();
@@ -54,7 +54,7 @@ public record DeviationRule(String characteristic, double tolerance, double lowe
             labels.add(row.label());
         }
         if (judged.isEmpty()) {
-            return Optional.of(new Verdict(characteristic, null, text(), Verdict.Outcome.NOT_EVALUABLE,
+            return List.of(new Verdict(characteristic, null, text(), Verdict.Outcome.NOT_EVALUABLE,
                     "no back-calculated standard with a non-zero nominal concentration"));
         }
         double lowest = judged.stream().mapToDouble(p -> p[0]).min().orElseThrow();
@@ -70,7 +70,7 @@ public record DeviationRule(String characteristic, double tolerance, double lowe
         boolean pass = within >= minimumFraction * judged.size() - 1e-9;
         String reason = within + " of " + judged.size() + " standards within their limit"
                 + (outside.isEmpty() ? "" : "; outside: " + String.join(", ", outside));
-        return Optional.of(new Verdict(characteristic, null, text(),
+        return List.of(new Verdict(characteristic, null, text(),
                 pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL, reason));
     }
 

@@ -11,6 +11,7 @@ import java.util.Set;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.study.AnalysisKind;
+import org.meritbook.study.Suggestion;
 import org.yaml.snakeyaml.LoaderOptions;
 import org.yaml.snakeyaml.Yaml;
 import org.yaml.snakeyaml.constructor.SafeConstructor;
@@ -81,6 +82,13 @@ final class ProfileFile {
             throw bad(where, which + ": a 'quantity:' (a results.json name such as r_squared)", "none");
         }
         String q = String.valueOf(quantity);
+        String base = q.contains(":") ? q.substring(0, q.indexOf(':')) : q;
+        if (!kind.reportedNames().contains(base)) {
+            // A misspelt name would judge nothing and pass silently: refuse it when the profile is read.
+            throw bad(where, which + ": a quantity that a " + kind.keyword() + " cell reports ("
+                    + String.join(", ", kind.reportedNames()) + ")",
+                    "'" + q + "'" + Suggestion.hint(base, kind.reportedNames()));
+        }
         String characteristic = r.get("characteristic") == null ? q : String.valueOf(r.get("characteristic"));
         String source = r.get("source") == null ? "laboratory profile" : String.valueOf(r.get("source"));
         if (q.equals("deviation_percent")) {
@@ -96,6 +104,11 @@ final class ProfileFile {
         }
         double limit = number(r, atLeast ? "at-least" : "at-most", where, which);
         String model = r.get("model") == null ? null : String.valueOf(r.get("model"));
+        List<String> models = AnalysisKind.choicesOf("model");
+        if (model != null && (kind != AnalysisKind.CALIBRATION || !models.contains(model))) {
+            throw bad(where, which + ": 'model:' one of " + String.join(", ", models) + " (calibration rules only)",
+                    "'" + model + "'" + Suggestion.hint(model, models));
+        }
         return new QuantityRule(kind, characteristic, q, atLeast, limit, q, model, source);
     }
 

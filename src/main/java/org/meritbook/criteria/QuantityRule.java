@@ -1,5 +1,7 @@
 package org.meritbook.criteria;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import org.meritbook.analysis.Quantity;
@@ -8,7 +10,10 @@ import org.meritbook.study.AnalysisKind;
 
 /**
  * A limit on one named quantity (results.json name) of every section of one kind, e.g.
- * {@code r_squared ≥ 0.995}. A section that does not report the quantity gets "not evaluable".
+ * {@code r_squared ≥ 0.995}. A name without a {@code :} also judges every member of its family
+ * ({@code repeatability_cv_percent} judges {@code repeatability_cv_percent:QC-N} and each other
+ * level), one verdict each; a full member name judges that member only. A section that reports
+ * neither gets "not evaluable".
  *
  * @param kind           the analysis kind judged
  * @param characteristic what is judged, e.g. "Linearity"
@@ -16,11 +21,11 @@ import org.meritbook.study.AnalysisKind;
  * @param atLeast        true for value ≥ limit, false for value ≤ limit
  * @param limit          the limit
  * @param symbol         how the quantity reads in the rule text, e.g. "r²"
- * @param modelPrefix    when not null, only sections whose "Model" setting starts with this are judged
+ * @param model          when not null, only sections whose model is this notebook word ({@code linear}) are judged
  * @param source         where the limit comes from
  */
 public record QuantityRule(AnalysisKind kind, String characteristic, String quantity, boolean atLeast, double limit,
-                           String symbol, String modelPrefix, String source) implements Rule {
+                           String symbol, String model, String source) implements Rule {
     public QuantityRule {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(quantity, "quantity");
@@ -35,24 +40,41 @@ public record QuantityRule(AnalysisKind kind, String characteristic, String quan
     }
 
     @Override
-    public Optional<Verdict> judge(SectionResult section) {
+    public List<Verdict> judge(SectionResult section) {
         if (section.kind() != kind || !modelMatches(section)) {
-            return Optional.empty();
+            return List.of();
         }
-        Optional<Quantity> q = section.quantity(quantity);
-        if (q.isEmpty()) {
-            return Optional.of(new Verdict(characteristic, quantity, text(), Verdict.Outcome.NOT_EVALUABLE,
-                    "not computed for this section (see its warnings)"));
+        List<Quantity> judged = members(section);
+        if (judged.isEmpty()) {
+            return List.of(new Verdict(characteristic, quantity, text(), Verdict.Outcome.NOT_EVALUABLE,
+                    "not computed for this section" + (section.warnings().isEmpty() ? ""
+                            : " (see its warnings)")));
         }
-        double v = q.get().value();
-        boolean pass = atLeast ? v >= limit : v <= limit;
-        return Optional.of(new Verdict(characteristic, quantity, text(),
-                pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL,
-                symbol + " = " + Limits.text(v)));
+        List<Verdict> verdicts = new ArrayList<>();
+        for (Quantity q : judged) {
+            double v = q.value();
+            boolean pass = atLeast ? v >= limit : v <= limit;
+            String member = q.name().equals(quantity) ? "" : " (" + q.name().substring(q.name().indexOf(':') + 1) + ")";
+            verdicts.add(new Verdict(characteristic + member, q.name(), text(),
+                    pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL, symbol + " = " + Limits.text(v)));
+        }
+        return verdicts;
+    }
+
+    /** The quantity itself, or, for a family name, every member the section reports. */
+    private List<Quantity> members(SectionResult section) {
+        Optional<Quantity> exact = section.quantity(quantity);
+        if (exact.isPresent()) {
+            return List.of(exact.get());
+        }
+        if (quantity.contains(":")) {
+            return List.of();
+        }
+        return section.quantities().stream().filter(q -> q.name().startsWith(quantity + ":")).toList();
     }
 
     private boolean modelMatches(SectionResult section) {
-        return modelPrefix == null || section.settings().stream()
-                .anyMatch(s -> s.label().equals("Model") && s.value().startsWith(modelPrefix));
+        return model == null || section.settings().stream()
+                .anyMatch(s -> s.label().equals("Model") && model.equals(s.key()));
     }
 }

@@ -1,6 +1,6 @@
 package org.meritbook.criteria;
 
-import java.util.Optional;
+import java.util.List;
 import org.meritbook.analysis.SectionResult;
 
 /** One acceptance rule of a profile: it judges the sections it applies to. */
@@ -11,6 +11,6 @@ public sealed interface Rule permits QuantityRule, DeviationRule {
     /** Where the limit comes from (a guideline, an SOP, or "common practice"), as the profile states it. */
     String source();
 
-    /** The verdict on one section, or empty when the rule does not apply to that section. */
-    Optional<Verdict> judge(SectionResult section);
+    /** The verdicts on one section (one per judged family member), empty when the rule does not apply. */
+    List<Verdict> judge(SectionResult section);
 }

@@ -69,6 +69,7 @@ public final class StudyRunner {
             AnalysisContext context = new AnalysisContext(study, access);
             for (AnalysisCell cell : study.cells()) {
                 SectionResult section = analyses.get(cell.kind()).run(cell, context);
+                context = context.with(section);
                 sections.add(profile == null ? section : profile.judge(section));
             }
             return new StudyResults(study, inputs(study, rangesBySource, reader), sections,

@@ -12,32 +12,48 @@ import java.util.Optional;
 public enum AnalysisKind {
     CALIBRATION("calibration",
             List.of("data", "x", "y"),
-            List.of("weighting", "model", "exclude", "id", "censored", "formulas", "hidden", "merged")),
+            List.of("weighting", "model", "exclude", "id", "censored", "formulas", "hidden", "merged"),
+            List.of("n", "slope", "intercept", "slope_se", "intercept_se", "r", "r_squared", "residual_sd", "quadratic_coef", "quadratic_coef_se", "lack_of_fit_f", "lack_of_fit_p", "mandel_f", "mandel_p", "shapiro_w", "shapiro_p", "back_calculated", "deviation_percent")),
     DETECTION_LIMIT("detection-limit",
             List.of("methods"),
             List.of("calibration", "blanks", "spikes", "low-samples", "sigma", "k", "alpha", "beta",
-                    "signal", "noise", "exclude", "id", "censored", "formulas", "hidden", "merged")),
+                    "signal", "noise", "exclude", "id", "censored", "formulas", "hidden", "merged"),
+            List.of("lod", "loq", "critical_value")),
     ACCURACY("accuracy",
             List.of("data", "measured", "known"),
-            List.of("level", "unspiked", "calibration", "exclude", "id", "censored", "formulas", "hidden", "merged")),
+            List.of("level", "unspiked", "calibration", "exclude", "id", "censored", "formulas", "hidden", "merged"),
+            List.of("recovery_percent", "error_percent", "recovery_ci_low", "recovery_ci_high", "bias_p")),
     PRECISION("precision",
             List.of("data", "value"),
-            List.of("group", "level", "exclude", "id", "censored", "formulas", "hidden", "merged")),
+            List.of("group", "level", "exclude", "id", "censored", "formulas", "hidden", "merged"),
+            List.of("mean", "sd", "cv_percent", "repeatability_sd", "between_sd", "intermediate_sd", "repeatability_cv_percent", "intermediate_cv_percent")),
     RANGE("range",
             List.of("calibration"),
-            List.of("tolerance", "id")),
+            List.of("tolerance", "id"),
+            List.of("range_low", "range_high")),
     UNKNOWNS("unknowns",
             List.of("calibration", "data", "y", "sample"),
-            List.of("replicates", "exclude", "id", "censored", "formulas", "hidden", "merged"));
+            List.of("replicates", "exclude", "id", "censored", "formulas", "hidden", "merged"),
+            List.of("x0", "x0_se", "x0_ci_low", "x0_ci_high"));
 
     private final String keyword;
     private final List<String> required;
     private final List<String> optional;
+    private final List<String> reports;
 
-    AnalysisKind(String keyword, List<String> required, List<String> optional) {
+    AnalysisKind(String keyword, List<String> required, List<String> optional, List<String> reports) {
         this.keyword = keyword;
         this.required = required;
         this.optional = optional;
+        this.reports = reports;
+    }
+
+    /**
+     * The results.json names a section of this kind may report (DESIGN §4), without their
+     * {@code :<label>} part: acceptance rules are checked against them when a profile is loaded.
+     */
+    public List<String> reportedNames() {
+        return reports;
     }
 
     /** The word used in the notebook's fence info string and in results.json. */
@@ -59,6 +75,11 @@ public enum AnalysisKind {
 
     public static Optional<AnalysisKind> fromKeyword(String word) {
         return Arrays.stream(values()).filter(k -> k.keyword.equals(word)).findFirst();
+    }
+
+    /** The words an option whose value is a fixed choice accepts ({@code model}: linear, …), empty otherwise. */
+    public static List<String> choicesOf(String option) {
+        return OptionRules.CHOICES.containsKey(option) ? OptionRules.shown(option) : List.of();
     }
 
     public static List<String> keywords() {

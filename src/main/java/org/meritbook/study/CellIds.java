@@ -48,19 +48,36 @@ final class CellIds {
         return cells;
     }
 
+    /**
+     * A {@code calibration:} option names a calibration cell above it: cells run in notebook order,
+     * so a cell can use only what an earlier cell computed.
+     */
     private void checkCalibrationReferences(List<AnalysisCell> cells) {
-        List<String> calibrations = cells.stream().filter(c -> c.kind() == AnalysisKind.CALIBRATION).map(AnalysisCell::id).toList();
+        List<String> all = cells.stream().filter(c -> c.kind() == AnalysisKind.CALIBRATION).map(AnalysisCell::id).toList();
+        List<String> above = new ArrayList<>();
         for (AnalysisCell cell : cells) {
+            List<String> before = List.copyOf(above);
             cell.option(OptionRules.CALIBRATION).filter(OptionValue::isScalar).ifPresent(ref -> {
-                if (!calibrations.contains(ref.text())) {
-                    problems.add(ErrorKey.UNKNOWN_REFERENCE, ref.line(),
-                            "the id of a calibration cell (" + (calibrations.isEmpty()
-                                    ? "this notebook has none" : Problems.list(calibrations)) + ")",
-                            Problems.quote(ref.text()),
-                            calibrations.isEmpty() ? "Add a calibration cell, or give its id here."
-                                    : "Name one of the calibration cells" + Suggestion.hint(ref.text(), calibrations) + ".");
+                if (before.contains(ref.text())) {
+                    return;
                 }
+                if (all.contains(ref.text())) {
+                    problems.add(ErrorKey.UNKNOWN_REFERENCE, ref.line(),
+                            "a calibration cell above this cell (cells run in notebook order)",
+                            Problems.quote(ref.text()) + ", which comes later in the notebook",
+                            "Move this cell below the calibration cell '" + ref.text() + "'.");
+                    return;
+                }
+                problems.add(ErrorKey.UNKNOWN_REFERENCE, ref.line(),
+                        "the id of a calibration cell (" + (all.isEmpty()
+                                ? "this notebook has none" : Problems.list(all)) + ")",
+                        Problems.quote(ref.text()),
+                        all.isEmpty() ? "Add a calibration cell, or give its id here."
+                                : "Name one of the calibration cells" + Suggestion.hint(ref.text(), all) + ".");
             });
+            if (cell.kind() == AnalysisKind.CALIBRATION) {
+                above.add(cell.id());
+            }
         }
     }
 }

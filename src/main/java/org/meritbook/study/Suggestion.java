@@ -4,7 +4,7 @@ import java.util.List;
 import java.util.Optional;
 
 /** "Did you mean ...?" for misspelt kinds, options, values and aliases: the closest word by edit distance. */
-final class Suggestion {
+public final class Suggestion {
     private Suggestion() {
     }
 
@@ -24,7 +24,7 @@ final class Suggestion {
     }
 
     /** " (did you mean 'x'?)" or nothing. */
-    static String hint(String written, List<String> candidates) {
+    public static String hint(String written, List<String> candidates) {
         return closest(written, candidates).map(c -> " (did you mean '" + c + "'?)").orElse("");
     }
 

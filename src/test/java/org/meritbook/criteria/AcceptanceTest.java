@@ -46,7 +46,7 @@ class AcceptanceTest {
             rows.add(new DataTable.Row(label, List.of(TableCell.raw("1", "Cal!A" + (i + 2))),
                     excluded.contains(label) ? "failed injection" : null));
         }
-        return new SectionResult("cal", AnalysisKind.CALIBRATION, "Linearity", List.of(new Setting("Model", model)),
+        return new SectionResult("cal", AnalysisKind.CALIBRATION, "Linearity", List.of(new Setting("Model", "model " + model, model)),
                 quantities, steps, new DataTable(List.of("Conc"), rows), List.of(), List.of(), List.of());
     }
 
@@ -57,12 +57,12 @@ class AcceptanceTest {
         // ICH M10 calibration-curve criteria (±15 %, ±20 % at the LLOQ, ≥ 75 % of standards), from memory.
         DeviationRule rule = new DeviationRule("Back-calculated standards", 15, 20, 0.75, "ICH M10");
         double[] dev = {-18, 3, -2, 16.5, 1, 0, -4, 2}; // lowest level −18 % is within ±20 %; 10 ng/mL at +16.5 % is not
-        Verdict v = rule.judge(calibration(LEVELS, dev, "straight line", 0.999, List.of())).orElseThrow();
+        Verdict v = rule.judge(calibration(LEVELS, dev, "linear", 0.999, List.of())).get(0);
         assertEquals(Verdict.Outcome.PASS, v.outcome(), v.reason());
         assertEquals("7 of 8 standards within their limit; outside: P3 (16.5 %)", v.reason());
 
         double[] worse = {-22, 3, -2, 16.5, 1, 0, -15.5, 2}; // 5 of 8 = 62.5 % < 75 %
-        Verdict f = rule.judge(calibration(LEVELS, worse, "straight line", 0.999, List.of())).orElseThrow();
+        Verdict f = rule.judge(calibration(LEVELS, worse, "linear", 0.999, List.of())).get(0);
         assertEquals(Verdict.Outcome.FAIL, f.outcome());
         assertEquals("5 of 8 standards within their limit; outside: P0 (−22 %), P3 (16.5 %), P6 (−15.5 %)", f.reason());
     }
@@ -71,26 +71,26 @@ class AcceptanceTest {
     void excludedStandardsAreNotJudged() {
         DeviationRule rule = new DeviationRule("Back-calculated standards", 15, 20, 1.0, "all must pass");
         double[] dev = {1, 2, -40, 3, 1, 0, -4, 2};
-        assertEquals(Verdict.Outcome.PASS, rule.judge(calibration(LEVELS, dev, "straight line", 0.999, List.of("P2")))
-                .orElseThrow().outcome());
-        assertEquals(Verdict.Outcome.FAIL, rule.judge(calibration(LEVELS, dev, "straight line", 0.999, List.of()))
-                .orElseThrow().outcome());
+        assertEquals(Verdict.Outcome.PASS, rule.judge(calibration(LEVELS, dev, "linear", 0.999, List.of("P2")))
+                .get(0).outcome());
+        assertEquals(Verdict.Outcome.FAIL, rule.judge(calibration(LEVELS, dev, "linear", 0.999, List.of()))
+                .get(0).outcome());
     }
 
     @Test
     void aQuantityRulePassesFailsOrIsNotEvaluable() {
         QuantityRule r2 = new QuantityRule(AnalysisKind.CALIBRATION, "Linearity", "r_squared", true, 0.995, "r²", null, "x");
         double[] dev = {0, 0, 0, 0, 0, 0, 0, 0};
-        Verdict pass = r2.judge(calibration(LEVELS, dev, "straight line", 0.9991, List.of())).orElseThrow();
+        Verdict pass = r2.judge(calibration(LEVELS, dev, "linear", 0.9991, List.of())).get(0);
         assertEquals(Verdict.Outcome.PASS, pass.outcome());
         assertEquals("r² = 0.9991", pass.reason());
-        assertEquals(Verdict.Outcome.FAIL, r2.judge(calibration(LEVELS, dev, "straight line", 0.99, List.of()))
-                .orElseThrow().outcome());
+        assertEquals(Verdict.Outcome.FAIL, r2.judge(calibration(LEVELS, dev, "linear", 0.99, List.of()))
+                .get(0).outcome());
         QuantityRule mandel = new QuantityRule(AnalysisKind.CALIBRATION, "No curvature", "mandel_p", true, 0.05,
-                "Mandel p", "straight line", "x");
-        assertEquals(Verdict.Outcome.NOT_EVALUABLE, mandel.judge(calibration(LEVELS, dev, "straight line", 1, List.of()))
-                .orElseThrow().outcome());
-        assertTrue(mandel.judge(calibration(LEVELS, dev, "quadratic, y = a + b·x + c·x²", 1, List.of())).isEmpty(),
+                "Mandel p", "linear", "x");
+        assertEquals(Verdict.Outcome.NOT_EVALUABLE, mandel.judge(calibration(LEVELS, dev, "linear", 1, List.of()))
+                .get(0).outcome());
+        assertTrue(mandel.judge(calibration(LEVELS, dev, "quadratic", 1, List.of())).isEmpty(),
                 "Mandel's rule does not judge a quadratic calibration");
     }
 
@@ -121,6 +121,42 @@ class AcceptanceTest {
                 + "acceptance profile file (its format is in docs/criteria.md).", e.getMessage());
         Files.writeString(file, "rules:\n  - quantity: r_squared\n    atleast: 0.9\n");
         assertEquals(ErrorKey.UNKNOWN_OPTION, assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).key());
+    }
+
+    @Test
+    void aMisspeltQuantityOrModelIsRefusedWhenTheProfileIsRead() throws Exception {
+        // A rule that names nothing a section reports would judge nothing and let the study pass.
+        Path file = dir.resolve("lab.yaml");
+        Files.writeString(file, "rules:\n  - quantity: r_sqared\n    at-least: 0.99\n");
+        InputException e = assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml"));
+        assertTrue(e.getMessage().contains("found 'r_sqared' (did you mean 'r_squared'?)"), e.getMessage());
+        Files.writeString(file, "rules:\n  - quantity: r_squared\n    at-least: 0.99\n    model: straight line\n");
+        e = assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml"));
+        assertTrue(e.getMessage().contains("'model:' one of linear, quadratic, linear-through-origin"), e.getMessage());
+        Files.writeString(file, "rules:\n  - quantity: r_squared\n    at-least: 0.995\n    model: linear\n");
+        Rule linear = ProfileFile.read(file, "lab.yaml").rules().get(0);
+        double[] dev = {0, 0, 0, 0, 0, 0, 0, 0};
+        assertEquals(Verdict.Outcome.FAIL, linear.judge(calibration(LEVELS, dev, "linear", 0.99, List.of())).get(0).outcome(),
+                "model: linear judges a linear calibration (it once matched the display text and judged nothing)");
+        assertTrue(linear.judge(calibration(LEVELS, dev, "quadratic", 0.99, List.of())).isEmpty());
+    }
+
+    @Test
+    void aFamilyNameJudgesEveryMemberAndAMemberNameOnlyItself() {
+        List<Quantity> qs = List.of(
+                new Quantity("repeatability_cv_percent:QC-N", "RSD", 2.5, "%", "p.a", null, false),
+                new Quantity("repeatability_cv_percent:QC-S", "RSD", 1.0, "%", "p.b", null, false));
+        SectionResult precision = new SectionResult("p", AnalysisKind.PRECISION, "Precision", List.of(), qs, List.of(),
+                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of());
+        QuantityRule family = new QuantityRule(AnalysisKind.PRECISION, "Repeatability", "repeatability_cv_percent", false,
+                2.0, "RSDr", null, "common practice, no source");
+        List<Verdict> verdicts = family.judge(precision);
+        assertEquals(List.of(Verdict.Outcome.FAIL, Verdict.Outcome.PASS), verdicts.stream().map(Verdict::outcome).toList());
+        assertEquals("Repeatability (QC-N)", verdicts.get(0).characteristic());
+        QuantityRule member = new QuantityRule(AnalysisKind.PRECISION, "Repeatability", "repeatability_cv_percent:QC-S",
+                false, 2.0, "RSDr", null, "common practice, no source");
+        assertEquals(1, member.judge(precision).size());
+        assertEquals(Verdict.Outcome.PASS, member.judge(precision).get(0).outcome());
     }
 
     @Test

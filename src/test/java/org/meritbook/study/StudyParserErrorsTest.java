@@ -132,21 +132,21 @@ class StudyParserErrorsTest {
     @Test
     void malformedDataReferenceSaysTheAcceptedForms() {
         Problem p = only(HEADER + """
+                ```calibration
+                data: runs!Cal!A1:B9
+                x: A
+                y: B
+                ```
+
                 ```unknowns
                 calibration: calibration
                 data: runs!Samples!A1-C9
                 y: Signal
                 sample: Sample
                 ```
-
-                ```calibration
-                data: runs!Cal!A1:B9
-                x: A
-                y: B
-                ```
                 """);
-        assertProblem(ErrorKey.BAD_DATA_REFERENCE, "study.md line 9", p);
-        assertEquals("study.md line 9: expected a data reference source!Sheet!A1:D40, source!Sheet!B:C, source!Name or"
+        assertProblem(ErrorKey.BAD_DATA_REFERENCE, "study.md line 15", p);
+        assertEquals("study.md line 15: expected a data reference source!Sheet!A1:D40, source!Sheet!B:C, source!Name or"
                 + " source!Sheet (a sheet name with spaces or '!' in quotes: source!'Day 1'!A1:C9) but found"
                 + " 'runs!Samples!A1-C9' ('A1-C9' as the range). Write the range as two corners (A4:C25) or whole"
                 + " columns (B:C), inside Excel's grid (A1 to XFD1048576).", p.message());
@@ -318,6 +318,27 @@ class StudyParserErrorsTest {
         assertProblem(ErrorKey.UNKNOWN_REFERENCE, "study.md line 20", p);
         assertEquals("study.md line 20: expected the id of a calibration cell (linearity) but found 'precision'."
                 + " Name one of the calibration cells.", p.message());
+    }
+
+    @Test
+    void aCellCanUseOnlyACalibrationAboveIt() {
+        // Cells run in notebook order: a reference to a later cell would read a result not yet computed.
+        Problem p = only(HEADER + """
+                ```range
+                calibration: linearity
+                ```
+
+                ```calibration
+                id: linearity
+                data: runs!Cal!A1:B9
+                x: A
+                y: B
+                ```
+                """);
+        assertProblem(ErrorKey.UNKNOWN_REFERENCE, "study.md line 8", p);
+        assertEquals("study.md line 8: expected a calibration cell above this cell (cells run in notebook order) but"
+                + " found 'linearity', which comes later in the notebook. Move this cell below the calibration cell"
+                + " 'linearity'.", p.message());
     }
 
     @Test

@@ -38,7 +38,7 @@ public final class CalibrationAnalysis implements Analysis {
         checkSupportsFit(cell, options, data, context);
         SectionBuilder section = new SectionBuilder(cell);
         Weighting weighting = chooseWeighting(options, data, section);
-        section.setting("Model", options.model().description());
+        section.setting("Model", options.model().description(), options.model().keyword());
         section.setting("Weighting", weighting.notation() + (options.weighting().isAuto() ? " (chosen by auto)" : ""));
         section.setting("Confidence level", "95 %");
         double[] x = data.usedX();
@@ -56,6 +56,7 @@ public final class CalibrationAnalysis implements Analysis {
             inversion = new LineTrail(section, data, fit).record();
             curve = CalibrationCurve.of(fit);
             checks.record(fit);
+            section.export(new CalibrationLine(cell.id(), fit, data.xUnit(), data.yUnit(), min(x), max(x)));
         }
         BackCalculation.record(section, data, curve, inversion);
         flagResiduals(section, data, curve);

@@ -1,0 +1,36 @@
+package org.meritbook.analysis.calibration;
+
+import java.util.Objects;
+import org.meritbook.analysis.Exported;
+import org.meritbook.analysis.Quantity;
+import org.meritbook.analysis.SectionResult;
+import org.meritbook.stats.regression.LineFit;
+
+/**
+ * A straight-line calibration as later cells use it: the fit itself (for inverse prediction and
+ * its standard error) and the quantities it reported (so their trail inputs link to the
+ * calibration's own steps).
+ *
+ * @param cellId    the calibration cell's id
+ * @param fit       the fitted line
+ * @param xUnit     concentration unit, or null
+ * @param yUnit     response unit, or null
+ * @param xLow      lowest concentration in the fit
+ * @param xHigh     highest concentration in the fit
+ */
+public record CalibrationLine(String cellId, LineFit fit, String xUnit, String yUnit, double xLow, double xHigh)
+        implements Exported {
+    public CalibrationLine {
+        Objects.requireNonNull(cellId, "cellId");
+        Objects.requireNonNull(fit, "fit");
+    }
+
+    /** What a later cell's message calls the result it needs. */
+    public static final String DESCRIPTION = "a straight-line calibration (model: linear or through-origin)";
+
+    /** The calibration's reported quantity of this name (slope, intercept, residual_sd, …). */
+    public static Quantity quantity(SectionResult calibration, String name) {
+        return calibration.quantity(name).orElseThrow(() -> new IllegalStateException(
+                "calibration " + calibration.id() + " reports no " + name));
+    }
+}
