@@ -36,8 +36,9 @@ public enum AnalysisKind {
             List.of("range_low", "range_high")),
     UNKNOWNS("unknowns",
             List.of("calibration", "data", "y", "sample"),
-            List.of("replicates", "exclude", "id", "censored", "formulas", "hidden", "merged"),
-            List.of("x0", "x0_se", "x0_ci_low", "x0_ci_high"));
+            List.of("replicates", "mass", "volume", "dilution", "known", "result-unit", "limits", "exclude", "id",
+                    "censored", "formulas", "hidden", "merged"),
+            List.of("x0", "x0_se", "x0_ci_low", "x0_ci_high", "content", "content_se", "qc_deviation_percent"));
 
     private final String keyword;
     private final List<String> required;
