@@ -18,6 +18,7 @@ import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.DataAccess;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
+import org.meritbook.analysis.range.RangeAnalysis;
 import org.meritbook.analysis.unknowns.UnknownsAnalysis;
 import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.AcceptanceProfiles;
@@ -47,7 +48,7 @@ public final class StudyRunner {
     /** The analyses this version implements. */
     public static StudyRunner withBuiltInAnalyses() {
         return new StudyRunner(Map.of(AnalysisKind.CALIBRATION, new CalibrationAnalysis(),
-                AnalysisKind.UNKNOWNS, new UnknownsAnalysis()));
+                AnalysisKind.RANGE, new RangeAnalysis(), AnalysisKind.UNKNOWNS, new UnknownsAnalysis()));
     }
 
     public StudyResults run(Path notebook) {

@@ -32,7 +32,7 @@ public enum AnalysisKind {
                     "repeatability_cv_percent", "intermediate_cv_percent")),
     RANGE("range",
             List.of("calibration"),
-            List.of("tolerance", "id"),
+            List.of("tolerance", "deviation", "limits", "id"),
             List.of("range_low", "range_high")),
     UNKNOWNS("unknowns",
             List.of("calibration", "data", "y", "sample"),
