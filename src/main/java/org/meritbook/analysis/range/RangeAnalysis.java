@@ -52,15 +52,15 @@ public final class RangeAnalysis implements Analysis {
         }
         SectionBuilder section = new SectionBuilder(cell);
         section.setting("Calibration", "'" + line.cellId() + "', " + levels.size() + " levels above zero");
-        section.setting("Response factor", "y/x per standard, averaged per level; within ±" + plain(tolerance)
+        section.setting("Response factor", "y/x per standard, averaged per level; within ±" + trimmed(tolerance)
                 + " % of the span's mean" + (cell.option("tolerance").isPresent() ? "" : " (default, common practice)"));
-        section.setting("Back-calculated deviation", "mean per level within ±" + plain(deviationLimit) + " %"
+        section.setting("Back-calculated deviation", "mean per level within ±" + trimmed(deviationLimit) + " %"
                 + (cell.option("deviation").isPresent() ? "" : " (default)"));
 
         int[] best = widest(levels, tolerance, deviationLimit);
         if (best == null) {
             section.warning("No two adjacent levels meet both conditions: the calibration gives no linear range.");
-            return section.build(table(levels, section, -1, -1, tolerance, deviationLimit, Double.NaN));
+            return section.build(table(levels, rfUnit(line), -1, -1, Double.NaN));
         }
         int lo = best[0];
         int hi = best[1];
@@ -79,7 +79,7 @@ public final class RangeAnalysis implements Analysis {
             if (lowIndex > hi) {
                 section.warning(String.format(Locale.ROOT, "The LOQ (%s %s) lies above the whole linear span: no range "
                         + "is reported.", plain(loq.value()), Objects.toString(loq.unit(), "")));
-                return section.build(table(levels, section, lo, hi, tolerance, deviationLimit, meanRf));
+                return section.build(table(levels, rfUnit(line), lo, hi, meanRf));
             }
             if (lowIndex > lo) {
                 lowReason = "the LOQ (" + plain(loq.value()) + " " + Objects.toString(loq.unit(), "")
@@ -107,7 +107,7 @@ public final class RangeAnalysis implements Analysis {
                 List.of(section.ref("RF̄", rfStep), StepInput.text("decided by", highReason, "levels of '" + line.cellId() + "'")),
                 levels.get(hi).x(), line.xUnit()).inSummary());
         section.figure(figure(cell.id(), levels, meanRf, tolerance, line));
-        return section.build(table(levels, section, lowIndex, hi, tolerance, deviationLimit, meanRf));
+        return section.build(table(levels, rfUnit(line), lowIndex, hi, meanRf));
     }
 
     /** The levels of the fit, ascending; a level at 0 (a calibration blank) has no response factor. */
@@ -183,10 +183,10 @@ public final class RangeAnalysis implements Analysis {
                 plain(tolerance));
     }
 
-    private static DataTable table(List<LevelCheck> levels, SectionBuilder section, int lo, int hi, double tolerance,
-                                   double deviationLimit, double meanRf) {
+    private static DataTable table(List<LevelCheck> levels, String rfUnit, int lo, int hi, double meanRf) {
         List<String> headers = List.of("Level", "Standards", "Mean back-calculated deviation (%)",
-                "Mean response factor", "From the range's mean RF (%)", "In the range");
+                "Mean response factor" + (rfUnit == null ? "" : " (" + rfUnit + ")"), "From the range's mean RF (%)",
+                "In the range");
         List<DataTable.Row> rows = new ArrayList<>();
         for (int i = 0; i < levels.size(); i++) {
             LevelCheck l = levels.get(i);
@@ -207,7 +207,7 @@ public final class RangeAnalysis implements Analysis {
         List<Series> series = new ArrayList<>();
         series.add(new Series("Mean response factor per level", Style.POINTS, x, rf));
         series.add(new Series("Range mean", Style.REFERENCE, span, new double[] {meanRf, meanRf}));
-        String band = "±" + plain(tolerance) + " %";
+        String band = "±" + trimmed(tolerance) + " %";
         series.add(new Series(band, Style.DOTTED, span, new double[] {meanRf * (1 + tolerance / 100), meanRf * (1 + tolerance / 100)}));
         series.add(new Series(band, Style.DOTTED, span, new double[] {meanRf * (1 - tolerance / 100), meanRf * (1 - tolerance / 100)}));
         String xTitle = "Concentration" + (line.xUnit() == null ? "" : " (" + line.xUnit() + ")");
@@ -249,6 +249,10 @@ public final class RangeAnalysis implements Analysis {
                     "Name a detection-limit cell computed through this calibration.");
         }
         return loq;
+    }
+
+    private static String trimmed(double v) {
+        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
     static String plain(double v) {
