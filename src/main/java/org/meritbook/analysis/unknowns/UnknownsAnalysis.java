@@ -108,7 +108,8 @@ public final class UnknownsAnalysis implements Analysis {
             if (!byKey.containsKey(prep)) {
                 int k = preparations.merge(sample, 1, Integer::sum);
                 String label = options.eachReading() ? sample + " (" + r.cell(UnknownsOptions.Y).ref().a1() + ")"
-                        : k == 1 ? sample : sample + " (" + (Double.isNaN(d) || d == 1 ? "preparation " + k : "dilution " + PreparationValue.stripped(d)) + ")";
+                        : k == 1 ? sample
+                        : sample + " (" + (d == 1 ? "preparation " + k : "dilution " + PreparationValue.stripped(d)) + ")";
                 labelOf.put(prep, label);
                 byKey.put(prep, new ArrayList<>());
             }
