@@ -107,6 +107,11 @@ final class Demo {
         return a1.equals("D16") ? 21.08 : Double.parseDouble(stored.get(a1));
     }
 
+    /** The notebook with every fenced cell but the calibration cells removed (their narrative stays). */
+    static String calibrationCellsOnly(String notebook) {
+        return notebook.replaceAll("(?ms)^```(?!calibration\\b)[a-z-]+\\n.*?^```\\n", "");
+    }
+
     /** Both calibration cells of the notebook with one more option line. */
     static String withOption(String notebook, String option) {
         return notebook.replace("model: linear\n", "model: linear\n" + option + "\n");
