@@ -40,6 +40,60 @@ final class Headers {
         return checked(out, lower, c0, decisions);
     }
 
+    /** A block's headers and the row its data start on. */
+    record Read(List<HeaderText> headers, int firstDataRow) {
+    }
+
+    /** A unit as labs write one under a header: "[µg/mL]", "(mg/L)", or a bare "mg/L", "%", "mAU·s". */
+    private static final java.util.regex.Pattern UNIT = java.util.regex.Pattern.compile(
+            "\\[[^\\]]{1,20}]|\\([^)]{1,20}\\)|[A-Za-zµμ°%‰][A-Za-zµμ°%‰/·.*^0-9²³⁻¹ -]{0,14}");
+
+    /**
+     * The header row, and a row of units under it when there is one ("Conc." over "[µg/mL]"): a row
+     * whose every non-empty cell is unit-like text, with at least one number below it. Its units are
+     * joined to the headers above and the data start after it; the decision is recorded.
+     */
+    static Read withUnitsRow(Grid g, int row, int c0, int c1, int lastRow, List<String> decisions) {
+        List<HeaderText> names = fromRow(g, row, c0, c1, decisions);
+        int under = row + 1;
+        if (under > lastRow || !isUnitsRow(g, under, c0, c1, lastRow)) {
+            return new Read(names, row + 1);
+        }
+        List<HeaderText> out = new ArrayList<>();
+        for (int c = c0; c <= c1; c++) {
+            String unit = HeaderText.collapse(g.shown(under, c).raw());
+            String header = names.get(c - c0).header();
+            boolean bracketed = unit.matches("\\[.*]|\\(.*\\)");
+            out.add(unit.isEmpty() ? names.get(c - c0)
+                    : HeaderText.combine(header, bracketed ? unit : "[" + unit + "]"));
+        }
+        decisions.add("row " + (under + 1) + " read as a row of units under the headers of row " + (row + 1));
+        return new Read(checked(out, under, c0, new ArrayList<>()), under + 1);
+    }
+
+    private static boolean isUnitsRow(Grid g, int r, int c0, int c1, int lastRow) {
+        boolean any = false;
+        for (int c = c0; c <= c1; c++) {
+            CellValue v = g.shown(r, c);
+            if (v.kind() == CellValue.Kind.BLANK) {
+                continue;
+            }
+            if (v.kind() != CellValue.Kind.TEXT || !UNIT.matcher(HeaderText.collapse(v.raw())).matches()) {
+                return false;
+            }
+            any = true;
+        }
+        if (!any || r + 1 > lastRow) {
+            return false;
+        }
+        for (int c = c0; c <= c1; c++) {
+            if (g.shown(r + 1, c).kind() == CellValue.Kind.NUMBER) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** Headers stored in an Excel table's definition (a table without a header row in the sheet). */
     static List<HeaderText> given(List<String> names, int row, int c0, List<String> decisions) {
         return checked(names.stream().map(HeaderText::parse).toList(), row, c0, decisions);

@@ -84,8 +84,8 @@ public final class WorkbookReader implements BlockReader {
         BlockBuilder builder = new BlockBuilder(file, g, reference);
         if (parsed instanceof RangeText.Cells cells) {
             Area a = cells.area();
-            List<HeaderText> headers = Headers.fromRow(g, a.firstRow(), a.firstCol(), a.lastCol(), decisions);
-            return builder.build(headers, a.firstRow(), a.firstCol(), a.firstRow() + 1, a.lastRow(), decisions);
+            Headers.Read h = Headers.withUnitsRow(g, a.firstRow(), a.firstCol(), a.lastCol(), a.lastRow(), decisions);
+            return builder.build(h.headers(), a.firstRow(), a.firstCol(), h.firstDataRow(), a.lastRow(), decisions);
         }
         RangeText.Columns cols = (RangeText.Columns) parsed;
         int first = -1;
@@ -103,8 +103,8 @@ public final class WorkbookReader implements BlockReader {
         }
         decisions.add("columns " + span + " read from row " + (first + 1) + " (the first non-empty row, read as the header) to row "
                 + (last + 1) + " (the last non-empty row)");
-        List<HeaderText> headers = Headers.fromRow(g, first, cols.firstCol(), cols.lastCol(), decisions);
-        return builder.build(headers, first, cols.firstCol(), first + 1, last, decisions);
+        Headers.Read h = Headers.withUnitsRow(g, first, cols.firstCol(), cols.lastCol(), last, decisions);
+        return builder.build(h.headers(), first, cols.firstCol(), h.firstDataRow(), last, decisions);
     }
 
     private static DataBlock named(Path file, SourceWorkbook wb, String target, String where, DataReference reference,
@@ -162,13 +162,15 @@ public final class WorkbookReader implements BlockReader {
             decisions.add("totals row " + (a.lastRow() + 1) + " of table '" + t.name() + "' not read");
         }
         List<HeaderText> headers;
+        int firstData = a.firstRow() + t.headerRows();
         if (t.headerRows() > 0) {
-            headers = Headers.fromRow(g, a.firstRow(), a.firstCol(), a.lastCol(), decisions);
+            Headers.Read h = Headers.withUnitsRow(g, a.firstRow(), a.firstCol(), a.lastCol(), lastData, decisions);
+            headers = h.headers();
+            firstData = h.firstDataRow();
         } else {
             decisions.add("table '" + t.name() + "' shows no header row; headers taken from the table definition");
             headers = Headers.given(t.columnNames(), a.firstRow(), a.firstCol(), decisions);
         }
-        int firstData = a.firstRow() + t.headerRows();
         return new BlockBuilder(file, g, reference).build(headers, a.firstRow(), a.firstCol(), firstData, lastData, decisions);
     }
 

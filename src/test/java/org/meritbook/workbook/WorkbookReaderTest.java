@@ -63,6 +63,36 @@ class WorkbookReaderTest {
     }
 
     @Test
+    void aRowOfUnitsUnderTheHeadersGivesTheUnitsAndTheDataStartBelowIt() {
+        // A layout a new user built: names in row 1, units in row 2 ("Conc." over "[µg/mL]", "Area" over "mAU·s").
+        Path f = Fixtures.xlsx(dir, "own.xlsx", wb -> {
+            Sheet s = wb.createSheet("Std");
+            row(s, 1, "Conc.", "Area", "Comment");
+            row(s, 2, "[µg/mL]", "mAU·s", null);
+            row(s, 3, 0.5, 101.2, "fresh");
+            row(s, 4, 1.0, 203.9, null);
+            row(s, 5, 2.0, 405.1, null);
+        });
+        for (DataReference ref : List.of(Fixtures.ref("Std", "A1:C5"), Fixtures.ref("Std", "A:C"))) {
+            DataBlock b = read(f, ref);
+            assertEquals(3, b.rowCount(), ref.text());
+            assertEquals("µg/mL", col(b, "Conc.").unit());
+            assertEquals("mAU·s", col(b, "Area").unit());
+            assertEquals("Std!B3", col(b, "Area").values().get(0).ref().address());
+            assertEquals(101.2, col(b, "Area").values().get(0).number(), 0.0);
+            assertTrue(b.decisions().contains("row 2 read as a row of units under the headers of row 1"), b.decisions().toString());
+        }
+        // A first data row of text only (no number below it either) is data, not units.
+        Path g = Fixtures.xlsx(dir, "text.xlsx", wb -> {
+            Sheet s = wb.createSheet("Ids");
+            row(s, 1, "Sample", "Lot");
+            row(s, 2, "S1", "L7");
+            row(s, 3, "S2", "L8");
+        });
+        assertEquals(2, read(g, Fixtures.ref("Ids", "A1:B3")).rowCount());
+    }
+
+    @Test
     void notesColumnIsPlainTextWithBlanks() {
         Path f = Fixtures.xlsx(dir, "lab.xlsx", Fixtures::calibration);
         Column remark = col(read(f, Fixtures.ref("Calibration", "A4:D8")), "Remark");
