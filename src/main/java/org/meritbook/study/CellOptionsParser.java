@@ -68,7 +68,7 @@ final class CellOptionsParser {
             }
             if (name.equals(OptionRules.EXCLUDE)) {
                 exclusions.addAll(new ExclusionParser(problems).parse(value));
-            } else if (!checkValue(name, value)) {
+            } else if (!checkValue(kind, name, value)) {
                 rejected.add(name);
                 continue;
             }
@@ -85,9 +85,12 @@ final class CellOptionsParser {
     }
 
     /** Checks one option value by its name; false when it was reported. */
-    private boolean checkValue(String name, OptionValue value) {
+    private boolean checkValue(AnalysisKind kind, String name, OptionValue value) {
         if (name.equals(OptionRules.METHODS)) {
             return checkMethods(value);
+        }
+        if (kind == AnalysisKind.CALIBRATION && name.equals("y") && !value.isScalar()) {
+            return checkColumnList(name, value);
         }
         OptionRules.DataSet set = OptionRules.DATA_SETS.get(name);
         if (set != null) {
@@ -122,6 +125,18 @@ final class CellOptionsParser {
         }
         if (name.equals(OptionRules.DATA)) {
             return checkReference(value);
+        }
+        return true;
+    }
+
+    /** Replicate response columns side by side: {@code y: [B, C, D]}, each a header or a letter. */
+    private boolean checkColumnList(String name, OptionValue value) {
+        if (!(value.value() instanceof List<?>) || value.list().isEmpty()
+                || value.list().stream().anyMatch(v -> !v.isScalar() || v.text().isBlank())) {
+            problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "one column or a list of columns for '" + name + "'",
+                    Problems.describe(value), "Write '" + name + ": Area' or, for replicates in columns, '"
+                            + name + ": [B, C, D]'.");
+            return false;
         }
         return true;
     }

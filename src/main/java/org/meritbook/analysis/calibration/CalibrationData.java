@@ -18,13 +18,27 @@ import org.meritbook.workbook.DataBlock;
 import org.meritbook.workbook.NumericColumn;
 
 /**
- * The calibration standards of one cell: every row of the block, with exclusions applied (a row
- * is excluded when its x or y cell is), numbers checked, and units taken from the headers.
+ * The calibration standards of one cell: every row of the block, with exclusions applied (a point
+ * is excluded when its x or y cell is), numbers checked, and units taken from the headers. With
+ * several response columns ({@code y: [B, C, D]}, replicates side by side, one row per level)
+ * each response cell is a point of its own, keeping its own cell address.
+ *
+ * @param yColumns the response columns, one or more
  */
-record CalibrationData(DataBlock block, Column xColumn, Column yColumn, List<CalibrationPoint> points) {
+record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, List<CalibrationPoint> points) {
 
     CalibrationData {
+        yColumns = List.copyOf(yColumns);
         points = List.copyOf(points);
+    }
+
+    /** The first response column: its name and unit stand for all of them. */
+    Column yColumn() {
+        return yColumns.get(0);
+    }
+
+    boolean replicateColumns() {
+        return yColumns.size() > 1;
     }
 
     String xUnit() {
@@ -32,7 +46,7 @@ record CalibrationData(DataBlock block, Column xColumn, Column yColumn, List<Cal
     }
 
     String yUnit() {
-        return yColumn.unit();
+        return yColumn().unit();
     }
 
     List<CalibrationPoint> used() {
@@ -50,53 +64,69 @@ record CalibrationData(DataBlock block, Column xColumn, Column yColumn, List<Cal
     static CalibrationData read(AnalysisCell cell, CalibrationOptions options, AnalysisContext context) {
         DataBlock block = context.data().block(options.data());
         Column xColumn = column(block, options.x(), cell.lineOf("x"), context);
-        Column yColumn = column(block, options.y(), cell.lineOf("y"), context);
-        Map<CellRef, String> reasons = exclusionReasons(cell, block, xColumn, yColumn, context);
+        List<Column> yColumns = new ArrayList<>();
+        for (String y : options.ys()) {
+            yColumns.add(column(block, y, cell.lineOf("y"), context));
+        }
+        List<Column> all = new ArrayList<>(List.of(xColumn));
+        all.addAll(yColumns);
+        Map<CellRef, String> reasons = exclusionReasons(cell, block, all, context);
         if (options.dropCensored()) {
-            addCensored(xColumn, reasons);
-            addCensored(yColumn, reasons);
+            all.forEach(c -> addCensored(c, reasons));
         }
         int rows = block.rowCount();
-        String[] rowReason = new String[rows];
-        for (int i = 0; i < rows; i++) {
-            String rx = reasons.get(xColumn.values().get(i).ref());
-            String ry = reasons.get(yColumn.values().get(i).ref());
-            rowReason[i] = rx != null ? rx : ry != null ? ry : block.leftOut().get(i); // the reader's, e.g. hidden: leave-out
+        // A point is out when its x or its own y cell is; an x cell's reason takes every response of its row.
+        String[][] pointReason = new String[yColumns.size()][rows];
+        for (int k = 0; k < yColumns.size(); k++) {
+            for (int i = 0; i < rows; i++) {
+                String rx = reasons.get(xColumn.values().get(i).ref());
+                String ry = reasons.get(yColumns.get(k).values().get(i).ref());
+                pointReason[k][i] = rx != null ? rx : ry != null ? ry : block.leftOut().get(i); // the reader's, e.g. hidden: leave-out
+            }
         }
-        double[][] xy = numbers(block.file(), xColumn, yColumn, rowReason);
-        List<CalibrationPoint> points = new ArrayList<>(rows);
+        String[] xReason = new String[rows];
         for (int i = 0; i < rows; i++) {
-            CellValue xc = xColumn.values().get(i);
-            CellValue yc = yColumn.values().get(i);
-            // Excluded points keep their values when numeric, so the table and figures can show them.
-            double x = xc.isNumber() ? xc.number() : xy[0][i];
-            double y = yc.isNumber() ? yc.number() : xy[1][i];
-            points.add(new CalibrationPoint(yc.ref().a1(), xc, yc, x, y, rowReason[i]));
+            boolean allOut = true;
+            for (int k = 0; k < yColumns.size(); k++) {
+                allOut &= pointReason[k][i] != null;
+            }
+            xReason[i] = allOut ? pointReason[0][i] : null; // x is needed while any response of its row is used
         }
-        return new CalibrationData(block, xColumn, yColumn, points);
-    }
-
-    /** Reads both columns, reporting the bad cells of both in one error. */
-    private static double[][] numbers(Path file, Column x, Column y, String[] rowReason) {
         List<Problem> problems = new ArrayList<>();
-        double[][] out = new double[2][];
-        Column[] columns = {x, y};
-        for (int c = 0; c < 2; c++) {
-            Column column = columns[c];
-            Map<CellRef, Integer> rowOf = new HashMap<>();
-            for (int i = 0; i < column.values().size(); i++) {
-                rowOf.put(column.values().get(i).ref(), i);
-            }
-            try {
-                out[c] = NumericColumn.values(file, column, ref -> rowReason[rowOf.get(ref)] != null);
-            } catch (InputException e) {
-                problems.addAll(e.problems());
-            }
+        double[] xs = numbers(block.file(), xColumn, xReason, problems);
+        double[][] ys = new double[yColumns.size()][];
+        for (int k = 0; k < yColumns.size(); k++) {
+            ys[k] = numbers(block.file(), yColumns.get(k), pointReason[k], problems);
         }
         if (!problems.isEmpty()) {
             throw new InputException(problems);
         }
-        return out;
+        List<CalibrationPoint> points = new ArrayList<>(rows * yColumns.size());
+        for (int i = 0; i < rows; i++) {
+            CellValue xc = xColumn.values().get(i);
+            for (int k = 0; k < yColumns.size(); k++) {
+                CellValue yc = yColumns.get(k).values().get(i);
+                // Excluded points keep their values when numeric, so the table and figures can show them.
+                double x = xc.isNumber() ? xc.number() : xs[i];
+                double y = yc.isNumber() ? yc.number() : ys[k][i];
+                points.add(new CalibrationPoint(yc.ref().a1(), i, xc, yc, x, y, pointReason[k][i]));
+            }
+        }
+        return new CalibrationData(block, xColumn, yColumns, points);
+    }
+
+    /** One column's numbers, NaN where its cell is left out; bad cells are added to {@code problems}. */
+    private static double[] numbers(Path file, Column column, String[] rowReason, List<Problem> problems) {
+        Map<CellRef, Integer> rowOf = new HashMap<>();
+        for (int i = 0; i < column.values().size(); i++) {
+            rowOf.put(column.values().get(i).ref(), i);
+        }
+        try {
+            return NumericColumn.values(file, column, ref -> rowReason[rowOf.get(ref)] != null);
+        } catch (InputException e) {
+            problems.addAll(e.problems()); // every column's bad cells are reported together
+            return new double[column.values().size()];
+        }
     }
 
     private static Column column(DataBlock block, String wanted, int line, AnalysisContext context) {
@@ -115,10 +145,10 @@ record CalibrationData(DataBlock block, Column xColumn, Column yColumn, List<Cal
         return String.join(", ", names);
     }
 
-    private static Map<CellRef, String> exclusionReasons(AnalysisCell cell, DataBlock block, Column x, Column y,
+    private static Map<CellRef, String> exclusionReasons(AnalysisCell cell, DataBlock block, List<Column> columns,
                                                          AnalysisContext context) {
         Map<String, CellRef> byAddress = new HashMap<>();
-        for (Column c : List.of(x, y)) {
+        for (Column c : columns) {
             for (CellValue v : c.values()) {
                 byAddress.put(v.ref().address(), v.ref());
             }
@@ -130,7 +160,7 @@ record CalibrationData(DataBlock block, Column xColumn, Column yColumn, List<Cal
             if (ref == null) {
                 problems.add(new Problem(ErrorKey.BAD_OPTION_VALUE, context.where(e.line()),
                         "an excluded cell among the x or y values of " + block.sheet() + "!" + block.range()
-                                + " (columns " + x.letter() + " and " + y.letter() + ")",
+                                + " (columns " + String.join(", ", columns.stream().map(Column::letter).toList()) + ")",
                         "exclude: " + e.address(),
                         "Name the concentration or response cell of the point to leave out."));
             } else {

@@ -14,18 +14,20 @@ import org.meritbook.analysis.AnalysisContext;
  *
  * @param data      the data reference
  * @param x         column of nominal concentrations (header text or letter)
- * @param y         column of responses
+ * @param ys        columns of responses: one, or replicates side by side ({@code y: [B, C, D]})
  * @param weighting weighting, or auto
  * @param model     the calibration function
  * @param dropCensored whether censored entries are left out (recorded) rather than rejected
  */
-record CalibrationOptions(DataReference data, String x, String y, WeightingChoice weighting, CalibrationModel model,
+record CalibrationOptions(DataReference data, String x, List<String> ys, WeightingChoice weighting, CalibrationModel model,
                           boolean dropCensored) {
 
     static CalibrationOptions of(AnalysisCell cell, AnalysisContext context) {
         DataReference data = cell.dataReference().orElseThrow(); // with the cell's reading options
         String x = cell.options().get("x").text();
-        String y = cell.options().get("y").text();
+        OptionValue yOption = cell.options().get("y");
+        List<String> ys = yOption.isScalar() ? List.of(yOption.text())
+                : yOption.list().stream().map(OptionValue::text).toList();
         WeightingChoice weighting = cell.option("weighting")
                 .map(v -> WeightingChoice.parse(v.text()).orElseThrow(() -> badValue(context, v, "weighting",
                         List.of("none", "1/x", "1/x^2", "1/y", "1/y^2", "auto"))))
@@ -35,7 +37,7 @@ record CalibrationOptions(DataReference data, String x, String y, WeightingChoic
                         .orElseThrow(() -> badValue(context, v, "model", CalibrationModel.keywords())))
                 .orElse(CalibrationModel.LINEAR);
         boolean drop = cell.option("censored").map(v -> v.text().equals("drop")).orElse(false);
-        return new CalibrationOptions(data, x, y, weighting, model, drop);
+        return new CalibrationOptions(data, x, ys, weighting, model, drop);
     }
 
     private static InputException badValue(AnalysisContext context, OptionValue v, String option,
