@@ -12,6 +12,7 @@ import java.util.concurrent.Callable;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.pipeline.AtomicFiles;
+import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.study.DataReference;
 import org.meritbook.study.ReadingOptions;
 import org.meritbook.study.StarterNotebook;
@@ -85,12 +86,14 @@ final class NewCommand implements Callable<Integer> {
                     if (e.key() != ErrorKey.EMPTY_RANGE) {
                         throw e;
                     }
-                    skipped.add(sheet); // a sheet of notes or a title page: said in the notebook
+                    // A sheet of notes or a title page: said in the notebook, with the reader's reason.
+                    skipped.add("sheet " + sheet + " (" + e.problems().get(0).found() + ")");
                 }
             }
         }
         String relative = target.toAbsolutePath().getParent().relativize(workbook.toAbsolutePath()).toString();
-        String text = withChoices(StarterNotebook.render(alias, relative, blocks, skipped), choices);
+        String text = withChoices(StarterNotebook.render(alias, relative, blocks, skipped,
+                StudyRunner.withBuiltInAnalyses().kinds()), choices);
         AtomicFiles.write(target, text.getBytes(StandardCharsets.UTF_8));
         spec.commandLine().getOut().println("meritbook: wrote " + target + " (" + blocks.size() + " data block"
                 + (blocks.size() == 1 ? "" : "s") + "); edit it, then: meritbook run " + target);

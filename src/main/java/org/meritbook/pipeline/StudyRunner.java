@@ -51,6 +51,11 @@ public final class StudyRunner {
                 AnalysisKind.RANGE, new RangeAnalysis(), AnalysisKind.UNKNOWNS, new UnknownsAnalysis()));
     }
 
+    /** The kinds this runner runs. */
+    public Set<AnalysisKind> kinds() {
+        return Set.copyOf(analyses.keySet());
+    }
+
     public StudyResults run(Path notebook) {
         return run(StudyParser.parse(notebook));
     }

@@ -7,8 +7,9 @@ import java.util.regex.Pattern;
 
 /**
  * Writes a starter study notebook for a workbook: front matter to fill in, one section per data
- * block found, and a calibration cell where a block's headers name a concentration and a response
- * (marked as guessed, for the analyst to check). The analyst edits it; nothing is run from a guess
+ * block found, and a cell of the kind its headers suggest — a calibration where they name a
+ * concentration and a response, and blanks, spikes, replicates by day or samples as
+ * {@link StarterCells} recognises them — each marked as guessed, with why, for the analyst to check. The analyst edits it; nothing is run from a guess
  * unseen, since every choice is written out in the notebook.
  */
 public final class StarterNotebook {
@@ -48,8 +49,10 @@ public final class StarterNotebook {
      * @param file      the workbook's file name as the notebook will declare it
      * @param blocks    the blocks found, in workbook order
      * @param skipped   sheets with no table-like block and names that are not one block, said in the notebook
+     * @param available the kinds this version runs: a cell of another kind is written as a text block
      */
-    public static String render(String alias, String file, List<Block> blocks, List<String> skipped) {
+    public static String render(String alias, String file, List<Block> blocks, List<String> skipped,
+                                java.util.Set<AnalysisKind> available) {
         StringBuilder md = new StringBuilder();
         md.append("---\n")
                 .append("title: Validation of <analyte> in <matrix> by <technique>   # edit\n")
@@ -65,35 +68,54 @@ public final class StarterNotebook {
                 .append("---\n\n")
                 .append("## Purpose and scope\n\n")
                 .append("<What the method measures, in which matrix, over which range, and why this study.>\n");
-        boolean calibrationWritten = false;
-        for (Block b : blocks) {
+        // The calibration comes first: the cells that use its line must come below it.
+        Block calibrationBlock = blocks.stream().filter(b -> calibration(b).isPresent()).findFirst().orElse(null);
+        List<Block> ordered = new java.util.ArrayList<>(blocks);
+        if (calibrationBlock != null) {
+            ordered.remove(calibrationBlock);
+            ordered.add(0, calibrationBlock);
+        }
+        for (Block b : ordered) {
             md.append("\n## ").append(b.title()).append("\n\n")
                     .append("Data block `").append(b.reference()).append("`: ").append(b.rows())
                     .append(" rows; columns ").append(columnList(b)).append(".\n\n");
-            Optional<BlockColumn> x = pick(b, CONCENTRATION, null);
-            Optional<BlockColumn> y = x.flatMap(xc -> pick(b, RESPONSE, xc));
-            if (!calibrationWritten && x.isPresent() && y.isPresent()) {
-                calibrationWritten = true;
-                md.append("```calibration\n")
-                        .append("# x and y were guessed from the headers: check them.\n")
-                        .append("data: ").append(b.reference()).append('\n')
-                        .append("x: ").append(x.get().name()).append('\n')
-                        .append("y: ").append(y.get().name()).append('\n')
-                        .append("weighting: none     # none | 1/x | 1/x^2 | 1/y | 1/y^2 | auto\n")
-                        .append("model: linear       # linear | linear-through-origin | quadratic\n")
-                        .append("# exclude:\n#   - cell: Sheet!C17\n#     reason: <why>\n")
-                        .append("```\n");
-            } else {
-                md.append("```text\n")
-                        .append("Available as data: ").append(b.reference()).append('\n')
-                        .append("```\n");
-            }
+            Optional<String> cell = (b == calibrationBlock ? calibration(b)
+                    : StarterCells.propose(b, calibrationBlock != null)).map(c -> runnable(c, available));
+            md.append(cell.orElse("```text\n# No analysis kind recognised from the headers: name the columns in a cell.\n"
+                    + "Available as data: " + b.reference() + "\n```\n"));
         }
         if (!skipped.isEmpty()) {
             md.append("\n<!-- Not offered as data blocks: ").append(String.join(", ", skipped))
                     .append(". -->\n");
         }
         return md.toString();
+    }
+
+    /** A proposed cell of a kind this version does not run stays a text block, marked as planned. */
+    private static String runnable(String cell, java.util.Set<AnalysisKind> available) {
+        String info = cell.substring(3, cell.indexOf('\n'));
+        boolean runs = AnalysisKind.fromKeyword(info).map(available::contains).orElse(false);
+        return runs ? cell : "```text\n# A " + info + " cell, for when this version runs that kind:\n" + info + "\n"
+                + cell.substring(cell.indexOf('\n') + 1);
+    }
+
+    /** A calibration cell where the headers name a concentration and a response. */
+    private static Optional<String> calibration(Block b) {
+        Optional<BlockColumn> x = pick(b, CONCENTRATION, null);
+        Optional<BlockColumn> y = x.flatMap(xc -> pick(b, RESPONSE, xc));
+        if (x.isEmpty() || y.isEmpty() || StarterCells.looksLikeOtherKind(b)) {
+            return Optional.empty();
+        }
+        return Optional.of("```calibration\n"
+                + "# x and y were guessed from the headers (a concentration and a response): check them.\n"
+                + "id: calibration\n"
+                + "data: " + b.reference() + "\n"
+                + "x: " + x.get().name() + "\n"
+                + "y: " + y.get().name() + "\n"
+                + "weighting: none     # none | 1/x | 1/x^2 | 1/y | 1/y^2 | auto\n"
+                + "model: linear       # linear | linear-through-origin | quadratic\n"
+                + "# exclude:\n#   - cell: Sheet!C17\n#     reason: <why>\n"
+                + "```\n");
     }
 
     private static String columnList(Block b) {
