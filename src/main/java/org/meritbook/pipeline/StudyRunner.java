@@ -17,6 +17,7 @@ import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.DataAccess;
 import org.meritbook.analysis.SectionResult;
+import org.meritbook.analysis.accuracy.AccuracyAnalysis;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
 import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.AcceptanceProfiles;
@@ -45,7 +46,8 @@ public final class StudyRunner {
 
     /** The analyses this version implements. */
     public static StudyRunner withBuiltInAnalyses() {
-        return new StudyRunner(Map.of(AnalysisKind.CALIBRATION, new CalibrationAnalysis()));
+        return new StudyRunner(Map.of(AnalysisKind.CALIBRATION, new CalibrationAnalysis(),
+                AnalysisKind.ACCURACY, new AccuracyAnalysis()));
     }
 
     public StudyResults run(Path notebook) {
