@@ -16,7 +16,10 @@ import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
+import org.meritbook.criteria.AcceptanceProfiles;
+import org.meritbook.criteria.Verdict;
 import org.meritbook.error.ErrorKey;
+import org.meritbook.figures.FigureSpec;
 import org.meritbook.error.InputException;
 import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
@@ -288,6 +291,24 @@ class AccuracyAnalysisTest {
                 readBack.inputs().stream().map(StepInput::source).toList());
         assertEquals("mg/L", s.quantity("read_back:B3").orElseThrow().unit());
         assertTrue(s.warnings().stream().noneMatch(w -> w.contains("units")), s.warnings().toString());
+    }
+
+    @Test
+    void theBuiltInRecoveryProfileJudgesEachLevelAndOverallAndBoundsTheFigure() {
+        String text = notebook("").replace("title: Test study\n", "title: Test study\ncriteria: recovery-ppm\n");
+        Study study = StudyParser.parse(text, Path.of("study.md"));
+        DataBlock block = known();
+        SectionResult s = new AccuracyAnalysis().run(study.cells().get(0), new AnalysisContext(study, ref -> block));
+        SectionResult judged = AcceptanceProfiles.of(study).judge(s);
+        // Two rules (≥ 80 %, ≤ 110 %) on levels 10, 50, 100 and overall: eight verdicts, all passing.
+        assertEquals(8, judged.verdicts().size(), judged.verdicts().toString());
+        assertTrue(judged.verdicts().stream().allMatch(v -> v.outcome() == Verdict.Outcome.PASS));
+        FigureSpec figure = s.figures().get(0);
+        List<double[]> band = figure.series().stream().filter(x -> x.name().startsWith("Acceptance"))
+                .map(FigureSpec.Series::y).toList();
+        assertEquals(2, band.size());
+        assertEquals(80.0, band.get(0)[0], 0);
+        assertEquals(110.0, band.get(1)[0], 0);
     }
 
     @Test
