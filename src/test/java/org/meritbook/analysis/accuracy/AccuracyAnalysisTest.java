@@ -225,6 +225,9 @@ class AccuracyAnalysisTest {
         assertEquals(List.of("Spikes!F6", "Spikes!D6", "Spikes!E6"),
                 row.inputs().stream().map(StepInput::source).toList());
         assertEquals(18, s.table().rows().size());
+        // Read columns and text columns (Sample ID, Notes); Replicate and Reagent blank are not read.
+        assertEquals(List.of("Sample ID", "Level", "Unspiked (mg/kg)", "Added (mg/kg)", "Measured (mg/kg)", "Notes",
+                "Recovery (%)"), s.table().headers());
         assertEveryQuantityHasItsStep(s);
     }
 
