@@ -37,7 +37,7 @@ final class LevelSummary {
                 null));
         if (n == 1) {
             String mean = section.quantity(QuantityDraft.of("recovery_percent" + suffix, "Recovery (" + what + ")",
-                    "R̄ = R (one result)", rows, r[0], "%").inSummary());
+                    "mean(R) = R (one result)", rows, r[0], "%").inSummary());
             error(section, suffix, what, mean);
             section.warning("Recovery, " + what + ": the SD, confidence interval and t test are not evaluable, "
                     + "because there is one result.");
@@ -47,11 +47,11 @@ final class LevelSummary {
         boolean varies = s.sd() > 0;
         Interval ci = varies ? s.meanInterval(AccuracyAnalysis.LEVEL) : null;
         QuantityDraft meanDraft = QuantityDraft.of("recovery_percent" + suffix, "Mean recovery (" + what + ")",
-                "R̄ = ΣRᵢ / n", rows, s.mean(), "%").inSummary();
+                "mean(R) = ΣRᵢ / n", rows, s.mean(), "%").inSummary();
         String mean = section.quantity(ci == null ? meanDraft : meanDraft.withInterval(ci));
         error(section, suffix, what, mean);
         String sd = section.quantity(QuantityDraft.of("recovery_sd" + suffix, "SD of the recovery (" + what + ")",
-                "s = √(Σ(Rᵢ − R̄)² / (n − 1))", withMean(section, rows, mean), s.sd(), "%"));
+                "s = √(Σ(Rᵢ − mean(R))² / (n − 1))", withMean(section, rows, mean), s.sd(), "%"));
         if (!varies) {
             section.warning("Recovery, " + what + ": the confidence interval and t test are not evaluable, because "
                     + "all " + n + " recoveries are equal (s = 0).");
@@ -64,15 +64,15 @@ final class LevelSummary {
                 "Half-width of the 95 % confidence interval of the mean recovery (" + what + ")", "Δ = t · s / √n",
                 List.of(section.ref("t", t), section.ref("s", sd), section.ref("n", nId)), tq * s.standardError(), "%",
                 null);
-        List<StepInput> ciInputs = List.of(section.ref("R̄", mean), section.ref("Δ", half));
+        List<StepInput> ciInputs = List.of(section.ref("mean(R)", mean), section.ref("Δ", half));
         section.quantity(QuantityDraft.of("recovery_ci_low" + suffix,
-                "Lower 95 % confidence limit of the mean recovery (" + what + ")", "R̄ − Δ", ciInputs, ci.low(), "%"));
+                "Lower 95 % confidence limit of the mean recovery (" + what + ")", "mean(R) − Δ", ciInputs, ci.low(), "%"));
         section.quantity(QuantityDraft.of("recovery_ci_high" + suffix,
-                "Upper 95 % confidence limit of the mean recovery (" + what + ")", "R̄ + Δ", ciInputs, ci.high(),
+                "Upper 95 % confidence limit of the mean recovery (" + what + ")", "mean(R) + Δ", ciInputs, ci.high(),
                 "%"));
         OneSampleTTest test = OneSampleTTest.of(r, AccuracyAnalysis.TARGET);
         String tStat = section.step("bias_t" + suffix, "t statistic of the mean recovery against 100 % (" + what + ")",
-                "t = (R̄ − 100) / (s / √n)", List.of(section.ref("R̄", mean), section.ref("s", sd),
+                "t = (mean(R) − 100) / (s / √n)", List.of(section.ref("mean(R)", mean), section.ref("s", sd),
                         section.ref("n", nId)), test.t(), null, T_TEST);
         section.quantity(QuantityDraft.of("bias_p" + suffix,
                 "p of the t test: mean recovery differs from 100 % (" + what + ")",
@@ -86,13 +86,13 @@ final class LevelSummary {
 
     private static void error(SectionBuilder section, String suffix, String what, String meanId) {
         section.quantity(QuantityDraft.of("error_percent" + suffix, "Mean error (" + what + ")",
-                "ē = R̄ − 100 (the mean % error)", List.of(section.ref("R̄", meanId)),
-                section.ref("R̄", meanId).value() - AccuracyAnalysis.TARGET, "%"));
+                "ē = mean(R) − 100 (the mean % error)", List.of(section.ref("mean(R)", meanId)),
+                section.ref("mean(R)", meanId).value() - AccuracyAnalysis.TARGET, "%"));
     }
 
     private static List<StepInput> withMean(SectionBuilder section, List<StepInput> rows, String meanId) {
         List<StepInput> inputs = new ArrayList<>(rows);
-        inputs.add(section.ref("R̄", meanId));
+        inputs.add(section.ref("mean(R)", meanId));
         return inputs;
     }
 }
