@@ -28,6 +28,15 @@ public final class BuiltInProfiles {
                 "built in", List.of(new DeviationRule("Back-calculated standards", 15, 20, 0.75,
                         "ICH M10 bioanalytical method validation, calibration curve (±15 %, ±20 % at the LLOQ, "
                                 + "75 % of standards)"))));
+        String aoac = "AOAC Official Methods of Analysis, Appendix F (Guidelines for Standard Method Performance "
+                + "Requirements), expected recovery 80-110 % for analytes at 1 to 10 mg/kg (from memory); "
+                + "a default to confirm locally";
+        all.put("recovery-ppm", new AcceptanceProfile("recovery-ppm",
+                "Mean recovery of an analyte at about 1 to 10 mg/kg, per level and overall.", "built in", List.of(
+                        new QuantityRule(AnalysisKind.ACCURACY, "Recovery", "recovery_percent", true, 80,
+                                "mean recovery (%)", null, aoac),
+                        new QuantityRule(AnalysisKind.ACCURACY, "Recovery", "recovery_percent", false, 110,
+                                "mean recovery (%)", null, aoac))));
         return all;
     }
 }

@@ -3,7 +3,6 @@ package org.meritbook.criteria;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
-import java.util.Optional;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.study.AnalysisKind;
@@ -12,7 +11,7 @@ import org.meritbook.study.AnalysisKind;
  * A limit on one named quantity (results.json name) of every section of one kind, e.g.
  * {@code r_squared ≥ 0.995}. A name without a {@code :} also judges every member of its family
  * ({@code repeatability_cv_percent} judges {@code repeatability_cv_percent:QC-N} and each other
- * level), one verdict each; a full member name judges that member only. A section that reports
+ * level) besides the quantity of that very name, one verdict each; a full member name judges that member only. A section that reports
  * neither gets "not evaluable".
  *
  * @param kind           the analysis kind judged
@@ -61,16 +60,17 @@ public record QuantityRule(AnalysisKind kind, String characteristic, String quan
         return verdicts;
     }
 
-    /** The quantity itself, or, for a family name, every member the section reports. */
+    /**
+     * The quantity itself, or, for a family name, the quantity of that name (an overall value) and
+     * every member the section reports, in the section's order: a mean recovery is judged overall
+     * and at each level.
+     */
     private List<Quantity> members(SectionResult section) {
-        Optional<Quantity> exact = section.quantity(quantity);
-        if (exact.isPresent()) {
-            return List.of(exact.get());
-        }
         if (quantity.contains(":")) {
-            return List.of();
+            return section.quantity(quantity).map(List::of).orElse(List.of());
         }
-        return section.quantities().stream().filter(q -> q.name().startsWith(quantity + ":")).toList();
+        return section.quantities().stream()
+                .filter(q -> q.name().equals(quantity) || q.name().startsWith(quantity + ":")).toList();
     }
 
     private boolean modelMatches(SectionResult section) {

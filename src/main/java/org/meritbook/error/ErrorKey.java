@@ -39,6 +39,10 @@ public enum ErrorKey {
     TOO_FEW_POINTS,
     ZERO_VARIANCE,
     NON_POSITIVE_WEIGHT_BASIS,
+    /** A known (nominal, added) value of 0: a recovery relative to it is undefined. */
+    ZERO_KNOWN_VALUE,
+    /** A used row whose grouping label (level, group, sample) is empty. */
+    BLANK_LABEL,
     // outputs
     OUTPUT_EXISTS
 }

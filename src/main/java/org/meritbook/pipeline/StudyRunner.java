@@ -17,6 +17,7 @@ import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.DataAccess;
 import org.meritbook.analysis.SectionResult;
+import org.meritbook.analysis.accuracy.AccuracyAnalysis;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
 import org.meritbook.analysis.range.RangeAnalysis;
 import org.meritbook.analysis.unknowns.UnknownsAnalysis;
@@ -47,8 +48,12 @@ public final class StudyRunner {
 
     /** The analyses this version implements. */
     public static StudyRunner withBuiltInAnalyses() {
-        return new StudyRunner(Map.of(AnalysisKind.CALIBRATION, new CalibrationAnalysis(),
-                AnalysisKind.RANGE, new RangeAnalysis(), AnalysisKind.UNKNOWNS, new UnknownsAnalysis()));
+        // One line per kind: the order does not matter, cells run in notebook order.
+        return new StudyRunner(Map.ofEntries(
+                Map.entry(AnalysisKind.CALIBRATION, new CalibrationAnalysis()),
+                Map.entry(AnalysisKind.ACCURACY, new AccuracyAnalysis()),
+                Map.entry(AnalysisKind.RANGE, new RangeAnalysis()),
+                Map.entry(AnalysisKind.UNKNOWNS, new UnknownsAnalysis())));
     }
 
     /** The kinds this runner runs. */

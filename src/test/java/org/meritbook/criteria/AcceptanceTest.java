@@ -160,11 +160,30 @@ class AcceptanceTest {
     }
 
     @Test
+    void aFamilyNameJudgesTheOverallValueAndEveryLevel() {
+        List<Quantity> qs = List.of(
+                new Quantity("recovery_percent:low", "Mean recovery", 78.0, "%", "a.a", null, false),
+                new Quantity("recovery_percent:high", "Mean recovery", 101.0, "%", "a.b", null, false),
+                new Quantity("recovery_percent", "Mean recovery", 89.5, "%", "a.c", null, false),
+                new Quantity("row_recovery_percent:F6", "Recovery of F6", 60.0, "%", "a.d", null, false));
+        SectionResult accuracy = new SectionResult("a", AnalysisKind.ACCURACY, "Trueness", List.of(), qs, List.of(),
+                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of());
+        QuantityRule rule = new QuantityRule(AnalysisKind.ACCURACY, "Recovery", "recovery_percent", true, 80,
+                "mean recovery (%)", null, "invented limit");
+        List<Verdict> verdicts = rule.judge(accuracy);
+        // Not the row's recovery: row_recovery_percent is another family.
+        assertEquals(List.of("Recovery (low)", "Recovery (high)", "Recovery"),
+                verdicts.stream().map(Verdict::characteristic).toList());
+        assertEquals(List.of(Verdict.Outcome.FAIL, Verdict.Outcome.PASS, Verdict.Outcome.PASS),
+                verdicts.stream().map(Verdict::outcome).toList());
+    }
+
+    @Test
     void anUnknownProfileNameListsTheBuiltInOnes() {
         var study = StudyParser.parse("---\ntitle: t\ncriteria: trace-metals\n---\n", dir.resolve("s.md"));
         InputException e = assertThrows(InputException.class, () -> AcceptanceProfiles.of(study));
         assertTrue(e.getMessage().startsWith("s.md line 3: expected a built-in acceptance profile "
-                + "(linearity-basic, bioanalytical-calibration) or a .yaml profile file but found 'trace-metals'."),
+                + "(linearity-basic, bioanalytical-calibration, recovery-ppm) or a .yaml profile file but found 'trace-metals'."),
                 e.getMessage());
     }
 }

@@ -1,0 +1,69 @@
+package org.meritbook.analysis.accuracy;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import org.meritbook.analysis.Analysis;
+import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.SectionBuilder;
+import org.meritbook.analysis.SectionResult;
+import org.meritbook.study.AnalysisCell;
+
+/**
+ * Accuracy (DESIGN §4): % recovery R = measured / known × 100 and % error R − 100 per row; with
+ * {@code unspiked:} the spike recovery (spiked − unspiked) / added × 100, paired row by row when
+ * every spiked row has its unspiked result, else against their mean; with {@code calibration:}
+ * measured signals read back first. Per level (the {@code level:} column, else the known value)
+ * and over all levels: n, mean recovery with its 95 % t interval, mean error, SD, and the one-sample
+ * t test of the mean recovery against 100 %.
+ */
+public final class AccuracyAnalysis implements Analysis {
+    /** Confidence level of every interval this section reports. */
+    static final double LEVEL = 0.95;
+    /** The recovery of an unbiased method. */
+    static final double TARGET = 100.0;
+
+    @Override
+    public SectionResult run(AnalysisCell cell, AnalysisContext context) {
+        AccuracyData data = AccuracyData.read(cell, context);
+        ReadBack readBack = cell.option("calibration").isPresent() ? ReadBack.of(cell, context) : null;
+        SectionBuilder section = new SectionBuilder(cell);
+        section.setting("Recovery", data.mode().description(), data.mode().key());
+        section.setting("Levels", data.levelColumn() == null
+                ? "by known value in column '" + data.known().header() + "'"
+                : "by column '" + data.levelColumn().header() + "'");
+        if (readBack != null) {
+            section.setting("Measured values", "signals read back through calibration '" + readBack.line().cellId()
+                    + "', " + readBack.formula() + (data.unspiked() == null ? "" : " (unspiked results too)"));
+        }
+        section.setting("Confidence level", "95 %");
+        section.setting("Bias test", "one-sample t test of the mean recovery against 100 %, two-sided");
+        warnOnUnits(section, data, readBack);
+        RowRecoveries recoveries = RowRecoveries.record(section, data, readBack);
+        for (String level : data.levels()) {
+            LevelSummary.record(section, ":" + level, "level " + level, recoveries.used(data.usedAt(level)));
+        }
+        LevelSummary.record(section, "", "all levels", recoveries.used(data.used()));
+        AccuracyFigures.addTo(section, cell.id(), data, recoveries, AccuracyFigures.band(context.study()));
+        return section.build(AccuracyTable.of(data, recoveries, readBack, section::hasQuantity));
+    }
+
+    /** A recovery is a ratio of like quantities: say so when the columns state different units. */
+    private static void warnOnUnits(SectionBuilder section, AccuracyData data, ReadBack readBack) {
+        Map<String, String> units = new LinkedHashMap<>();
+        units.put("measured", readBack != null ? readBack.line().xUnit() : data.measured().unit());
+        if (data.unspiked() != null) {
+            units.put("unspiked", readBack != null ? readBack.line().xUnit() : data.unspiked().unit());
+        }
+        units.put("known", data.known().unit());
+        units.values().removeIf(Objects::isNull);
+        if (units.values().stream().distinct().count() > 1) {
+            List<String> stated = new ArrayList<>();
+            units.forEach((what, unit) -> stated.add(what + " in " + unit));
+            section.warning("The columns state different units (" + String.join(", ", stated)
+                    + "): a recovery compares like quantities; check the units.");
+        }
+    }
+}

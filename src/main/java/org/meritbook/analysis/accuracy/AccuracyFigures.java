@@ -1,0 +1,110 @@
+package org.meritbook.analysis.accuracy;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.meritbook.analysis.SectionBuilder;
+import org.meritbook.criteria.AcceptanceProfile;
+import org.meritbook.criteria.AcceptanceProfiles;
+import org.meritbook.criteria.QuantityRule;
+import org.meritbook.criteria.Rule;
+import org.meritbook.figures.FigureSpec;
+import org.meritbook.figures.FigureSpec.Series;
+import org.meritbook.figures.FigureSpec.Style;
+import org.meritbook.study.AnalysisKind;
+import org.meritbook.study.Study;
+
+/**
+ * The recovery figure: each result's recovery against its known value, the level means, 100 %, and
+ * the acceptance range when the study's profile sets one on {@code recovery_percent}.
+ */
+final class AccuracyFigures {
+    /**
+     * The limits a profile sets on the mean recovery (either may be absent).
+     *
+     * @param low  lowest accepted recovery, or NaN
+     * @param high highest accepted recovery, or NaN
+     */
+    record Band(double low, double high) {
+        static final Band NONE = new Band(Double.NaN, Double.NaN);
+    }
+
+    private AccuracyFigures() {
+    }
+
+    /** The profile's limits on the whole {@code recovery_percent} family; none for per-level limits. */
+    static Band band(Study study) {
+        AcceptanceProfile profile = AcceptanceProfiles.of(study);
+        if (profile == null) {
+            return Band.NONE;
+        }
+        double low = Double.NaN;
+        double high = Double.NaN;
+        for (Rule rule : profile.rules()) {
+            if (rule instanceof QuantityRule q && q.kind() == AnalysisKind.ACCURACY
+                    && q.quantity().equals("recovery_percent")) {
+                if (q.atLeast()) {
+                    low = Double.isNaN(low) ? q.limit() : Math.max(low, q.limit());
+                } else {
+                    high = Double.isNaN(high) ? q.limit() : Math.min(high, q.limit());
+                }
+            }
+        }
+        return new Band(low, high);
+    }
+
+    static void addTo(SectionBuilder section, String id, AccuracyData data, RowRecoveries recoveries, Band band) {
+        List<Series> series = new ArrayList<>();
+        List<double[]> used = new ArrayList<>();
+        List<double[]> excluded = new ArrayList<>();
+        for (AccuracyRow r : data.rows()) {
+            if (recoveries.has(r)) {
+                (r.used() ? used : excluded).add(new double[] {r.knownValue(), recoveries.of(r).value()});
+            }
+        }
+        series.add(new Series("Results", Style.POINTS, xs(used), ys(used)));
+        if (!excluded.isEmpty()) {
+            series.add(new Series("Excluded (see reasons)", Style.EXCLUDED_POINTS, xs(excluded), ys(excluded)));
+        }
+        List<double[]> means = new ArrayList<>();
+        for (String level : data.levels()) {
+            List<RowRecoveries.Recovery> group = recoveries.used(data.usedAt(level));
+            double k = group.stream().mapToDouble(g -> g.row().knownValue()).average().orElseThrow();
+            double m = group.stream().mapToDouble(RowRecoveries.Recovery::value).average().orElseThrow();
+            means.add(new double[] {k, m});
+        }
+        means.sort((a, b) -> Double.compare(a[0], b[0]));
+        series.add(new Series("Level mean", Style.LINE, xs(means), ys(means)));
+        double[] span = span(data, recoveries);
+        series.add(new Series("100 %", Style.REFERENCE, span, new double[] {AccuracyAnalysis.TARGET,
+            AccuracyAnalysis.TARGET}));
+        String accepted = "Acceptance range (profile)";
+        if (!Double.isNaN(band.low())) {
+            series.add(new Series(accepted, Style.DOTTED, span, new double[] {band.low(), band.low()}));
+        }
+        if (!Double.isNaN(band.high())) {
+            series.add(new Series(accepted, Style.DOTTED, span, new double[] {band.high(), band.high()}));
+        }
+        String known = data.known().name() + (data.known().unit() == null ? "" : " (" + data.known().unit() + ")");
+        section.figure(new FigureSpec(id + ".recovery", "Recovery by level", known, "Recovery (%)", series));
+    }
+
+    private static double[] span(AccuracyData data, RowRecoveries recoveries) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (AccuracyRow r : data.rows()) {
+            if (recoveries.has(r)) {
+                lo = Math.min(lo, r.knownValue());
+                hi = Math.max(hi, r.knownValue());
+            }
+        }
+        return new double[] {lo, hi};
+    }
+
+    private static double[] xs(List<double[]> points) {
+        return points.stream().mapToDouble(p -> p[0]).toArray();
+    }
+
+    private static double[] ys(List<double[]> points) {
+        return points.stream().mapToDouble(p -> p[1]).toArray();
+    }
+}
