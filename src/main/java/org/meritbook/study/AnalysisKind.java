@@ -16,7 +16,7 @@ public enum AnalysisKind {
             List.of("n", "slope", "intercept", "slope_se", "intercept_se", "r", "r_squared", "residual_sd", "quadratic_coef", "quadratic_coef_se", "lack_of_fit_f", "lack_of_fit_p", "mandel_f", "mandel_p", "shapiro_w", "shapiro_p", "back_calculated", "deviation_percent")),
     DETECTION_LIMIT("detection-limit",
             List.of("methods"),
-            List.of("calibration", "blanks", "spikes", "low-samples", "sigma", "k", "alpha", "beta",
+            List.of("calibration", "blanks", "spikes", "low-samples", "sigma", "k", "lob", "alpha", "beta",
                     "signal", "noise", "exclude", "id", "censored", "formulas", "hidden", "merged"),
             List.of("lod", "loq", "critical_value")),
     ACCURACY("accuracy",

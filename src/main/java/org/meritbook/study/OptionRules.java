@@ -21,7 +21,8 @@ final class OptionRules {
                 "weighting", List.of("none", "1/x", "1/x^2", "1/y", "1/y^2", "auto", "1/x²", "1/y²"),
                 "model", List.of("linear", "quadratic", "linear-through-origin"),
                 "censored", List.of("reject", "drop"),
-                "sigma", List.of("blank", "residual", "intercept")));
+                "sigma", List.of("blank", "residual", "intercept"),
+                "lob", List.of("parametric", "non-parametric")));
         all.putAll(ReadingOptions.choices()); // formulas, hidden, merged
         return Map.copyOf(all);
     }
@@ -49,10 +50,14 @@ final class OptionRules {
 
     static final Map<String, DataSet> DATA_SETS = Map.of(
             // units: blanks hold signals unless stated as results in concentration units.
-            "blanks", new DataSet(List.of("data", "column"), List.of("units"),
+            "blanks", new DataSet(List.of("data", "column"), List.of("units", "batch"),
                     Map.of("units", List.of("signal", "concentration"))),
-            "spikes", new DataSet(List.of("data", "column"), List.of(), Map.of()),
-            "low-samples", new DataSet(List.of("data", "column", "sample"), List.of(), Map.of()));
+            // spiked: the column of the amount added (the MDL's spike-level check); batch: preparation batch.
+            "spikes", new DataSet(List.of("data", "column"), List.of("spiked", "batch"), Map.of()),
+            "low-samples", new DataSet(List.of("data", "column", "sample"), List.of(), Map.of()),
+            // signal-noise: the peak signal with the concentration of the standard, and the noise beside it.
+            "signal", new DataSet(List.of("data", "column", "concentration"), List.of(), Map.of()),
+            "noise", new DataSet(List.of("data", "column"), List.of(), Map.of()));
 
     /** Cell ids appear in results.json, file names and anchors, hence the plain alphabet. */
     static final java.util.regex.Pattern ID_PATTERN = java.util.regex.Pattern.compile("[a-z0-9][a-z0-9-]*");
