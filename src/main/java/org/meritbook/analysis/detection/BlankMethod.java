@@ -36,6 +36,7 @@ final class BlankMethod {
                     .withMethod(PROCEDURE));
             s.quantity(QuantityDraft.of("loq:blank", "LOQ from the blank results", "LOQ = ȳ_b + 10·s_b",
                     DetectionInputs.concat(common, List.of(tenInput)), loq.concentration(), unit).withMethod(PROCEDURE));
+            in.mark("blank: ȳ_b + k·s_b (LOD)", lod.concentration(), unit, true);
             return new LimitRow(NAME, unit, b.n() + " blank results", PROCEDURE, true, false);
         }
         CalibrationLine line = in.calibration(NAME);
@@ -56,6 +57,7 @@ final class BlankMethod {
                         + line.fit().weighting().notation() + "-weighted calibration plays the blank SD; it is the SD "
                         + "of a response of weight 1, not of a blank. Measure blanks for a blank-based limit.");
             }
+            in.mark("LOD, blank", lod.concentration(), line.xUnit(), false);
             return new LimitRow(NAME, line.xUnit(), "calibration " + line.cellId() + ": intercept and s(y/x)",
                     PROCEDURE, true, false);
         }
@@ -79,6 +81,8 @@ final class BlankMethod {
         s.quantity(QuantityDraft.of("loq:blank", "LOQ from the blank signals through the calibration",
                 "LOQ = (y_Q − a) / b", List.of(s.ref("y_Q", loqLevel), a, slope), loq.concentration(), line.xUnit())
                 .withMethod(PROCEDURE));
+        in.mark("blank: y_L = ȳ_b + k·s_b", lod.level(), blanks.unit(), true);
+        in.mark("LOD, blank", lod.concentration(), line.xUnit(), false);
         return new LimitRow(NAME, line.xUnit(), b.n() + " blank signals through calibration " + line.cellId(),
                 PROCEDURE, true, false);
     }

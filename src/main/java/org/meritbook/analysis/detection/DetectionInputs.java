@@ -35,6 +35,18 @@ final class DetectionInputs {
     private final CalibrationLine line;
     private final SectionResult calibrationSection;
     private SampleSummary blankSummary;
+    private final List<Mark> marks = new ArrayList<>();
+
+    /**
+     * A level to draw: a limit or decision level.
+     *
+     * @param label      legend text
+     * @param value      the level
+     * @param unit       its unit
+     * @param blankScale whether it is on the scale of the blank values (drawn on the blank figure)
+     */
+    record Mark(String label, double value, String unit, boolean blankScale) {
+    }
 
     DetectionInputs(AnalysisCell cell, AnalysisContext context, SectionBuilder section) {
         this.cell = cell;
@@ -75,6 +87,19 @@ final class DetectionInputs {
 
     SectionBuilder section() {
         return section;
+    }
+
+    void mark(String label, double value, String unit, boolean blankScale) {
+        marks.add(new Mark(label, value, unit, blankScale));
+    }
+
+    List<Mark> marks() {
+        return List.copyOf(marks);
+    }
+
+    /** The referenced calibration, if the cell names one. */
+    Optional<CalibrationLine> calibrationIfAny() {
+        return Optional.ofNullable(line);
     }
 
     Optional<MeasuredSet> blanks() {

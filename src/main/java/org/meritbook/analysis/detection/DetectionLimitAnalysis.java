@@ -20,7 +20,7 @@ import org.meritbook.study.AnalysisCell;
  */
 public final class DetectionLimitAnalysis implements Analysis {
     private static final List<String> HEADERS =
-            List.of("Method", "LOD", "LOQ", "Decision level", "Unit", "Computed from", "Procedure");
+            List.of("LOD", "LOQ", "Decision level", "Unit", "Computed from", "Procedure");
 
     @Override
     public SectionResult run(AnalysisCell cell, AnalysisContext context) {
@@ -39,6 +39,7 @@ public final class DetectionLimitAnalysis implements Analysis {
             }
         }
         headline(section, in.options().methods().get(0), rows);
+        DetectionFigures.addTo(in);
         return section.build(table(rows));
     }
 
@@ -79,7 +80,6 @@ public final class DetectionLimitAnalysis implements Analysis {
         for (LimitRow r : rows) {
             String none = "—";
             out.add(new DataTable.Row(r.method(), List.of(
-                    TableCell.raw(r.method(), null),
                     TableCell.computed("lod:" + r.method()),
                     r.hasLoq() ? TableCell.computed("loq:" + r.method()) : TableCell.raw(none, null),
                     r.hasCritical() ? TableCell.computed("critical_value:" + r.method()) : TableCell.raw(none, null),

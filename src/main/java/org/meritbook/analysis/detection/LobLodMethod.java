@@ -37,6 +37,10 @@ final class LobLodMethod {
                 "'low-samples: {data: …, column: …, sample: …}' for method lob-lod", "no low-samples: option",
                 "Add the results of the low-level samples under 'low-samples:'."));
         String unit = blanks.unit();
+        if (blanks.censored() > 0) {
+            s.warning("Method lob-lod: " + blanks.censored() + " censored blank result(s) were left out (censored: "
+                    + "drop), not set to zero; EP17 asks for the instrument's raw blank readings, negative ones included.");
+        }
         LobMethod method = chooseLob(in, blanks);
         LimitOfBlank lob = method == LobMethod.PARAMETRIC ? LimitOfBlank.parametric(blanks.values())
                 : LimitOfBlank.nonParametric(blanks.values());
@@ -77,6 +81,8 @@ final class LobLodMethod {
         s.quantity(QuantityDraft.of("lod:lob-lod", "Limit of detection (EP17)", "LoD = LoB + c_p·SD_L",
                 List.of(s.ref("LoB", lobId), s.ref("c_p", cp), s.ref("SD_L", sdL)), lod.lod(), unit)
                 .withMethod(PROCEDURE));
+        in.mark("LoB", lob.lob(), unit, true);
+        in.mark("LoD (EP17)", lod.lod(), unit, true);
         return new LimitRow(NAME, unit, lob.blanks().n() + " blanks (" + (method == LobMethod.PARAMETRIC
                 ? "parametric" : "non-parametric") + " LoB), " + lod.sampleCount() + " low-level samples", PROCEDURE,
                 false, true);

@@ -56,6 +56,7 @@ final class MdlMethod {
                         + (mdl.decidedBy() == EpaMdl.Basis.BLANK ? "method blanks" : "spiked samples") + ")",
                 blank.isPresent() ? "MDL = max(MDL_s, MDL_b)" : "MDL = MDL_s (no MDL_b)", parts, mdl.mdl(), unit)
                 .withMethod(PROCEDURE));
+        in.mark("MDL", mdl.mdl(), unit, in.blanks().isPresent());
         checkSpikeLevel(in, mdl, unit);
         checkBatches(in, "spiked samples", in.spikes());
         in.blanks().ifPresent(b -> checkBatches(in, "method blanks", in.blanks()));

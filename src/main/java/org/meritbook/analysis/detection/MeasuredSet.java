@@ -69,9 +69,9 @@ record MeasuredSet(String name, MeasuredRows rows, double[] values, List<String>
         return in;
     }
 
-    /** The column's header as the workbook shows it. */
-    String header() {
-        return rows.columns().get(0).header();
+    /** The column's name, its header without the unit. */
+    String columnName() {
+        return rows.columns().get(0).name();
     }
 
     String where() {

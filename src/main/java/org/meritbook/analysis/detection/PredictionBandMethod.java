@@ -54,6 +54,8 @@ final class PredictionBandMethod {
             s.warning("Method prediction-band: the weighting " + line.fit().weighting().notation() + " gives no finite "
                     + "weight at zero, so a blank was given the weight of the lowest standard (a larger, cautious x_C).");
         }
+        in.mark("x_C, prediction band", p.criticalValue(), line.xUnit(), false);
+        in.mark("x_D, prediction band", p.minimumDetectable(), line.xUnit(), false);
         return new LimitRow(NAME, line.xUnit(), "calibration " + line.cellId() + ", α = " + alpha + ", β = " + beta,
                 PROCEDURE, false, true);
     }

@@ -63,6 +63,7 @@ final class ResponseSdMethod {
                 "LOD = 3.3·σ / S", List.of(sigmaInput, slope), limit.lod(), line.xUnit()).withMethod(PROCEDURE));
         s.quantity(QuantityDraft.of("loq:response-sd", "LOQ from the SD of the response and the slope",
                 "LOQ = 10·σ / S", List.of(sigmaInput, slope), limit.loq(), line.xUnit()).withMethod(PROCEDURE));
+        in.mark("LOD, response-sd", limit.lod(), line.xUnit(), false);
         return new LimitRow(NAME, line.xUnit(), basis, PROCEDURE, true, false);
     }
 

@@ -65,6 +65,7 @@ final class SignalNoiseMethod {
         s.quantity(QuantityDraft.of("loq:signal-noise", "LOQ: the concentration giving S/N = 10",
                 "LOQ = 10·c / (S/N)", List.of(conc, s.ref("S/N", ratio)), QUANTITATION_RATIO * c[0] / sn, cUnit)
                 .withMethod(PROCEDURE));
+        in.mark("LOD, signal-noise", DETECTION_RATIO * c[0] / sn, cUnit, false);
         return new LimitRow(NAME, cUnit, String.format(Locale.ROOT, "S/N = %.4g at %.4g %s, scaled linearly", sn, c[0],
                 cUnit == null ? "" : cUnit), PROCEDURE, true, false);
     }

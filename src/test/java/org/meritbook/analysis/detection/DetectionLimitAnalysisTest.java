@@ -119,6 +119,12 @@ class DetectionLimitAnalysisTest {
         assertEquals(3, s.table().rows().size());
         assertEquals("prediction-band", s.table().rows().get(2).label());
         everyQuantityHasItsStep(s);
+        // The blank figure draws y_L on the blank signals' scale; the low-end figure draws each limit in pg/mL.
+        assertEquals(java.util.List.of("detection-limit.blanks", "detection-limit.low-end"),
+                s.figures().stream().map(org.meritbook.figures.FigureSpec::id).toList());
+        var lowEnd = s.figures().get(1).series().stream().filter(x -> x.name().equals("x_D, prediction band"))
+                .findFirst().orElseThrow();
+        assertEquals(q(s, "lod:prediction-band"), lowEnd.x()[0], 0);
     }
 
     @Test
