@@ -102,6 +102,14 @@ final class LobLodMethod {
             s.setting("LoB", "parametric (too few blanks for a normality test)", "parametric");
             return LobMethod.PARAMETRIC;
         }
+        boolean allEqual = java.util.Arrays.stream(v).distinct().count() == 1;
+        if (allEqual || v.length > ShapiroWilk.MAX_N) {
+            boolean ranked = v.length >= LimitOfBlank.NON_PARAMETRIC_MINIMUM;
+            s.setting("LoB", (ranked ? "non-parametric" : "parametric") + (allEqual ? " (all blank results are equal: "
+                    + "no normality test)" : " (more blanks than the normality test takes)"),
+                    ranked ? "non-parametric" : "parametric");
+            return ranked ? LobMethod.NON_PARAMETRIC : LobMethod.PARAMETRIC;
+        }
         ShapiroWilk sw = ShapiroWilk.test(v);
         s.step("lob_lod_normality", "Shapiro–Wilk test of the blank results", "W, p (Royston 1995)",
                 blanks.inputs("x_B"), sw.p(), null, "Shapiro & Wilk 1965; Royston 1995");

@@ -30,6 +30,10 @@ final class SignalNoiseMethod {
         MeasuredSet signal = require(in, in.signal().orElse(null), "signal",
                 "'signal: {data: …, column: <signal>, concentration: <column>}'");
         MeasuredSet noise = require(in, in.noise().orElse(null), "noise", "'noise: {data: …, column: <noise>}'");
+        if (signal.values().length == 0 || noise.values().length == 0) {
+            throw new UnusableDataException(UnusableDataException.Reason.TOO_FEW_VALUES,
+                    "there is no usable " + (signal.values().length == 0 ? "signal" : "noise") + " value");
+        }
         double[] c = signal.extraNumbers();
         for (int i = 1; i < c.length; i++) {
             if (c[i] != c[0]) {

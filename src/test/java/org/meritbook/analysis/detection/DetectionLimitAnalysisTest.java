@@ -203,6 +203,23 @@ class DetectionLimitAnalysisTest {
     }
 
     @Test
+    void equalBlanksTakeTheRankBasedLobWithoutANormalityTest() {
+        DetectionFixture f = fixture();
+        String[] zeros = new String[20];
+        java.util.Arrays.fill(zeros, "0");
+        f.block("Low", 0, "A1:A21", new String[] {"Result (mg/kg)"}, new String[][] {zeros});
+        SectionResult s = f.run(cell("""
+                methods: [lob-lod]
+                blanks: {data: lab!Low!A1:A21, column: Result, units: concentration}
+                low-samples: {data: lab!Low!C1:D19, column: Result, sample: Sample}
+                """));
+        // By hand from the R values above: LoB = 0 (every blank), LoD = c_p·SD_L = 1.6728813559322 × 0.0203988017077257
+        // = 0.0341247750602122 (R).
+        assertEquals(0, q(s, "critical_value:lob-lod"), 0);
+        assertEquals(0.0341247750602122, q(s, "lod"), 1e-13);
+    }
+
+    @Test
     void signalToNoiseScalesTheStandard() {
         SectionResult s = fixture().run(cell("""
                 methods: [signal-noise]
