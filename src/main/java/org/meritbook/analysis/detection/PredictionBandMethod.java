@@ -31,13 +31,18 @@ final class PredictionBandMethod {
         StepInput b = in.fromCalibration("b", "slope");
         StepInput syx = in.fromCalibration("s(y/x)", "residual_sd");
         String tA = s.step("pb_t_alpha", "Student t(1 − α; ν = " + p.degreesOfFreedom() + ")", "t_α = t(1 − α; n − 2)",
-                List.of(StepInput.number("α", alpha, null, "alpha")), p.tAlpha(), null, PROCEDURE);
+                List.of(StepInput.number("α", alpha, null, source(in, "alpha"))), p.tAlpha(), null, PROCEDURE);
         String tB = s.step("pb_t_beta", "Student t(1 − β; ν = " + p.degreesOfFreedom() + ")", "t_β = t(1 − β; n − 2)",
-                List.of(StepInput.number("β", beta, null, "beta")), p.tBeta(), null, PROCEDURE);
+                List.of(StepInput.number("β", beta, null, source(in, "beta"))), p.tBeta(), null, PROCEDURE);
         String w0 = weightNote(p);
         String yC = s.step("pb_critical_response", "Critical response: upper prediction limit at zero" + w0,
                 "y_C = a + t_α·s(y/x)·√(1/w₀ + 1/Σw + x̄w²/Sxx)", List.of(a, syx, s.ref("t_α", tA),
-                        StepInput.number("w₀", p.weightAtZero(), null, p.zeroWeightSource().name().toLowerCase())),
+                        StepInput.number("w₀", p.weightAtZero(), null, switch (p.zeroWeightSource()) {
+                            case UNWEIGHTED -> "unweighted fit";
+                            case AT_ZERO -> "weighting " + line.fit().weighting().notation() + " at x = 0";
+                            case AT_LOWEST_STANDARD -> "weight of the lowest standard, " + line.xLow() + " "
+                                    + (line.xUnit() == null ? "" : line.xUnit());
+                        })),
                 p.criticalResponse(), line.yUnit(), PROCEDURE);
         String xC = s.quantity(QuantityDraft.of("critical_value:prediction-band", "Critical value x_C",
                 "x_C = (y_C − a) / b", List.of(s.ref("y_C", yC), a, b), p.criticalValue(), line.xUnit())
@@ -58,6 +63,10 @@ final class PredictionBandMethod {
         in.mark("x_D, prediction band", p.minimumDetectable(), line.xUnit(), false);
         return new LimitRow(NAME, line.xUnit(), "calibration " + line.cellId() + ", α = " + alpha + ", β = " + beta,
                 PROCEDURE, false, true);
+    }
+
+    private static String source(DetectionInputs in, String option) {
+        return in.cell().option(option).map(v -> "notebook line " + v.line()).orElse("default " + option + " = 0.05");
     }
 
     private static String weightNote(PredictionBandLimits p) {
