@@ -71,10 +71,12 @@ final class FormatMutations {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        String block = demo.notebook.replace("hmf-honey-validation.xlsx", CSV)
+        // These copies hold the calibration sheet only, so the notebook keeps only its calibration cells.
+        String calibrationOnly = demo.notebook.replaceAll("(?ms)^```detection-limit\\s*$.*?^```\\s*$\\n?", "");
+        String block = calibrationOnly.replace("hmf-honey-validation.xlsx", CSV)
                 .replace("lab!Calibration!A8:F31", "lab!cal!A1:F24").replace("cell: Calibration!D23", "cell: cal!D16");
         csvNotebook = block;
-        xlsNotebook = demo.notebook.replace("hmf-honey-validation.xlsx", XLS);
+        xlsNotebook = calibrationOnly.replace("hmf-honey-validation.xlsx", XLS);
     }
 
     /** An .xls copy of the calibration sheet, values and C29's formula (with its computed result). */
