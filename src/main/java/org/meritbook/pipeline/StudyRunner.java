@@ -21,6 +21,7 @@ import org.meritbook.analysis.accuracy.AccuracyAnalysis;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
 import org.meritbook.analysis.range.RangeAnalysis;
 import org.meritbook.analysis.unknowns.UnknownsAnalysis;
+import org.meritbook.analysis.detection.DetectionLimitAnalysis;
 import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.error.ErrorKey;
@@ -52,6 +53,7 @@ public final class StudyRunner {
         return new StudyRunner(Map.ofEntries(
                 Map.entry(AnalysisKind.CALIBRATION, new CalibrationAnalysis()),
                 Map.entry(AnalysisKind.ACCURACY, new AccuracyAnalysis()),
+                Map.entry(AnalysisKind.DETECTION_LIMIT, new DetectionLimitAnalysis()),
                 Map.entry(AnalysisKind.RANGE, new RangeAnalysis()),
                 Map.entry(AnalysisKind.UNKNOWNS, new UnknownsAnalysis())));
     }

@@ -18,7 +18,7 @@ public enum AnalysisKind {
                     "shapiro_w", "shapiro_p", "back_calculated", "deviation_percent")),
     DETECTION_LIMIT("detection-limit",
             List.of("methods"),
-            List.of("calibration", "blanks", "spikes", "low-samples", "sigma", "k", "alpha", "beta",
+            List.of("calibration", "blanks", "spikes", "low-samples", "sigma", "k", "lob", "alpha", "beta",
                     "signal", "noise", "exclude", "id", "censored", "formulas", "hidden", "merged"),
             List.of("lod", "loq", "critical_value")),
     ACCURACY("accuracy",

@@ -22,7 +22,8 @@ final class OptionRules {
                 "model", List.of("linear", "quadratic", "linear-through-origin"),
                 "censored", List.of("reject", "drop"),
                 "sigma", List.of("blank", "residual", "intercept"),
-                "replicates", List.of("together", "each")));
+                "replicates", List.of("together", "each"),
+                "lob", List.of("parametric", "non-parametric")));
         all.putAll(ReadingOptions.choices()); // formulas, hidden, merged
         return Map.copyOf(all);
     }
@@ -50,10 +51,14 @@ final class OptionRules {
 
     static final Map<String, DataSet> DATA_SETS = Map.of(
             // units: blanks hold signals unless stated as results in concentration units.
-            "blanks", new DataSet(List.of("data", "column"), List.of("units"),
+            "blanks", new DataSet(List.of("data", "column"), List.of("units", "batch"),
                     Map.of("units", List.of("signal", "concentration"))),
-            "spikes", new DataSet(List.of("data", "column"), List.of(), Map.of()),
-            "low-samples", new DataSet(List.of("data", "column", "sample"), List.of(), Map.of()));
+            // spiked: the column of the amount added (the MDL's spike-level check); batch: preparation batch.
+            "spikes", new DataSet(List.of("data", "column"), List.of("spiked", "batch"), Map.of()),
+            "low-samples", new DataSet(List.of("data", "column", "sample"), List.of(), Map.of()),
+            // signal-noise: the peak signal with the concentration of the standard, and the noise beside it.
+            "signal", new DataSet(List.of("data", "column", "concentration"), List.of(), Map.of()),
+            "noise", new DataSet(List.of("data", "column"), List.of(), Map.of()));
 
     /** Cell ids appear in results.json, file names and anchors, hence the plain alphabet. */
     static final java.util.regex.Pattern ID_PATTERN = java.util.regex.Pattern.compile("[a-z0-9][a-z0-9-]*");
