@@ -18,6 +18,7 @@ import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.DataAccess;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
+import org.meritbook.analysis.precision.PrecisionAnalysis;
 import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.error.ErrorKey;
@@ -45,7 +46,8 @@ public final class StudyRunner {
 
     /** The analyses this version implements. */
     public static StudyRunner withBuiltInAnalyses() {
-        return new StudyRunner(Map.of(AnalysisKind.CALIBRATION, new CalibrationAnalysis()));
+        return new StudyRunner(Map.of(AnalysisKind.CALIBRATION, new CalibrationAnalysis(),
+                AnalysisKind.PRECISION, new PrecisionAnalysis()));
     }
 
     public StudyResults run(Path notebook) {
