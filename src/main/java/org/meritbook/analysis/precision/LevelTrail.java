@@ -10,6 +10,7 @@ import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.UnusableDataException;
 import org.meritbook.stats.anova.OneWayAnova;
 import org.meritbook.stats.anova.VarianceComponents;
+import org.meritbook.stats.descriptive.Moments;
 import org.meritbook.stats.descriptive.SampleSummary;
 import org.meritbook.stats.outliers.CochranTest;
 import org.meritbook.stats.outliers.GrubbsTest;
@@ -47,44 +48,81 @@ final class LevelTrail {
                     + " result is used (2 or more needed).");
             return;
         }
+        List<StepInput> groupMeans = data.grouped() && level.groups().size() > 1 ? groupMeans() : List.of();
         SampleSummary summary = SampleSummary.of(values);
-        String sd = summary(summary);
+        String sd = summary(summary, groupMeans);
         grubbsOnValues(values, sd);
         if (data.grouped()) {
-            grouped();
+            grouped(groupMeans);
         }
     }
 
-    /** n, mean, SD and %CV of all the level's results; returns the SD's step id. */
-    private String summary(SampleSummary s) {
+    /** One step per group: its mean, with the group's cells as inputs (the only place they are listed). */
+    private List<StepInput> groupMeans() {
+        List<StepInput> means = new ArrayList<>();
+        String groupName = data.groupColumn().name();
+        level.groups().forEach((label, rows) -> {
+            List<StepInput> cells = cells(rows);
+            double[] v = rows.stream().mapToDouble(r -> r.number(0)).toArray();
+            String id = section.step("group_mean" + suffix + "/" + label,
+                    "Mean of " + groupName + " " + label + of() + " (n = " + v.length + ")",
+                    "x̄ᵢ = Σⱼ xᵢⱼ / nᵢ", cells, Moments.mean(v), unit, null);
+            means.add(section.ref("x̄(" + label + ")", id));
+        });
+        return means;
+    }
+
+    private List<StepInput> cells(List<MeasuredRows.Row> rows) {
         List<StepInput> cells = new ArrayList<>();
         int i = 1;
-        for (MeasuredRows.Row row : level.rows()) {
+        for (MeasuredRows.Row row : rows) {
             cells.add(StepInput.number("x" + i++, row.number(0), unit, row.cell(0).ref().address()));
         }
+        return cells;
+    }
+
+    /**
+     * n, mean, SD and %CV of all the level's results; returns the SD's step id. With groups the
+     * mean's inputs are the group means (whose steps list the cells), otherwise the cells.
+     */
+    private String summary(SampleSummary s, List<StepInput> groupMeans) {
         String n = section.quantity(QuantityDraft.of("n" + suffix, "Number of results" + of(), "n = number of results used",
-                cells, s.n(), null));
-        String mean = section.quantity(QuantityDraft.of("mean" + suffix, "Mean" + of(), "x̄ = Σx / n", cells, s.mean(), unit)
-                .withInterval(s.meanInterval(PrecisionAnalysis.LEVEL)).withMethod("t interval of the mean, n − 1 df")
-                .inSummary());
-        List<StepInput> sdInputs = new ArrayList<>(cells);
-        sdInputs.add(0, section.ref("x̄", mean));
-        sdInputs.add(1, section.ref("n", n));
+                List.of(StepInput.text("results", s.n() + " used rows" + (data.levelled() ? " of level " + level.label() : "")
+                        + " (excluded rows not counted)", data.rows().where())), s.n(), null));
+        List<StepInput> meanInputs = new ArrayList<>();
+        String formula;
+        if (groupMeans.isEmpty()) {
+            meanInputs.addAll(cells(level.rows()));
+            formula = "x̄ = Σx / n";
+        } else {
+            meanInputs.add(section.ref("n", n));
+            int i = 0;
+            for (Map.Entry<String, List<MeasuredRows.Row>> g : level.groups().entrySet()) {
+                StepInput groupMean = groupMeans.get(i++);
+                meanInputs.add(groupMean);
+                meanInputs.add(StepInput.number("n(" + g.getKey() + ")", g.getValue().size(), null, groupMean.source()));
+            }
+            formula = "x̄ = Σ nᵢ·x̄ᵢ / n (= Σx / n over all results)";
+        }
+        String mean = section.quantity(QuantityDraft.of("mean" + suffix, "Mean" + of(), formula, meanInputs, s.mean(), unit)
+                .withInterval(s.meanInterval(PrecisionAnalysis.LEVEL)).withMethod("t interval of the mean, n − 1 df"));
         String sd = section.quantity(QuantityDraft.of("sd" + suffix, "Standard deviation" + of(),
-                "s = √(Σ(x − x̄)² / (n − 1))", sdInputs, s.sd(), unit)
+                "s = √(Σ(x − x̄)² / (n − 1)) over the results of step " + section.stepId(groupMeans.isEmpty()
+                        ? "mean" + suffix : "group_mean" + suffix + "/…"),
+                List.of(section.ref("x̄", mean), section.ref("n", n)), s.sd(), unit)
                 .withInterval(s.sdInterval(PrecisionAnalysis.LEVEL))
                 .withMethod("chi-square interval of the SD, n − 1 df (normal data)"));
         if (s.mean() == 0) {
             warn("%CV not evaluable, because the mean is 0.");
         } else {
-            section.quantity(QuantityDraft.of("cv_percent" + suffix, "Relative standard deviation (%CV)" + of(),
-                    "%CV = 100 · s / |x̄|", List.of(section.ref("s", sd), section.ref("x̄", mean)), s.cvPercent(), "%")
-                    .inSummary());
+            QuantityDraft cv = QuantityDraft.of("cv_percent" + suffix, "%CV (RSD) of all results" + of(),
+                    "%CV = 100 · s / |x̄|", List.of(section.ref("s", sd), section.ref("x̄", mean)), s.cvPercent(), "%");
+            section.quantity(data.grouped() ? cv : cv.inSummary());
         }
         return sd;
     }
 
-    private void grouped() {
+    private void grouped(List<StepInput> means) {
         Map<String, List<MeasuredRows.Row>> groups = level.groups();
         String groupName = data.groupColumn().name();
         if (groups.size() < 2) {
@@ -92,7 +130,6 @@ final class LevelTrail {
                     + "belong to one " + groupName + " (" + groups.keySet().iterator().next() + "); two or more are needed.");
             return;
         }
-        List<StepInput> means = new ArrayList<>();
         List<String> labels = new ArrayList<>(groups.keySet());
         OneWayAnova anova;
         try {
@@ -101,17 +138,6 @@ final class LevelTrail {
             warn("repeatability and intermediate precision not evaluable, because "
                     + e.getMessage() + ".");
             return;
-        }
-        for (int g = 0; g < labels.size(); g++) {
-            List<StepInput> cells = new ArrayList<>();
-            int i = 1;
-            for (MeasuredRows.Row row : groups.get(labels.get(g))) {
-                cells.add(StepInput.number("x" + i++, row.number(0), unit, row.cell(0).ref().address()));
-            }
-            String id = section.step("group_mean" + suffix + "/" + labels.get(g),
-                    "Mean of " + groupName + " " + labels.get(g) + of() + " (n = " + anova.groupSizes().get(g) + ")",
-                    "x̄ᵢ = Σⱼ xᵢⱼ / nᵢ", cells, anova.groupMeans().get(g), unit, null);
-            means.add(section.ref("x̄(" + labels.get(g) + ")", id));
         }
         String sq = unit == null ? null : "(" + unit + ")²";
         List<StepInput> betweenInputs = new ArrayList<>(means);
@@ -209,13 +235,14 @@ final class LevelTrail {
         }
         MeasuredRows.Row suspect = level.rows().get(g.suspectIndex());
         String address = suspect.cell(0).ref().address();
-        String id = section.step("grubbs_g" + suffix, "Grubbs' G for the result farthest from the mean" + of() + ": "
+        String id = section.quantity(QuantityDraft.of("grubbs_g" + suffix,
+                "Grubbs' G for the result farthest from the mean" + of() + ": "
                         + address + ", " + g.judgement().name().toLowerCase(Locale.ROOT),
                 "G = |x − x̄| / s; critical G = ((n − 1)/√n)·√(t² / (n − 2 + t²)), t = t(1 − α/(2n); n − 2)",
                 List.of(StepInput.number("x", g.suspect(), unit, address), section.ref("x̄", section.stepId("mean" + suffix)),
                         section.ref("s", sd), StepInput.number("G crit (5 %)", g.critical5(), null, "α = 0.05"),
                         StepInput.number("G crit (1 %)", g.critical1(), null, "α = 0.01")),
-                g.statistic(), null, "Grubbs (1969), single two-sided; ISO 5725-2 §7.3.4");
+                g.statistic(), null).withMethod("Grubbs (1969), single two-sided; ISO 5725-2 §7.3.4"));
         flag(g.judgement(), String.format(Locale.ROOT, "Grubbs' test flags result %s (%s) as a %s: G = %.3f against "
                 + "%.3f (5 %%) and %.3f (1 %%) (step %s).", address, suspect.cell(0).raw(), noun(g.judgement()),
                 g.statistic(), g.critical5(), g.critical1(), id));
@@ -238,13 +265,14 @@ final class LevelTrail {
             return;
         }
         String suspect = labels.get(g.suspectIndex());
-        String id = section.step("grubbs_means_g" + suffix, "Grubbs' G for the " + groupName + " mean farthest from the rest"
+        String id = section.quantity(QuantityDraft.of("grubbs_means_g" + suffix,
+                "Grubbs' G for the " + groupName + " mean farthest from the rest"
                         + of() + ": " + groupName + " " + suspect + ", " + g.judgement().name().toLowerCase(Locale.ROOT),
                 "G = |x̄ᵢ − mean of x̄ᵢ| / SD of x̄ᵢ; critical G as for single results, n = k",
                 List.of(section.ref("x̄(" + suspect + ")", section.stepId("group_mean" + suffix + "/" + suspect)),
                         StepInput.number("G crit (5 %)", g.critical5(), null, "α = 0.05, k = " + labels.size()),
                         StepInput.number("G crit (1 %)", g.critical1(), null, "α = 0.01, k = " + labels.size())),
-                g.statistic(), null, "Grubbs (1969) on cell means; ISO 5725-2 §7.3.4");
+                g.statistic(), null).withMethod("Grubbs (1969) on cell means; ISO 5725-2 §7.3.4"));
         flag(g.judgement(), String.format(Locale.ROOT, "Grubbs' test on the %s means flags %s %s as a %s: G = %.3f "
                 + "against %.3f (5 %%) and %.3f (1 %%) (step %s).", groupName, groupName, suspect, noun(g.judgement()),
                 g.statistic(), g.critical5(), g.critical1(), id));
@@ -266,7 +294,8 @@ final class LevelTrail {
         }
         String suspect = labels.get(c.suspectIndex());
         String sq = unit == null ? null : "(" + unit + ")²";
-        String id = section.step("cochran_c" + suffix, "Cochran's C for the largest " + groupName + " variance" + of() + ": "
+        String id = section.quantity(QuantityDraft.of("cochran_c" + suffix,
+                "Cochran's C for the largest " + groupName + " variance" + of() + ": "
                         + groupName + " " + suspect + ", " + c.judgement().name().toLowerCase(Locale.ROOT),
                 "C = s²max / Σ sᵢ²; critical C = 1 / (1 + (k − 1)/F), F = F(1 − α/k; n − 1, (k − 1)(n − 1))",
                 List.of(StepInput.number("s²max", c.variances().get(c.suspectIndex()), sq, groupName + " " + suspect),
@@ -275,7 +304,7 @@ final class LevelTrail {
                         StepInput.number("C crit (5 %)", c.critical5(), null, "α = 0.05, n = " + c.groupSize()
                                 + (c.sizeRule() == CochranTest.GroupSizeRule.EQUAL ? "" : " (the most frequent size)")),
                         StepInput.number("C crit (1 %)", c.critical1(), null, "α = 0.01")),
-                c.statistic(), null, "Cochran's test; ISO 5725-2 §7.3.3");
+                c.statistic(), null).withMethod("Cochran's test; ISO 5725-2 §7.3.3"));
         flag(c.judgement(), String.format(Locale.ROOT, "Cochran's test flags the variance of %s %s as a %s: C = %.3f "
                 + "against %.3f (5 %%) and %.3f (1 %%) (step %s).", groupName, suspect, noun(c.judgement()),
                 c.statistic(), c.critical5(), c.critical1(), id));

@@ -33,7 +33,7 @@ final class PrecisionTable {
                 CellValue v = row.cell(c);
                 cells.add(TableCell.raw(v.raw(), v.ref().address()));
             }
-            rows.add(new DataTable.Row(row.cell(0).ref().address(), cells, row.exclusionReason()));
+            rows.add(new DataTable.Row(row.cell(0).ref().a1(), cells, row.exclusionReason()));
         }
         return new DataTable(headers, rows);
     }
