@@ -28,6 +28,18 @@ public final class BuiltInProfiles {
                 "built in", List.of(new DeviationRule("Back-calculated standards", 15, 20, 0.75,
                         "ICH M10 bioanalytical method validation, calibration curve (±15 %, ±20 % at the LLOQ, "
                                 + "75 % of standards)"))));
+        // AOAC's table of expected precision by concentration; the row for 10 mg/kg (10 ppm). Intermediate
+        // precision lies between repeatability and reproducibility, so judging it against RSD_R is lenient.
+        all.put("food-precision-10-mg-kg", new AcceptanceProfile("food-precision-10-mg-kg",
+                "Precision of a method for an analyte near 10 mg/kg, against the RSDs AOAC expects at that level.",
+                "built in", List.of(
+                        new QuantityRule(AnalysisKind.PRECISION, "Repeatability", "repeatability_cv_percent", false, 7.3,
+                                "RSD_r (%)", null, "AOAC Official Methods of Analysis, Appendix F (2016), expected "
+                                        + "RSD_r at 10 ppm (from memory); a default to confirm locally"),
+                        new QuantityRule(AnalysisKind.PRECISION, "Intermediate precision", "intermediate_cv_percent", false,
+                                11, "RSD_I (%)", null, "AOAC Official Methods of Analysis, Appendix F (2016), expected "
+                                        + "RSD_R at 10 ppm (from memory), an upper bound for RSD_I; a default to confirm "
+                                        + "locally"))));
         return all;
     }
 }

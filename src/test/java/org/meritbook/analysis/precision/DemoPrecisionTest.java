@@ -8,9 +8,12 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meritbook.analysis.SectionResult;
+import org.meritbook.criteria.BuiltInProfiles;
+import org.meritbook.criteria.Verdict;
 import org.meritbook.pipeline.StudyRunner;
 
 /**
@@ -115,5 +118,16 @@ class DemoPrecisionTest {
         assertEquals(2, s.figures().size());
         assertFalse(s.warnings().stream().anyMatch(w -> w.contains("set to zero")), s.warnings().toString());
         assertTrue(s.settings().stream().anyMatch(x -> x.label().equals("Levels") && x.value().contains("QC-N, QC-S")));
+    }
+
+    @Test
+    void theFoodPrecisionProfileJudgesEachLevel(@TempDir Path tmp) throws IOException {
+        SectionResult s = BuiltInProfiles.all().get("food-precision-10-mg-kg").judge(run(tmp));
+        // RSD_r 1.30 % and 2.02 %, RSD_I 2.59 % and 2.07 % (R above): all within 7.3 % and 11 %.
+        assertEquals(List.of("repeatability_cv_percent:QC-N", "repeatability_cv_percent:QC-S",
+                "intermediate_cv_percent:QC-N", "intermediate_cv_percent:QC-S"),
+                s.verdicts().stream().map(Verdict::quantity).toList());
+        assertTrue(s.verdicts().stream().allMatch(v -> v.outcome() == Verdict.Outcome.PASS), s.verdicts().toString());
+        assertEquals("RSD_r (%) ≤ 7.3", s.verdicts().get(0).rule());
     }
 }
