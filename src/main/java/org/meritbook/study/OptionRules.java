@@ -21,7 +21,9 @@ final class OptionRules {
                 "weighting", List.of("none", "1/x", "1/x^2", "1/y", "1/y^2", "auto", "1/x²", "1/y²"),
                 "model", List.of("linear", "quadratic", "linear-through-origin"),
                 "censored", List.of("reject", "drop"),
-                "sigma", List.of("blank", "residual", "intercept")));
+                "sigma", List.of("blank", "residual", "intercept"),
+                // precision: the unit of the results as a mass fraction, for the Horwitz ratio.
+                "horwitz", MassFractions.UNITS));
         all.putAll(ReadingOptions.choices()); // formulas, hidden, merged
         return Map.copyOf(all);
     }

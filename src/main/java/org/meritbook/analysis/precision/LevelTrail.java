@@ -8,6 +8,7 @@ import org.meritbook.analysis.MeasuredRows;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.UnusableDataException;
+import org.meritbook.stats.anova.HorwitzRatio;
 import org.meritbook.stats.anova.OneWayAnova;
 import org.meritbook.stats.anova.VarianceComponents;
 import org.meritbook.stats.descriptive.Moments;
@@ -15,6 +16,7 @@ import org.meritbook.stats.descriptive.SampleSummary;
 import org.meritbook.stats.outliers.CochranTest;
 import org.meritbook.stats.outliers.GrubbsTest;
 import org.meritbook.stats.outliers.OutlierClass;
+import org.meritbook.study.MassFractions;
 import org.meritbook.trail.StepInput;
 
 /**
@@ -32,8 +34,12 @@ final class LevelTrail {
     private final String unit;
     private final String where;
 
-    LevelTrail(SectionBuilder section, PrecisionData data, PrecisionData.Level level) {
+    /** The {@code horwitz:} unit of the results as a mass fraction, or null when no Horwitz ratio is asked for. */
+    private final String horwitzUnit;
+
+    LevelTrail(SectionBuilder section, PrecisionData data, PrecisionData.Level level, String horwitzUnit) {
         this.section = section;
+        this.horwitzUnit = horwitzUnit;
         this.data = data;
         this.level = level;
         this.suffix = data.levelled() ? ":" + level.label() : "";
@@ -55,6 +61,41 @@ final class LevelTrail {
         if (data.grouped()) {
             grouped(groupMeans);
         }
+        if (horwitzUnit != null) {
+            horwitz(summary.mean());
+        }
+    }
+
+    /**
+     * HorRat on the intermediate-precision RSD (the %CV of all results without groups), the mean
+     * converted to a mass fraction with the {@code horwitz:} unit.
+     */
+    private void horwitz(double mean) {
+        String found = section.hasQuantity("intermediate_cv_percent" + suffix) ? "intermediate_cv_percent" + suffix
+                : "cv_percent" + suffix;
+        if (!section.hasQuantity(found)) {
+            warn("Horwitz ratio not evaluable, because no RSD was computed.");
+            return;
+        }
+        double factor = MassFractions.factor(horwitzUnit);
+        double c = Math.abs(mean) * factor;
+        if (!(c > 0 && c <= 1)) {
+            warn(String.format(Locale.ROOT, "Horwitz ratio not evaluable, because the mean as a mass fraction (%.4g) "
+                    + "is not in (0, 1]; check horwitz: %s.", c, horwitzUnit));
+            return;
+        }
+        HorwitzRatio h = HorwitzRatio.of(c, section.ref("RSD", section.stepId(found)).value());
+        String cId = section.step("mass_fraction" + suffix, "Mean as a mass fraction" + of(), "C = |x̄| × " + MassFractions.factorText(horwitzUnit)
+                        + " (horwitz: " + horwitzUnit + ")", List.of(section.ref("x̄", section.stepId("mean" + suffix))),
+                c, null, null);
+        String predicted = section.step("horwitz_predicted_rsd" + suffix, "RSD predicted by the Horwitz function" + of(),
+                "PRSD_R = 2 · C^(−0.1505)", List.of(section.ref("C", cId)), h.predictedRsdPercent(), "%",
+                "Horwitz, Kamps & Boyer (1980); Horwitz & Albert (2006)");
+        section.quantity(QuantityDraft.of("horwitz_ratio" + suffix, "Horwitz ratio (HorRat)" + of(),
+                "HorRat = RSD / PRSD_R", List.of(section.ref(found.startsWith("intermediate") ? "RSD_I" : "%CV",
+                        section.stepId(found)), section.ref("PRSD_R", predicted)), h.ratio(), null)
+                .withMethod("HorRat on " + (found.startsWith("intermediate") ? "the intermediate-precision RSD"
+                        : "the RSD of all results") + "; Horwitz & Albert, J. AOAC Int. 89 (2006)"));
     }
 
     /** One step per group: its mean, with the group's cells as inputs (the only place they are listed). */

@@ -7,6 +7,8 @@ import org.meritbook.analysis.SectionResult;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.study.AnalysisCell;
+import org.meritbook.study.MassFractions;
+import org.meritbook.study.OptionValue;
 
 /**
  * Precision (DESIGN §4): per level, mean, SD with its chi-square interval and %CV of the results;
@@ -43,8 +45,13 @@ public final class PrecisionAnalysis implements Analysis {
         section.setting("Outlier screening", "Grubbs (single, two-sided) on the results"
                 + (data.grouped() ? " and on the group means, Cochran's C on the group variances" : "")
                 + "; at 5 % and 1 %; flagged, never removed");
+        String horwitz = cell.option("horwitz").map(OptionValue::text).orElse(null);
+        if (horwitz != null) {
+            section.setting("Horwitz ratio", "on the " + (data.grouped() ? "intermediate-precision RSD" : "RSD of all results")
+                    + "; results in " + horwitz + ", as a mass fraction × " + MassFractions.factorText(horwitz));
+        }
         for (PrecisionData.Level level : data.levels()) {
-            new LevelTrail(section, data, level).record();
+            new LevelTrail(section, data, level, horwitz).record();
         }
         PrecisionFigures.addTo(section, cell.id(), data);
         return section.build(PrecisionTable.of(data));

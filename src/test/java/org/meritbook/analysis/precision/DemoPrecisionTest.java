@@ -43,6 +43,10 @@ class DemoPrecisionTest {
     private static final Path DEMO = Path.of("demo-data");
 
     private static SectionResult run(Path tmp) throws IOException {
+        return run(tmp, "");
+    }
+
+    private static SectionResult run(Path tmp, String more) throws IOException {
         Files.copy(DEMO.resolve("hmf-honey-validation.xlsx"), tmp.resolve("hmf-honey-validation.xlsx"));
         Path notebook = tmp.resolve("study.md");
         Files.writeString(notebook, """
@@ -59,8 +63,8 @@ class DemoPrecisionTest {
                 value: Result
                 group: Day
                 level: Level
-                ```
-                """, StandardCharsets.UTF_8);
+                %s```
+                """.formatted(more), StandardCharsets.UTF_8);
         return StudyRunner.withBuiltInAnalyses().run(notebook).sections().get(0);
     }
 
@@ -118,6 +122,20 @@ class DemoPrecisionTest {
         assertEquals(2, s.figures().size());
         assertFalse(s.warnings().stream().anyMatch(w -> w.contains("set to zero")), s.warnings().toString());
         assertTrue(s.settings().stream().anyMatch(x -> x.label().equals("Levels") && x.value().contains("QC-N, QC-S")));
+    }
+
+    /**
+     * HorRat on s_I, R 4.2.2 (from the values above):
+     * {@code C <- mean * 1e-6; p <- 2 * C^(-0.1505); (100 * sI / mean) / p}.
+     */
+    @Test
+    void horwitzRatioOnRequest(@TempDir Path tmp) throws IOException {
+        SectionResult s = run(tmp, "horwitz: mg/kg\n");
+        assertEquals(11.567158183426121, step(s, "horwitz_predicted_rsd:QC-N"), 1e-12);
+        assertEquals(0.22415441603581993, q(s, "horwitz_ratio:QC-N"), 1e-14);
+        assertEquals(9.2502854413586526, step(s, "horwitz_predicted_rsd:QC-S"), 1e-12);
+        assertEquals(0.22420828732188594, q(s, "horwitz_ratio:QC-S"), 1e-14);
+        assertTrue(s.settings().stream().anyMatch(x -> x.label().equals("Horwitz ratio") && x.value().contains("10^-6")));
     }
 
     @Test

@@ -207,6 +207,22 @@ class PrecisionAnalysisTest {
     }
 
     @Test
+    void aHorwitzUnitThatIsNoMassFractionIsALocatedError() {
+        InputException e = assertThrows(InputException.class, () -> run("horwitz: mg/L\n", block(GROUPS, VALUES)));
+        assertEquals(ErrorKey.BAD_OPTION_VALUE, e.key());
+        assertEquals("study.md line 12", e.problems().get(0).where());
+    }
+
+    @Test
+    void aMeanAboveAMassFractionOfOneMakesHorwitzNotEvaluable() {
+        SectionResult s = run("horwitz: '%'\n", block(GROUPS, VALUES)); // 10.1 % is fine
+        assertTrue(s.quantity("horwitz_ratio").isPresent());
+        SectionResult t = run("horwitz: g/g\n", block(GROUPS, VALUES)); // 10.1 g/g is impossible
+        assertTrue(t.quantity("horwitz_ratio").isEmpty());
+        assertTrue(t.warnings().stream().anyMatch(w -> w.startsWith("Horwitz ratio not evaluable")), t.warnings().toString());
+    }
+
+    @Test
     void aMissingColumnIsALocatedError() {
         InputException e = assertThrows(InputException.class, () -> run("group: Analyst\n", block(GROUPS, VALUES)));
         assertEquals(ErrorKey.MISSING_COLUMN, e.key());
