@@ -68,7 +68,8 @@ class DemoDossierTest {
         List<String> missing = new ArrayList<>();
         int checked = 0;
         for (JsonNode section : results.get("sections")) {
-            List<String> names = new ArrayList<>(List.of("intercept", "n"));
+            List<String> names = new ArrayList<>(section.get("kind").asText().equals("calibration")
+                    ? List.of("intercept", "n") : List.of());
             section.get("quantities").fields().forEachRemaining(e -> {
                 if (e.getValue().get("summary").asBoolean()) {
                     names.add(e.getKey());
@@ -89,7 +90,8 @@ class DemoDossierTest {
                 }
             }
         }
-        assertEquals(14, checked, "each section: slope, s(y/x), r², lack-of-fit p, Mandel p, plus intercept and n");
+        assertEquals(22, checked, "each calibration: slope, s(y/x), r², lack-of-fit p, Mandel p, plus intercept and n; "
+                + "precision: s_r, s_I and their RSDs for each of the two levels");
         assertTrue(missing.isEmpty(), "not in the PDF text: " + missing);
         assertTrue(text.contains("Calibration!D23") && text.contains("Air bubble in the sample loop"),
                 "the exclusion with its cell and reason");

@@ -219,8 +219,8 @@ class DemoWorkbookTest {
     }
 
     @Test
-    void notebookHoldsOnlyCalibrationCells() throws IOException {
-        // Only the calibration kind is implemented; planned analyses stay in plain text blocks.
+    void notebookHoldsTheImplementedKindsAsCells() throws IOException {
+        // Calibration and precision are implemented; planned analyses stay in plain text blocks.
         String notebook = Files.readString(NOTEBOOK, StandardCharsets.UTF_8);
         Matcher fence = Pattern.compile("(?m)^```(\\S*)\\s*$").matcher(notebook);
         List<String> infos = new ArrayList<>();
@@ -232,7 +232,7 @@ class DemoWorkbookTest {
             open = !open;
         }
         assertFalse(open, "unclosed fence");
-        assertEquals(List.of("calibration", "calibration", "text", "text", "text"), infos);
+        assertEquals(List.of("calibration", "calibration", "text", "text", "precision"), infos);
     }
 
     // --- helpers ---

@@ -73,8 +73,13 @@ final class FormatMutations {
         }
         String block = demo.notebook.replace("hmf-honey-validation.xlsx", CSV)
                 .replace("lab!Calibration!A8:F31", "lab!cal!A1:F24").replace("cell: Calibration!D23", "cell: cal!D16");
-        csvNotebook = block;
-        xlsNotebook = demo.notebook.replace("hmf-honey-validation.xlsx", XLS);
+        // These copies hold the calibration sheet only: the demo's precision cell stays a plain text block here.
+        csvNotebook = calibrationOnly(block);
+        xlsNotebook = calibrationOnly(demo.notebook.replace("hmf-honey-validation.xlsx", XLS));
+    }
+
+    private static String calibrationOnly(String notebook) {
+        return notebook.replace("```precision\n", "```text\n");
     }
 
     /** An .xls copy of the calibration sheet, values and C29's formula (with its computed result). */
