@@ -37,6 +37,18 @@ public final class BuiltInProfiles {
                                 "mean recovery (%)", null, aoac),
                         new QuantityRule(AnalysisKind.ACCURACY, "Recovery", "recovery_percent", false, 110,
                                 "mean recovery (%)", null, aoac))));
+        // AOAC's table of expected precision by concentration; the row for 10 mg/kg (10 ppm). Intermediate
+        // precision lies between repeatability and reproducibility, so judging it against RSD_R is lenient.
+        all.put("food-precision-10-mg-kg", new AcceptanceProfile("food-precision-10-mg-kg",
+                "Precision of a method for an analyte near 10 mg/kg, against the RSDs AOAC expects at that level.",
+                "built in", List.of(
+                        new QuantityRule(AnalysisKind.PRECISION, "Repeatability", "repeatability_cv_percent", false, 7.3,
+                                "RSD_r (%)", null, "AOAC Official Methods of Analysis, Appendix F (2016), expected "
+                                        + "RSD_r at 10 ppm (from memory); a default to confirm locally"),
+                        new QuantityRule(AnalysisKind.PRECISION, "Intermediate precision", "intermediate_cv_percent", false,
+                                11, "RSD_I (%)", null, "AOAC Official Methods of Analysis, Appendix F (2016), expected "
+                                        + "RSD_R at 10 ppm (from memory), an upper bound for RSD_I; a default to confirm "
+                                        + "locally"))));
         return all;
     }
 }

@@ -35,6 +35,8 @@ public enum ErrorKey {
     MALFORMED_SHEET,
     WORKBOOK_TOO_LARGE,
     BAD_CELL_ADDRESS,
+    /** a used row without its level or group label */
+    MISSING_LABEL,
     // data that cannot support a method
     TOO_FEW_POINTS,
     ZERO_VARIANCE,

@@ -19,9 +19,10 @@ import org.meritbook.analysis.DataAccess;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.accuracy.AccuracyAnalysis;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
+import org.meritbook.analysis.detection.DetectionLimitAnalysis;
+import org.meritbook.analysis.precision.PrecisionAnalysis;
 import org.meritbook.analysis.range.RangeAnalysis;
 import org.meritbook.analysis.unknowns.UnknownsAnalysis;
-import org.meritbook.analysis.detection.DetectionLimitAnalysis;
 import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.error.ErrorKey;
@@ -54,6 +55,7 @@ public final class StudyRunner {
                 Map.entry(AnalysisKind.CALIBRATION, new CalibrationAnalysis()),
                 Map.entry(AnalysisKind.ACCURACY, new AccuracyAnalysis()),
                 Map.entry(AnalysisKind.DETECTION_LIMIT, new DetectionLimitAnalysis()),
+                Map.entry(AnalysisKind.PRECISION, new PrecisionAnalysis()),
                 Map.entry(AnalysisKind.RANGE, new RangeAnalysis()),
                 Map.entry(AnalysisKind.UNKNOWNS, new UnknownsAnalysis())));
     }

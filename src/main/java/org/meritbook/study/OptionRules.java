@@ -23,7 +23,9 @@ final class OptionRules {
                 "censored", List.of("reject", "drop"),
                 "sigma", List.of("blank", "residual", "intercept"),
                 "replicates", List.of("together", "each"),
-                "lob", List.of("parametric", "non-parametric")));
+                "lob", List.of("parametric", "non-parametric"),
+                // precision: the unit of the results as a mass fraction, for the Horwitz ratio.
+                "horwitz", MassFractions.UNITS));
         all.putAll(ReadingOptions.choices()); // formulas, hidden, merged
         return Map.copyOf(all);
     }
