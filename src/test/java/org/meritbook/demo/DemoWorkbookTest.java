@@ -220,7 +220,7 @@ class DemoWorkbookTest {
 
     @Test
     void notebookHoldsTheCellsTheDemoShows() throws IOException {
-        // Only the calibration kind is implemented; planned analyses stay in plain text blocks.
+        // Every kind is a real cell; the range and the samples come after the limits they are bounded by.
         String notebook = Files.readString(NOTEBOOK, StandardCharsets.UTF_8);
         Matcher fence = Pattern.compile("(?m)^```(\\S*)\\s*$").matcher(notebook);
         List<String> infos = new ArrayList<>();
@@ -232,7 +232,8 @@ class DemoWorkbookTest {
             open = !open;
         }
         assertFalse(open, "unclosed fence");
-        assertEquals(List.of("calibration", "calibration", "range", "text", "text", "text", "unknowns"), infos);
+        assertEquals(List.of("calibration", "calibration", "detection-limit", "range", "detection-limit", "detection-limit",
+                "accuracy", "precision", "unknowns"), infos);
     }
 
     // --- helpers ---
