@@ -39,6 +39,10 @@ public enum ErrorKey {
     TOO_FEW_POINTS,
     ZERO_VARIANCE,
     NON_POSITIVE_WEIGHT_BASIS,
+    /** Values a statistic cannot take at all (non-finite, or beyond double precision's squares). */
+    UNUSABLE_VALUES,
     // outputs
-    OUTPUT_EXISTS
+    OUTPUT_EXISTS,
+    /** The output folder or file cannot be written where the user's environment puts it. */
+    OUTPUT_NOT_WRITABLE
 }
