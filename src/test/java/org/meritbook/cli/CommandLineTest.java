@@ -190,4 +190,26 @@ class CommandLineTest {
         Outcome bad = Cli.execute("frobnicate");
         assertEquals(2, bad.code());
     }
+
+    @Test
+    void aFileWhereTheOutputFolderShouldBeExitsTwoLocated() throws Exception {
+        workbook(null);
+        Path file = Files.writeString(dir.resolve("out"), "not a folder");
+        Outcome o = Cli.execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", file.toString());
+        assertEquals(Main.BAD_INPUT, o.code(), o.err());
+        assertTrue(o.err().contains(file.toAbsolutePath() + ": expected a folder to write the output set in"), o.err());
+        assertFalse(o.err().contains("\tat "), "no stack trace");
+    }
+
+    @Test
+    void runningOutOfMemoryIsOnePlainLineAndExitThreeNeverOne() {
+        java.io.StringWriter err = new java.io.StringWriter();
+        int code = Main.guarded(() -> {
+            throw new OutOfMemoryError("Java heap space");
+        }, new java.io.PrintWriter(err));
+        assertEquals(Main.INTERNAL_ERROR, code);
+        assertEquals(1, err.toString().strip().lines().count(), err.toString());
+        assertTrue(err.toString().startsWith("meritbook: out of memory (Java heap space)"), err.toString());
+        assertTrue(err.toString().contains("MERITBOOK_JAVA_OPTS=-Xmx4g"));
+    }
 }
