@@ -33,6 +33,7 @@ import org.meritbook.revision.RevisionEntry;
 import org.meritbook.revision.InputFile;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.FrontMatter;
+import org.meritbook.study.Status;
 
 /** Turns {@link StudyResults} into the {@link DossierView}: all wording of fixed texts and all formatting. */
 final class DossierModelBuilder {
@@ -99,7 +100,8 @@ final class DossierModelBuilder {
                 results.warnings());
         Cover cover = new Cover(fm.title(), orDash(fm.method()), orDash(fm.laboratory()),
                 String.valueOf(fm.revision()), date.display(), orDash(fm.preparedBy()), status(fm), summary.counts(),
-                fm.criteria() == null ? "none named" : fm.criteria(), documentId);
+                fm.criteria() == null ? "none named" : fm.criteria(), documentId,
+                signOff(fm, Status.REVIEWED, "reviewed"), signOff(fm, Status.APPROVED, "approved"));
         List<RevisionRow> revisions = new ArrayList<>();
         for (RevisionEntry e : earlier.earlier()) {
             revisions.add(new RevisionRow(String.valueOf(e.revision()), orDash(e.date()), orDash(e.reason()),
@@ -239,9 +241,20 @@ final class DossierModelBuilder {
         return rows.entrySet().stream().map(e -> new SoftwareRow(e.getKey(), e.getValue())).toList();
     }
 
+    /** The parser has refused any other status and a claimed sign-off without its keys. */
     private static String status(FrontMatter fm) {
-        Object s = fm.all() == null ? null : fm.all().get("status");
-        return s instanceof String text && !text.isBlank() ? text : "Draft: for review and approval";
+        return Status.of(fm).display();
+    }
+
+    /** The sign-off the status has reached, from its keys; an empty row before it. */
+    private static DossierView.SignOff signOff(FrontMatter fm, Status needed, String role) {
+        Status status = Status.of(fm);
+        if (status.ordinal() < needed.ordinal() || fm.all() == null) {
+            return DossierView.SignOff.NONE;
+        }
+        Object name = fm.all().get(role + "-by");
+        Object date = fm.all().get(role + "-on");
+        return new DossierView.SignOff(name == null ? "" : name.toString(), date == null ? "" : date.toString());
     }
 
     private static String orDash(String s) {
