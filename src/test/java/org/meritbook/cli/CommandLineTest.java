@@ -212,4 +212,28 @@ class CommandLineTest {
         assertTrue(err.toString().startsWith("meritbook: out of memory (Java heap space)"), err.toString());
         assertTrue(err.toString().contains("MERITBOOK_JAVA_OPTS=-Xmx4g"));
     }
+
+    @Test
+    void aPerfectFitExitsZeroAndItsWarningsReachTheSummaryAndTheCount() throws Exception {
+        Files.writeString(dir.resolve("runs.csv"), "Conc (mg/L),Area\n1,10\n2,20\n4,40\n8,80\n");
+        Path nb = Files.writeString(dir.resolve("study.md"), """
+                ---
+                title: Perfect
+                sources:
+                  runs: runs.csv
+                ---
+
+                ```calibration
+                data: runs!runs
+                x: Conc
+                y: Area
+                ```
+                """);
+        Outcome o = Cli.execute("run", nb.toString(), "-o", dir.resolve("out").toString());
+        assertEquals(0, o.code(), o.err());
+        String html = Files.readString(dir.resolve("out/study/rev1/study-rev1.html"));
+        // Perfect fit; lack of fit, Mandel, Shapiro–Wilk and the intercept's t test not evaluable.
+        assertTrue(html.contains("without a criterion; 5 warnings"), "the count includes the section's warnings");
+        assertTrue(html.contains("<li>calibration: Perfect fit"), "the summary lists the section's warning");
+    }
 }
