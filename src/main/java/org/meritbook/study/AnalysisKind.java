@@ -13,7 +13,7 @@ public enum AnalysisKind {
     CALIBRATION("calibration",
             List.of("data", "x", "y"),
             List.of("weighting", "model", "exclude", "id", "censored", "formulas", "hidden", "merged"),
-            List.of("n", "slope", "intercept", "slope_se", "intercept_se", "r", "r_squared", "residual_sd", "quadratic_coef", "quadratic_coef_se", "lack_of_fit_f", "lack_of_fit_p", "mandel_f", "mandel_p", "shapiro_w", "shapiro_p", "back_calculated", "deviation_percent")),
+            List.of("n", "slope", "intercept", "slope_se", "intercept_se", "intercept_t", "intercept_p", "r", "r_squared", "residual_sd", "quadratic_coef", "quadratic_coef_se", "lack_of_fit_f", "lack_of_fit_p", "mandel_f", "mandel_p", "shapiro_w", "shapiro_p", "back_calculated", "deviation_percent")),
     DETECTION_LIMIT("detection-limit",
             List.of("methods"),
             List.of("calibration", "blanks", "spikes", "low-samples", "sigma", "k", "alpha", "beta",

@@ -466,4 +466,16 @@ class CalibrationAnalysisTest {
                 + "residuals, because") && w.contains("5000")), s.warnings().toString());
         assertTrue(s.quantity("lack_of_fit_p").isPresent());
     }
+
+    @Test
+    void theInterceptsTTestMatchesRAndASignificantInterceptIsAWarning() {
+        // R 4.2.2, summary(lm(y ~ x))$coefficients[1, 3:4] on Miller & Miller's data:
+        //   x <- c(0,2,4,6,8,10,12); y <- c(2.1,5.0,9.0,12.6,17.3,21.0,24.7)
+        //   t = 5.14639493266463, p = 0.00362582929043381
+        SectionResult s = run("", block(text(X), text(Y)));
+        assertEquals(5.14639493266463, q(s, "intercept_t"), 1e-11);
+        assertEquals(0.00362582929043381, q(s, "intercept_p"), 1e-13);
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("The intercept differs significantly from zero")),
+                s.warnings().toString());
+    }
 }
