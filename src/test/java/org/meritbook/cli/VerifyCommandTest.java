@@ -141,7 +141,7 @@ class VerifyCommandTest {
         Files.copy(Path.of("demo-data", WORKBOOK), lab.resolve(WORKBOOK));
         Outcome o = Cli.execute("verify", dossier.toString(), "--against", lab.toString());
         assertEquals(0, o.code(), o.out() + o.err());
-        assertTrue(o.out().startsWith("meritbook: verified hmf-honey-validation-rev1.pdf: all 116 results of 2 sections "
+        assertTrue(o.out().startsWith("meritbook: verified hmf-honey-validation-rev1.pdf: all 120 results of 2 sections "
                 + "reproduced exactly from its attached inputs, and all 27 pages show what those inputs give."), o.out());
         assertTrue(o.out().contains("note: lab (" + WORKBOOK + "): " + lab.resolve(WORKBOOK)
                 + " is byte-identical to the copy the dossier carries"), o.out());
