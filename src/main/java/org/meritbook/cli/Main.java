@@ -32,7 +32,25 @@ public final class Main implements Runnable {
     }
 
     public static void main(String[] args) {
-        System.exit(commandLine().execute(args));
+        CommandLine cl = commandLine();
+        System.exit(guarded(() -> cl.execute(args), cl.getErr()));
+    }
+
+    /**
+     * Runs a command, turning running out of memory into one plain line and exit 3: never a raw
+     * trace, and never exit 1, which means acceptance failures. The memory a large workbook takes
+     * is the user's to give (README, the workbook budget).
+     */
+    static int guarded(java.util.function.IntSupplier command, PrintWriter err) {
+        try {
+            return command.getAsInt();
+        } catch (OutOfMemoryError e) {
+            err.println("meritbook: out of memory (" + (e.getMessage() == null ? "Java heap" : e.getMessage())
+                    + "): the workbooks and ranges read need more memory than Java was given. Give it more "
+                    + "(MERITBOOK_JAVA_OPTS=-Xmx4g) or read a smaller range.");
+            err.flush();
+            return INTERNAL_ERROR;
+        }
     }
 
     /** The configured command line; tests execute it in-process. */
@@ -44,6 +62,14 @@ public final class Main implements Runnable {
 
     private static int handle(Exception e, CommandLine cl, CommandLine.ParseResult parsed) {
         PrintWriter err = cl.getErr();
+        if (e instanceof java.io.UncheckedIOException io && io.getCause() instanceof java.nio.file.AccessDeniedException denied) {
+            // Any path the environment refuses, wherever it is met: the user's to fix, so exit 2.
+            err.println("meritbook: the input needs attention (1 problem):");
+            err.println("  " + denied.getFile() + ": expected a file or folder meritbook may read or write but found "
+                    + "no permission there. Change its permissions, or choose another location.");
+            err.flush();
+            return BAD_INPUT;
+        }
         if (e instanceof InputException input) {
             err.println("meritbook: the input needs attention (" + input.problems().size() + " problem"
                     + (input.problems().size() == 1 ? "" : "s") + "):");

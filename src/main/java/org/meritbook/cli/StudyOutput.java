@@ -18,6 +18,8 @@ import org.meritbook.pipeline.StudyFolder;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.revision.InputFile;
+import org.meritbook.study.Study;
+import org.meritbook.study.StudyParser;
 import org.meritbook.revision.PreviousRevisions;
 import org.meritbook.revision.ResultsJson;
 import org.meritbook.revision.RevisionContext;
@@ -36,7 +38,9 @@ final class StudyOutput {
      * runs of one study at the same time cannot both issue the same revision.
      */
     static int runAndWrite(Path notebook, OutputOptions options, PrintWriter out) {
-        StudyResults results = StudyRunner.withBuiltInAnalyses().run(notebook);
+        Study study = StudyParser.parse(notebook);
+        study.frontMatter().requireFilledIn(); // issuing a dossier: nothing left to fill in
+        StudyResults results = StudyRunner.withBuiltInAnalyses().run(study);
         String stem = baseName(notebook);
         StudyFolder folder = new StudyFolder(options.out.resolve(stem));
         StudyFolder.Published published;

@@ -33,6 +33,7 @@ import org.meritbook.revision.RevisionEntry;
 import org.meritbook.revision.InputFile;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.FrontMatter;
+import org.meritbook.study.Status;
 
 /** Turns {@link StudyResults} into the {@link DossierView}: all wording of fixed texts and all formatting. */
 final class DossierModelBuilder {
@@ -99,7 +100,8 @@ final class DossierModelBuilder {
                 results.warnings());
         Cover cover = new Cover(fm.title(), orDash(fm.method()), orDash(fm.laboratory()),
                 String.valueOf(fm.revision()), date.display(), orDash(fm.preparedBy()), status(fm), summary.counts(),
-                fm.criteria() == null ? "none named" : fm.criteria(), documentId);
+                fm.criteria() == null ? "none named" : fm.criteria(), documentId,
+                signOff(fm, Status.REVIEWED, "reviewed"), signOff(fm, Status.APPROVED, "approved"));
         List<RevisionRow> revisions = new ArrayList<>();
         for (RevisionEntry e : earlier.earlier()) {
             revisions.add(new RevisionRow(String.valueOf(e.revision()), orDash(e.date()), orDash(e.reason()),
@@ -110,14 +112,26 @@ final class DossierModelBuilder {
                         ? (fm.revision() == 1 ? "First issue" : "No reason stated in the notebook")
                         : fm.revisionReason(), orDash(fm.preparedBy())));
         Notes notes = new Notes(CAUTION,
-                "Acceptance criteria are defaults" + (fm.criteria() == null ? "" : " (profile " + fm.criteria() + ")")
-                        + " and must be confirmed locally before this dossier is relied on.",
+                criteriaNote(results.acceptance(), fm),
                 "Characters that the embedded fonts cannot draw appear in the PDF as their code point, e.g. "
                         + "[U+4E2D]; the HTML version and the attached notebook keep the original text.",
                 "Results are rounded for display only (rules in the meritbook documentation, docs/dossier.md); "
                         + "results.json, attached, holds every value at full precision.");
         return new DossierView(true, cover, revisions, changes(earlier), toc, summary, intro, sections, closing, trailGroups,
                 inputs(results, files), software(results), notes);
+    }
+
+    /** Only meritbook's built-in profiles are defaults; a lab's own file is the lab's criteria. */
+    static String criteriaNote(AcceptanceProfile profile, FrontMatter fm) {
+        if (profile == null) {
+            return "No acceptance profile is named, so no result is judged.";
+        }
+        if (!"built in".equals(profile.origin())) {
+            return "Acceptance criteria are the laboratory's own (profile file " + profile.origin()
+                    + ", attached); they are applied as written.";
+        }
+        return "Acceptance criteria are defaults (profile " + fm.criteria() + ")"
+                + " and must be confirmed locally before this dossier is relied on.";
     }
 
     private static Changes changes(RevisionContext earlier) {
@@ -209,9 +223,16 @@ final class DossierModelBuilder {
                 }
             }
         }
+        // Every section's warnings reach the summary and the count, not only the section (issue 6).
+        List<String> all = new ArrayList<>(warnings);
+        for (SectionResult r : results) {
+            String section = SectionViewBuilder.title(r);
+            r.warnings().forEach(w -> all.add(section + ": " + w));
+        }
         String counts = pass + " passed, " + fail + " failed, " + na + " not evaluable; " + none
-                + (none == 1 ? " result" : " results") + " without a criterion";
-        return new Summary(number, rows, counts, profile, warnings);
+                + (none == 1 ? " result" : " results") + " without a criterion; " + all.size()
+                + (all.size() == 1 ? " warning" : " warnings");
+        return new Summary(number, rows, counts, profile, all);
     }
 
     private List<InputRow> inputs(StudyResults results, List<PdfAFinisher.Embedded> files) {
@@ -239,9 +260,20 @@ final class DossierModelBuilder {
         return rows.entrySet().stream().map(e -> new SoftwareRow(e.getKey(), e.getValue())).toList();
     }
 
+    /** The parser has refused any other status and a claimed sign-off without its keys. */
     private static String status(FrontMatter fm) {
-        Object s = fm.all() == null ? null : fm.all().get("status");
-        return s instanceof String text && !text.isBlank() ? text : "Draft: for review and approval";
+        return Status.of(fm).display();
+    }
+
+    /** The sign-off the status has reached, from its keys; an empty row before it. */
+    private static DossierView.SignOff signOff(FrontMatter fm, Status needed, String role) {
+        Status status = Status.of(fm);
+        if (status.ordinal() < needed.ordinal() || fm.all() == null) {
+            return DossierView.SignOff.NONE;
+        }
+        Object name = fm.all().get(role + "-by");
+        Object date = fm.all().get(role + "-on");
+        return new DossierView.SignOff(name == null ? "" : name.toString(), date == null ? "" : date.toString());
     }
 
     private static String orDash(String s) {

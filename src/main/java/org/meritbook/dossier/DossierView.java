@@ -61,8 +61,24 @@ public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions,
     }
 
     /** Cover page and running header fields. */
+    /**
+     * A review or an approval as the front matter records it ({@code reviewed-by}, {@code reviewed-on});
+     * empty on the cover when the document does not carry it.
+     */
+    public record SignOff(String name, String date) {
+        public static final SignOff NONE = new SignOff("", "");
+    }
+
     public record Cover(String title, String method, String laboratory, String revision, String date,
-                        String preparedBy, String status, String outcome, String criteria, String documentId) {
+                        String preparedBy, String status, String outcome, String criteria, String documentId,
+                        SignOff reviewed, SignOff approved) {
+        /** A cover without sign-offs beyond preparation. */
+        public Cover(String title, String method, String laboratory, String revision, String date, String preparedBy,
+                     String status, String outcome, String criteria, String documentId) {
+            this(title, method, laboratory, revision, date, preparedBy, status, outcome, criteria, documentId,
+                    SignOff.NONE, SignOff.NONE);
+        }
+
         /** The first 16 hex digits of the document ID, for the running footer. */
         public String shortId() {
             return documentId.length() > 16 ? documentId.substring(0, 16) : documentId;

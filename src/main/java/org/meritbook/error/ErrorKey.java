@@ -35,7 +35,7 @@ public enum ErrorKey {
     MALFORMED_SHEET,
     WORKBOOK_TOO_LARGE,
     BAD_CELL_ADDRESS,
-    /** a used row without its level or group label */
+    /** A used row whose grouping label (level, group, sample) is empty. */
     MISSING_LABEL,
     // data that cannot support a method
     TOO_FEW_POINTS,
@@ -43,8 +43,10 @@ public enum ErrorKey {
     NON_POSITIVE_WEIGHT_BASIS,
     /** A known (nominal, added) value of 0: a recovery relative to it is undefined. */
     ZERO_KNOWN_VALUE,
-    /** A used row whose grouping label (level, group, sample) is empty. */
-    BLANK_LABEL,
+    /** Values a statistic cannot take at all (non-finite, or beyond double precision's squares). */
+    UNUSABLE_VALUES,
     // outputs
-    OUTPUT_EXISTS
+    OUTPUT_EXISTS,
+    /** The output folder or file cannot be written where the user's environment puts it. */
+    OUTPUT_NOT_WRITABLE
 }

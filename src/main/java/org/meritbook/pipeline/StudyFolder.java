@@ -91,7 +91,7 @@ public final class StudyFolder {
             closeQuietly(channel, e);
             local.unlock();
             if (e instanceof IOException io) {
-                throw new UncheckedIOException("cannot lock the output folder " + folder, io);
+                throw OutputProblem.of(folder, io);
             }
             throw (RuntimeException) e;
         }
@@ -187,6 +187,14 @@ public final class StudyFolder {
         public Published publish(int revision, Map<String, byte[]> files, boolean force) {
             Path target = revision(revision);
             List<Path> paths = files.keySet().stream().map(target::resolve).toList();
+            if (Files.isRegularFile(target)) {
+                throw OutputProblem.of(target, new java.nio.file.NotDirectoryException(target.toString()));
+            }
+            for (Path p : paths) {
+                if (Files.isDirectory(p)) { // even under --force: never delete a folder the user put there
+                    throw OutputProblem.folderInTheWay(p);
+                }
+            }
             boolean exists = Files.exists(target);
             if (exists) {
                 List<Problem> differing = differences(target, files);
@@ -223,7 +231,7 @@ public final class StudyFolder {
                 }
             } catch (IOException e) {
                 Folders.deleteTree(staged);
-                throw new UncheckedIOException("cannot write the output set into " + staged, e);
+                throw OutputProblem.of(folder, e);
             }
             return staged;
         }
@@ -288,7 +296,7 @@ public final class StudyFolder {
         try {
             Files.move(from, to, StandardCopyOption.ATOMIC_MOVE);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot move " + from + " to " + to, e);
+            throw OutputProblem.of(to.getParent(), e);
         }
     }
 

@@ -16,6 +16,10 @@ public class UnusableDataException extends IllegalArgumentException {
     public enum Reason {
         /** Fewer values (or groups, or degrees of freedom) than the method needs. */
         TOO_FEW_VALUES,
+        /** More values than the method's published coefficients cover (Shapiro–Wilk beyond 5,000). */
+        TOO_MANY_VALUES,
+        /** Magnitudes whose squares or products leave double precision (beyond about 1e±150). */
+        OUT_OF_RANGE,
         /** A value is NaN or infinite. */
         NOT_FINITE,
         /** The values (or the replicates within every group) are all equal, so a spread is zero. */

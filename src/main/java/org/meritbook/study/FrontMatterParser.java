@@ -6,10 +6,12 @@ import java.time.DateTimeException;
 import java.time.LocalDate;
 import java.util.Collections;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.regex.Pattern;
 import org.meritbook.error.ErrorKey;
+import org.meritbook.error.Problem;
 import org.yaml.snakeyaml.nodes.MappingNode;
 import org.yaml.snakeyaml.nodes.Node;
 import org.yaml.snakeyaml.nodes.ScalarNode;
@@ -24,6 +26,14 @@ final class FrontMatterParser {
     private static final Pattern ISO_DATE = Pattern.compile("[0-9]{4}-[0-9]{2}-[0-9]{2}");
     /** Aliases appear before the first '!' of a data reference, so they are kept to simple words. */
     static final Pattern ALIAS = Pattern.compile("[A-Za-z0-9_][A-Za-z0-9_.-]*");
+    /** Every front-matter key meritbook reads; a lab's own keys start with {@code x-}. */
+    static final List<String> KEYS = List.of("title", "method", "laboratory", "revision", "revision-reason",
+            "prepared-by", "date", "criteria", "sources", "status", "reviewed-by", "reviewed-on", "approved-by",
+            "approved-on");
+    /** A lab's own key, kept in results.json and never read. */
+    static final String OWN_KEY_PREFIX = "x-";
+    /** What {@code meritbook new} leaves to fill in: {@code <analyte>}, {@code <method id>}. */
+    private static final Pattern PLACEHOLDER = Pattern.compile("<[^<>\\n]{1,60}>");
 
     /**
      * @param frontMatter the typed front matter (null when the title or the whole block is unusable)
@@ -77,6 +87,8 @@ final class FrontMatterParser {
     }
 
     private FrontMatter frontMatter(YamlSnippet yaml, Map<String, YamlSnippet.Entry> entries) {
+        unknownKeys(entries);
+        Status.check(entries, this::scalar, problems);
         Map<String, Object> all = new LinkedHashMap<>();
         entries.values().forEach(e -> all.put(e.name(), yaml.toPlain(e.value())));
         String title = scalar(entries, "title");
@@ -88,7 +100,35 @@ final class FrontMatterParser {
         }
         return new FrontMatter(title, scalar(entries, "method"), scalar(entries, "laboratory"),
                 revision(entries), scalar(entries, "revision-reason"), scalar(entries, "prepared-by"),
-                date(entries), scalar(entries, "criteria"), Collections.unmodifiableMap(all));
+                date(entries), scalar(entries, "criteria"), Collections.unmodifiableMap(all), placeholders(entries));
+    }
+
+    /** A misspelt key would be kept and never read, so its value silently goes missing from the dossier. */
+    private void unknownKeys(Map<String, YamlSnippet.Entry> entries) {
+        for (YamlSnippet.Entry e : entries.values()) {
+            if (!KEYS.contains(e.name()) && !e.name().startsWith(OWN_KEY_PREFIX)) {
+                problems.add(ErrorKey.FRONT_MATTER, e.line(), "a front-matter key meritbook reads (" + String.join(", ", KEYS)
+                        + "), or a lab's own key starting with '" + OWN_KEY_PREFIX + "'",
+                        Problems.quote(e.name()) + Suggestion.hint(e.name(), KEYS),
+                        "Correct the key, or rename it '" + OWN_KEY_PREFIX + e.name() + "' to keep it as the lab's own.");
+            }
+        }
+    }
+
+    /** A dossier is never issued with the starter notebook's blanks still in it; a preview may show them. */
+    private List<Problem> placeholders(Map<String, YamlSnippet.Entry> entries) {
+        List<Problem> out = new java.util.ArrayList<>();
+        for (YamlSnippet.Entry e : entries.values()) {
+            if (e.value() instanceof ScalarNode s) {
+                java.util.regex.Matcher m = PLACEHOLDER.matcher(s.getValue());
+                if (m.find()) {
+                    out.add(new Problem(ErrorKey.FRONT_MATTER, problems.where(e.line()), "the study's own value for '" + e.name() + "'",
+                            "the placeholder " + Problems.quote(m.group()) + " left by 'meritbook new'",
+                            "Replace " + m.group() + " with the real value before issuing the dossier."));
+                }
+            }
+        }
+        return out;
     }
 
     /** A typed text key: null when absent or empty, reported when it is a list or a map. */

@@ -21,5 +21,9 @@ public record Step(String id, String label, String formula, List<StepInput> inpu
         Objects.requireNonNull(label, "label");
         Objects.requireNonNull(formula, "formula");
         inputs = List.copyOf(inputs);
+        if (!Double.isFinite(value)) {
+            // As for a quantity: an ∞ or NaN never reaches a trail; the analysis says "not evaluable" instead.
+            throw new IllegalArgumentException("step " + id + " is not finite: " + value);
+        }
     }
 }

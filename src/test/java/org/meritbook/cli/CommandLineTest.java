@@ -190,4 +190,50 @@ class CommandLineTest {
         Outcome bad = Cli.execute("frobnicate");
         assertEquals(2, bad.code());
     }
+
+    @Test
+    void aFileWhereTheOutputFolderShouldBeExitsTwoLocated() throws Exception {
+        workbook(null);
+        Path file = Files.writeString(dir.resolve("out"), "not a folder");
+        Outcome o = Cli.execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", file.toString());
+        assertEquals(Main.BAD_INPUT, o.code(), o.err());
+        assertTrue(o.err().contains(file.toAbsolutePath() + ": expected a folder to write the output set in"), o.err());
+        assertFalse(o.err().contains("\tat "), "no stack trace");
+    }
+
+    @Test
+    void runningOutOfMemoryIsOnePlainLineAndExitThreeNeverOne() {
+        java.io.StringWriter err = new java.io.StringWriter();
+        int code = Main.guarded(() -> {
+            throw new OutOfMemoryError("Java heap space");
+        }, new java.io.PrintWriter(err));
+        assertEquals(Main.INTERNAL_ERROR, code);
+        assertEquals(1, err.toString().strip().lines().count(), err.toString());
+        assertTrue(err.toString().startsWith("meritbook: out of memory (Java heap space)"), err.toString());
+        assertTrue(err.toString().contains("MERITBOOK_JAVA_OPTS=-Xmx4g"));
+    }
+
+    @Test
+    void aPerfectFitExitsZeroAndItsWarningsReachTheSummaryAndTheCount() throws Exception {
+        Files.writeString(dir.resolve("runs.csv"), "Conc (mg/L),Area\n1,10\n2,20\n4,40\n8,80\n");
+        Path nb = Files.writeString(dir.resolve("study.md"), """
+                ---
+                title: Perfect
+                sources:
+                  runs: runs.csv
+                ---
+
+                ```calibration
+                data: runs!runs
+                x: Conc
+                y: Area
+                ```
+                """);
+        Outcome o = Cli.execute("run", nb.toString(), "-o", dir.resolve("out").toString());
+        assertEquals(0, o.code(), o.err());
+        String html = Files.readString(dir.resolve("out/study/rev1/study-rev1.html"));
+        // Perfect fit; lack of fit, Mandel, Shapiro–Wilk and the intercept's t test not evaluable.
+        assertTrue(html.contains("without a criterion; 5 warnings"), "the count includes the section's warnings");
+        assertTrue(html.contains("<li>calibration: Perfect fit"), "the summary lists the section's warning");
+    }
 }

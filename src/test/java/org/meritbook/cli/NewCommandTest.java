@@ -37,9 +37,19 @@ class NewCommandTest {
         assertEquals("lab!Calibration!A8:F31", cell.options().get("data").text());
         assertEquals("Nominal", cell.options().get("x").text(), "x guessed from the header");
         assertEquals("Peak area", cell.options().get("y").text(), "y guessed from the header");
-        assertEquals(0, execute("run", notebook.toString(), "-o", dir.resolve("out").toString()), "runs as written");
+        Cli.Outcome unfilled = Cli.execute("run", notebook.toString(), "-o", dir.resolve("out").toString());
+        assertEquals(2, unfilled.code(), "no dossier with the starter's placeholders in it");
+        assertTrue(unfilled.err().contains("runs.md line 3: expected the study's own value for 'method' but found the "
+                + "placeholder '<method id>' left by 'meritbook new'"), unfilled.err());
+        Files.writeString(notebook, filledIn(text));
+        assertEquals(0, execute("run", notebook.toString(), "-o", dir.resolve("out").toString()), "runs once filled in");
 
         assertEquals(2, execute("new", workbook.toString()), "an existing notebook is never overwritten");
+    }
+
+    /** The starter with its front-matter placeholders filled in, as the analyst would. */
+    private static String filledIn(String starter) {
+        return starter.replaceAll("<[^<>\n]+>", "filled in");
     }
 
     private Path demoWith(String edit, String replacement) throws Exception {
@@ -73,7 +83,8 @@ class NewCommandTest {
         Path workbook = demoWith("<f>$B$6/2</f><v>10.0</v>", "<f>$B$6/2</f><v></v>");
         assertEquals(0, execute("new", workbook.toString()));
         Path notebook = dir.resolve("runs.md");
-        String text = Files.readString(notebook);
+        String text = filledIn(Files.readString(notebook));
+        Files.writeString(notebook, text);
         assertTrue(text.contains("data: lab!Calibration!A8:F31\n# formulas: evaluate "), text);
         Path out = dir.resolve("out");
         assertEquals(2, execute("run", notebook.toString(), "-o", out.toString()), "the choice is not made for the analyst");

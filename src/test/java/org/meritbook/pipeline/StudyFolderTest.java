@@ -158,4 +158,55 @@ class StudyFolderTest {
         }
         return PosixFilePermissions.fromString(s.toString());
     }
+
+    // Issue 6: the user's environment is a located error (exit 2) with a fix, never an internal error.
+
+    @Test
+    void aFileWhereTheOutputFolderShouldBeIsALocatedError() throws IOException {
+        Path file = Files.writeString(out.resolve("results"), "a note the user keeps here");
+        InputException e = assertThrows(InputException.class,
+                () -> publish(new StudyFolder(file.resolve("s")), 1, set("a"), false));
+        assertEquals(ErrorKey.OUTPUT_NOT_WRITABLE, e.key());
+        assertEquals(file.toAbsolutePath().toString(), e.problems().get(0).where());
+        assertTrue(e.getMessage().contains("-o DIR"), e.getMessage());
+        assertEquals("a note the user keeps here", Files.readString(file));
+    }
+
+    @Test
+    void aFolderWhereTheDossierShouldBeIsALocatedErrorEvenUnderForce() throws IOException {
+        StudyFolder folder = new StudyFolder(out.resolve("s"));
+        Path inTheWay = Files.createDirectories(folder.revision(1).resolve("s-rev1.pdf"));
+        Files.writeString(inTheWay.resolve("keep.txt"), "mine");
+        for (boolean force : new boolean[] {false, true}) {
+            InputException e = assertThrows(InputException.class, () -> publish(folder, 1, set("a"), force));
+            assertEquals(ErrorKey.OUTPUT_NOT_WRITABLE, e.key());
+            assertEquals(inTheWay.toString(), e.problems().get(0).where());
+        }
+        assertEquals("mine", Files.readString(inTheWay.resolve("keep.txt")), "the user's folder is never removed");
+    }
+
+    @Test
+    void aRefusedWriteIsALocatedErrorWithAFix() {
+        // Tests may run as root, for whom a read-only folder is writable: the refusal is given directly.
+        Path folder = out.resolve("readonly");
+        InputException e = OutputProblem.of(folder, new java.nio.file.AccessDeniedException(folder.toString()));
+        assertEquals(ErrorKey.OUTPUT_NOT_WRITABLE, e.key());
+        assertEquals(folder.toString(), e.problems().get(0).where());
+        assertTrue(e.getMessage().contains("no permission to write there"), e.getMessage());
+        assertTrue(e.getMessage().contains("Make the folder writable, or choose another output folder with -o DIR."));
+    }
+
+    @Test
+    void aReadOnlyFolderIsALocatedErrorWhenTheSystemEnforcesIt() throws IOException {
+        Path folder = Files.createDirectory(out.resolve("locked"));
+        Files.setPosixFilePermissions(folder, PosixFilePermissions.fromString("r-xr-xr-x"));
+        try {
+            org.junit.jupiter.api.Assumptions.assumeFalse(Files.isWritable(folder), "running as root");
+            InputException e = assertThrows(InputException.class,
+                    () -> publish(new StudyFolder(folder.resolve("s")), 1, set("a"), false));
+            assertEquals(ErrorKey.OUTPUT_NOT_WRITABLE, e.key());
+        } finally {
+            Files.setPosixFilePermissions(folder, PosixFilePermissions.fromString("rwxr-xr-x"));
+        }
+    }
 }

@@ -447,4 +447,53 @@ class StudyParserErrorsTest {
     private static int line(Problem p) {
         return Integer.parseInt(p.where().substring(p.where().lastIndexOf(' ') + 1));
     }
+
+    // Issue 6: the front matter never silently drops or overstates what the dossier says.
+
+    private static String front(String keys) {
+        return "---\ntitle: T\n" + keys + "---\n\nText.\n";
+    }
+
+    @Test
+    void anUnknownFrontMatterKeyIsALocatedErrorWithDidYouMean() {
+        Problem p = only(front("prepard-by: A. Analyst\n"));
+        assertProblem(ErrorKey.FRONT_MATTER, "study.md line 3", p);
+        assertTrue(p.found().contains("(did you mean 'prepared-by'?)"), p.message());
+        assertTrue(p.fix().contains("'x-prepard-by'"), p.message());
+    }
+
+    @Test
+    void aLabsOwnKeyStartsWithX() {
+        Study study = StudyParser.parse(front("x-instrument: IC-3\n"), FILE);
+        assertEquals("IC-3", study.frontMatter().all().get("x-instrument"));
+    }
+
+    @Test
+    void placeholdersLeftByNewBlockTheDossier() {
+        FrontMatter fm = StudyParser.parse(front("method: <method id>\nlaboratory: Lab of <analyte> tests\n"), FILE)
+                .frontMatter();
+        List<Problem> found = assertThrows(InputException.class, fm::requireFilledIn).problems();
+        assertEquals(2, found.size(), found::toString);
+        assertProblem(ErrorKey.FRONT_MATTER, "study.md line 3", found.get(0));
+        assertTrue(found.get(0).found().contains("'<method id>'"), found.get(0).message());
+        assertTrue(found.get(1).found().contains("'<analyte>'"), found.get(1).message());
+    }
+
+    @Test
+    void theStatusIsOneOfAFixedSet() {
+        Problem p = only(front("status: Aproved\n"));
+        assertProblem(ErrorKey.FRONT_MATTER, "study.md line 3", p);
+        assertTrue(p.found().contains("did you mean 'approved'"), p.message());
+    }
+
+    @Test
+    void anApprovalNeedsTheSignOffsItClaims() {
+        List<Problem> found = problems(front("status: approved\nreviewed-by: C. Checker\n"));
+        assertEquals(List.of("'reviewed-on:' for status: approved", "'approved-by:' for status: approved",
+                "'approved-on:' for status: approved"), found.stream().map(Problem::expected).toList());
+        Study ok = StudyParser.parse(front("status: approved\nreviewed-by: C. Checker\nreviewed-on: 2025-03-01\n"
+                + "approved-by: D. Head\napproved-on: 2025-03-04\n"), FILE);
+        assertEquals(Status.APPROVED, Status.of(ok.frontMatter()));
+        assertEquals(Status.DRAFT, Status.of(StudyParser.parse(front(""), FILE).frontMatter()));
+    }
 }

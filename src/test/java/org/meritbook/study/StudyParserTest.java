@@ -25,7 +25,7 @@ class StudyParserTest {
         prepared-by: B. Chemist
         date: 2025-02-28
         criteria: trace-water          # acceptance profile
-        reviewers: [C. Checker, D. Doublecheck]
+        x-reviewers: [C. Checker, D. Doublecheck]
         sources:
           runs: data/fluoride-runs.xlsx
           blanks: blank-log.xlsx
@@ -101,8 +101,8 @@ class StudyParserTest {
         assertEquals("2025-02-28", fm.date());
         assertEquals("trace-water", fm.criteria());
         assertEquals(List.of("title", "method", "laboratory", "revision", "revision-reason", "prepared-by", "date",
-                "criteria", "reviewers", "sources"), List.copyOf(fm.all().keySet()));
-        assertEquals(List.of("C. Checker", "D. Doublecheck"), fm.all().get("reviewers"));
+                "criteria", "x-reviewers", "sources"), List.copyOf(fm.all().keySet()));
+        assertEquals(List.of("C. Checker", "D. Doublecheck"), fm.all().get("x-reviewers"));
         assertEquals(Map.of("runs", "data/fluoride-runs.xlsx", "blanks", "blank-log.xlsx"), fm.all().get("sources"));
     }
 

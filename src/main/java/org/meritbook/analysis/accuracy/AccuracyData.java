@@ -83,7 +83,7 @@ record AccuracyData(List<AccuracyRow> rows, List<String> levels, RecoveryMode mo
             }
             if (r.used() && levelAt >= 0 && level.isEmpty()) {
                 CellValue l = r.cell(levelAt);
-                problems.add(new Problem(ErrorKey.BLANK_LABEL, where(read, l),
+                problems.add(new Problem(ErrorKey.MISSING_LABEL, where(read, l),
                         "a level label in column '" + read.columns().get(levelAt).header() + "'", "an empty cell",
                         "Enter the level, or exclude the row in the notebook with a reason."));
             }

@@ -5,8 +5,10 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.Attempt;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.error.ErrorKey;
@@ -46,13 +48,18 @@ public final class CalibrationAnalysis implements Analysis {
         CalibrationCurve curve;
         BackCalculation.Inversion inversion;
         LinearityChecks checks = new LinearityChecks(section, data);
+        String where = context.where(cell.lineOf("data"));
+        String fix = "Check the responses in column '" + data.yColumn().header() + "' and the concentrations in '"
+                + data.xColumn().header() + "', or exclude the point that cannot be used with a reason.";
         if (options.model() == CalibrationModel.QUADRATIC) {
-            QuadraticFit fit = LeastSquares.fitQuadratic(x, y, weighting);
+            QuadraticFit fit = Attempt.required(where, "calibration data a quadratic can be fitted to", fix,
+                    () -> LeastSquares.fitQuadratic(x, y, weighting));
             inversion = new QuadraticTrail(section, data, fit).record();
             curve = CalibrationCurve.of(fit, min(x), max(x));
             checks.record(fit);
         } else {
-            LineFit fit = LeastSquares.fitLine(x, y, weighting, options.model().lineModel());
+            LineFit fit = Attempt.required(where, "calibration data a straight line can be fitted to", fix,
+                    () -> LeastSquares.fitLine(x, y, weighting, options.model().lineModel()));
             inversion = new LineTrail(section, data, fit).record();
             curve = CalibrationCurve.of(fit);
             checks.record(fit);
@@ -147,11 +154,18 @@ public final class CalibrationAnalysis implements Analysis {
                         + ("x".equals(w.basis()) ? "concentration" : "response") + " is zero or negative.");
                 continue;
             }
-            CalibrationCurve curve = fit(options.model(), x, y, w);
+            Optional<CalibrationCurve> curve = Attempt.optional(section, "weighting " + w.notation() + " in the auto "
+                    + "comparison", () -> fit(options.model(), x, y, w));
+            if (curve.isEmpty()) {
+                continue;
+            }
             double sum = 0;
             try {
                 for (int i = 0; i < x.length; i++) {
-                    sum += Math.abs((curve.inverse(y[i]) - x[i]) / x[i] * 100.0);
+                    // A blank (x = 0) has no relative deviation; the comparison is over the other standards.
+                    if (x[i] != 0) {
+                        sum += Math.abs((curve.get().inverse(y[i]) - x[i]) / x[i] * 100.0);
+                    }
                 }
             } catch (IllegalArgumentException e) {
                 section.warning("Weighting " + w.notation() + " was not chosen by auto: " + e.getMessage());
@@ -159,12 +173,15 @@ public final class CalibrationAnalysis implements Analysis {
             }
             sums.put(w, sum);
         }
+        if (sums.isEmpty()) {
+            return Weighting.NONE; // the fit itself then reports, located, why no line can be fitted
+        }
         Weighting best = sums.entrySet().stream().min(Map.Entry.comparingByValue()).orElseThrow().getKey();
         List<StepInput> inputs = new ArrayList<>();
         sums.forEach((w, s) -> inputs.add(StepInput.number("Σ|%dev| with " + w.notation(), s, "%",
                 "fit with weighting " + w.notation())));
         section.step("weighting_choice", "Weighting chosen by auto: " + best.notation(),
-                "choose w minimising Σ|(x̂ᵢ − xᵢ)/xᵢ| × 100 over the standards", inputs, sums.get(best), "%", null);
+                "choose w minimising Σ|(x̂ᵢ − xᵢ)/xᵢ| × 100 over the standards with xᵢ ≠ 0", inputs, sums.get(best), "%", null);
         return best;
     }
 

@@ -3,6 +3,7 @@ package org.meritbook.analysis.calibration;
 import java.util.List;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
+import org.meritbook.stats.distributions.StudentT;
 import org.meritbook.stats.regression.LineFit;
 import org.meritbook.stats.regression.LineModel;
 import org.meritbook.trail.StepInput;
@@ -80,6 +81,7 @@ final class LineTrail {
             section.step("intercept_ci_half_width", "Half-width of the 95 % confidence interval of the intercept",
                     "Δa = t · s(a); interval a ± Δa", List.of(section.ref("t", t), section.ref("s(a)", interceptSe)),
                     fit.tQuantile(CalibrationAnalysis.LEVEL) * fit.interceptSe(), yUnit, null);
+            interceptTest(intercept, interceptSe);
             section.quantity(QuantityDraft.of("r", "Correlation coefficient r",
                     "r = Σwᵢ(xᵢ − x̄w)(yᵢ − ȳw) / √(Sxx · Σwᵢ(yᵢ − ȳw)²)",
                     List.of(from("x, y, w", points), section.ref("Sxx", sxx)), fit.r(), null));
@@ -91,6 +93,32 @@ final class LineTrail {
         List<StepInput> coefficients = intercept == null ? List.of(section.ref("b", slope))
                 : List.of(section.ref("a", intercept), section.ref("b", slope));
         return new BackCalculation.Inversion(intercept == null ? "x̂ = y / b" : "x̂ = (y − a) / b", coefficients);
+    }
+
+    /**
+     * Whether the intercept differs from zero: t = a / s(a) with n − 2 degrees of freedom, two-sided
+     * (Miller &amp; Miller, Statistics and Chemometrics for Analytical Chemistry, ch. 5, from memory). A
+     * significant intercept is a warning: a blank signal or a curved low end, for the analyst to explain.
+     */
+    private void interceptTest(String intercept, String interceptSe) {
+        if (!(fit.interceptSe() > 0)) {
+            section.warning("Not evaluable: the t test of the intercept, because its standard error is 0 (a perfect fit).");
+            return;
+        }
+        double t = fit.intercept() / fit.interceptSe();
+        String tId = section.quantity(QuantityDraft.of("intercept_t", "t statistic of the intercept against 0",
+                "t = a / s(a)", List.of(section.ref("a", intercept), section.ref("s(a)", interceptSe)), t, null));
+        double p = new StudentT(fit.degreesOfFreedom()).twoSidedP(t);
+        section.quantity(QuantityDraft.of("intercept_p", "Intercept p-value (two-sided, against 0)",
+                "p = 2·P(T(n − 2) > |t|)", List.of(section.ref("t", tId)), p, null)
+                .withMethod("t test of the intercept; Miller & Miller, Statistics and Chemometrics for Analytical "
+                        + "Chemistry, ch. 5 (from memory)"));
+        if (p < LinearityChecks.ALPHA) {
+            section.warning(String.format(java.util.Locale.ROOT,
+                    "The intercept differs significantly from zero (t = %.3g, p = %.3g < %.2f): a blank response or "
+                            + "curvature at the low end; check the blank and the lowest standards before using a "
+                            + "line through the origin or a single-point calibration.", t, p, LinearityChecks.ALPHA));
+        }
     }
 
     /** A reference to the data set listed in a step (not a single number). */

@@ -2,6 +2,7 @@ package org.meritbook.analysis.calibration;
 
 import java.util.List;
 import java.util.Optional;
+import org.meritbook.analysis.Attempt;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.regression.LackOfFit;
@@ -27,6 +28,8 @@ final class LinearityChecks {
     private final SectionBuilder section;
     private final CalibrationData data;
     private final String points;
+    /** Residuals at rounding level: the tests that need residual scatter are not evaluable. */
+    private boolean perfect;
 
     LinearityChecks(SectionBuilder section, CalibrationData data) {
         this.section = section;
@@ -36,6 +39,7 @@ final class LinearityChecks {
 
     /** For a straight-line calibration. */
     void record(LineFit line) {
+        perfect = PerfectFit.check(section, line.residualSd(), line.y(), data.yUnit());
         int parameters = line.model() == LineModel.THROUGH_ORIGIN ? 1 : 2;
         lackOfFit(line.x(), line.y(), line.weights(), line.fitted(), parameters);
         if (line.model() == LineModel.WITH_INTERCEPT) {
@@ -46,12 +50,18 @@ final class LinearityChecks {
 
     /** For a quadratic calibration. */
     void record(QuadraticFit quadratic) {
+        perfect = PerfectFit.check(section, quadratic.residualSd(), quadratic.y(), data.yUnit());
         lackOfFit(quadratic.x(), quadratic.y(), quadratic.weights(), quadratic.fitted(), 3);
         mandel(quadratic.weighting(), null, quadratic);
         normality(quadratic.standardizedResiduals());
     }
 
     private void lackOfFit(double[] x, double[] y, double[] w, double[] fitted, int parameters) {
+        if (perfect) {
+            section.warning("Not evaluable: the lack-of-fit F test, because the residuals are at rounding level "
+                    + "(a perfect fit), so there is no residual variance to compare with pure error.");
+            return;
+        }
         Optional<LackOfFit> test = LackOfFit.of(x, y, w, fitted, parameters);
         if (test.isEmpty()) {
             section.warning("Not evaluable: the lack-of-fit F test needs replicated concentration levels whose "
@@ -84,16 +94,14 @@ final class LinearityChecks {
             section.warning("Not evaluable: Mandel's test needs at least 4 points at 3 or more concentration levels.");
             return;
         }
-        LineFit lin = line != null ? line : LeastSquares.fitLine(x, y, weighting, LineModel.WITH_INTERCEPT);
-        QuadraticFit quad = quadratic != null ? quadratic : LeastSquares.fitQuadratic(x, y, weighting);
-        MandelTest t;
-        try {
-            t = MandelTest.of(lin, quad);
-        } catch (IllegalArgumentException e) {
-            // e.g. the quadratic fits to rounding level, so F would be a ratio of rounding errors
-            section.warning("Not evaluable: Mandel's test, because " + e.getMessage());
+        // e.g. the quadratic fits to rounding level, so F would be a ratio of rounding errors
+        Optional<MandelTest> test = Attempt.optional(section, "Mandel's test", () -> MandelTest.of(
+                line != null ? line : LeastSquares.fitLine(x, y, weighting, LineModel.WITH_INTERCEPT),
+                quadratic != null ? quadratic : LeastSquares.fitQuadratic(x, y, weighting)));
+        if (test.isEmpty()) {
             return;
         }
+        MandelTest t = test.get();
         String f = section.quantity(QuantityDraft.of("mandel_f", "Mandel's fitting test F statistic",
                 "F = (SS_res,linear − SS_res,quadratic) / s²(y/x),quadratic",
                 List.of(StepInput.number("SS_res,linear", t.ssResidualLinear(), null, "straight-line fit, same weights"),
@@ -115,11 +123,17 @@ final class LinearityChecks {
     }
 
     private void normality(double[] standardizedResiduals) {
-        if (standardizedResiduals.length < 3) {
-            section.warning("Not evaluable: the Shapiro–Wilk test needs at least 3 residuals.");
+        if (perfect) {
+            section.warning("Not evaluable: the Shapiro–Wilk test of the residuals, because the residuals are at "
+                    + "rounding level (a perfect fit), so their pattern is numerical noise.");
             return;
         }
-        ShapiroWilk t = ShapiroWilk.test(standardizedResiduals);
+        Optional<ShapiroWilk> test = Attempt.optional(section, "the Shapiro–Wilk test of the residuals",
+                () -> ShapiroWilk.test(standardizedResiduals));
+        if (test.isEmpty()) {
+            return;
+        }
+        ShapiroWilk t = test.get();
         String w = section.quantity(QuantityDraft.of("shapiro_w", "Shapiro–Wilk W of the standardized residuals",
                 "W = (Σaᵢ·z₍ᵢ₎)² / Σ(zᵢ − z̄)², z = standardized residuals, a from Royston's approximation",
                 List.of(StepInput.text("z", "standardized residuals of the fit", points)), t.w(), null)

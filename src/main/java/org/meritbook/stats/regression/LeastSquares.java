@@ -1,6 +1,7 @@
 package org.meritbook.stats.regression;
 
 import java.util.Objects;
+import org.meritbook.stats.UnusableDataException;
 
 /**
  * Least squares for calibration: the straight line, unweighted or weighted, with or without intercept
@@ -28,6 +29,8 @@ import java.util.Objects;
  * 14.5 on NoInt1/NoInt2 (see the tests).
  */
 public final class LeastSquares {
+    /** Largest magnitude whose square, times a few hundred thousand points, stays finite. */
+    private static final double MAGNITUDE_LIMIT = 1e150;
 
     private LeastSquares() {
     }
@@ -56,8 +59,8 @@ public final class LeastSquares {
                     + x.length + " and " + y.length);
         }
         if (x.length < model.minimumPoints()) {
-            throw new IllegalArgumentException("a line " + describe(model) + " needs at least "
-                    + model.minimumPoints() + " points, but has " + x.length);
+            throw new UnusableDataException(UnusableDataException.Reason.TOO_FEW_VALUES, "a line "
+                    + describe(model) + " needs at least " + model.minimumPoints() + " points, but has " + x.length);
         }
         requireFinite("x", x);
         requireFinite("y", y);
@@ -93,7 +96,8 @@ public final class LeastSquares {
             syy += w[i] * dy * dy;
         }
         if (!(sxx > 0)) {
-            throw new IllegalArgumentException("x must vary, but its weighted sum of squares is " + sxx);
+            throw new UnusableDataException(UnusableDataException.Reason.NO_VARIATION,
+                    "x must vary, but its weighted sum of squares is " + sxx);
         }
         double slope = sxy / sxx;
         double intercept = centred ? meanY - slope * meanX : 0;
@@ -163,15 +167,15 @@ public final class LeastSquares {
                     + x.length + " and " + y.length);
         }
         if (x.length < QuadraticFit.MINIMUM_POINTS) {
-            throw new IllegalArgumentException("a quadratic needs at least " + QuadraticFit.MINIMUM_POINTS
-                    + " points, but has " + x.length);
+            throw new UnusableDataException(UnusableDataException.Reason.TOO_FEW_VALUES, "a quadratic needs at least "
+                    + QuadraticFit.MINIMUM_POINTS + " points, but has " + x.length);
         }
         requireFinite("x", x);
         requireFinite("y", y);
         int levels = QuadraticFit.distinctValues(x);
         if (levels < QuadraticFit.PARAMETERS) {
-            throw new IllegalArgumentException("x must take at least 3 different values for a quadratic, but takes "
-                    + levels);
+            throw new UnusableDataException(UnusableDataException.Reason.TOO_FEW_VALUES,
+                    "x must take at least 3 different values for a quadratic, but takes " + levels);
         }
         requireVariation("y", y, true);
         return fitQuadratic(x, y, weighting.rawWeights(x, y), weighting);
@@ -222,12 +226,24 @@ public final class LeastSquares {
         return model == LineModel.WITH_INTERCEPT ? "with intercept" : "through the origin";
     }
 
+    /**
+     * Finite, and of a magnitude whose squares and cross products stay normal doubles: beyond about
+     * 1e150 they overflow to ∞, and when every value is below about 1e-150 they underflow to 0, so a
+     * sum of squares would read "no variation" where there is some.
+     */
     private static void requireFinite(String name, double[] values) {
+        double largest = 0;
         for (int i = 0; i < values.length; i++) {
             if (!Double.isFinite(values[i])) {
-                throw new IllegalArgumentException(name + " must be a finite number at every point, but point "
-                        + i + " is " + values[i]);
+                throw new UnusableDataException(UnusableDataException.Reason.NOT_FINITE, name
+                        + " must be a finite number at every point, but point " + i + " is " + values[i]);
             }
+            largest = Math.max(largest, Math.abs(values[i]));
+        }
+        if (largest > MAGNITUDE_LIMIT || largest > 0 && largest < 1 / MAGNITUDE_LIMIT) {
+            throw new UnusableDataException(UnusableDataException.Reason.OUT_OF_RANGE, name + " reaches " + largest
+                    + ", outside the magnitudes (1e-150 to 1e150) whose squares a double holds; express the values in "
+                    + "another unit");
         }
     }
 
@@ -238,7 +254,7 @@ public final class LeastSquares {
                 return;
             }
         }
-        throw new IllegalArgumentException(name + (centred
+        throw new UnusableDataException(UnusableDataException.Reason.NO_VARIATION, name + (centred
                 ? " must take at least two different values, but every point has " + name + " = " + values[0]
                 : " must be non-zero somewhere for a line through the origin, but every point has " + name + " = 0"));
     }

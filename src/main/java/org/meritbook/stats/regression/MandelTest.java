@@ -3,6 +3,7 @@ package org.meritbook.stats.regression;
 import java.util.Arrays;
 import java.util.Objects;
 import org.apache.commons.math3.special.Beta;
+import org.meritbook.stats.UnusableDataException;
 
 /**
  * Mandel's fitting test: does a quadratic describe the calibration significantly better than a
@@ -94,7 +95,8 @@ public record MandelTest(double ssResidualLinear, double ssResidualQuadratic, do
         double sdY = Math.sqrt(ssTotal / (y.length - 1));
         double s = quadratic.residualSd();
         if (!(s > ROUNDING_LEVEL * sdY)) {
-            throw new IllegalArgumentException("Mandel's test is not defined: the quadratic reproduces the responses to "
+            throw new UnusableDataException(UnusableDataException.Reason.NO_VARIATION,
+                    "the quadratic reproduces the responses to "
                     + "rounding precision (residual SD " + s + " against a response SD of " + sdY + ")");
         }
         double ssLinear = linear.ssResidual();

@@ -5,6 +5,7 @@ import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.DecompositionSolver;
 import org.apache.commons.math3.linear.QRDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
+import org.meritbook.stats.UnusableDataException;
 
 /**
  * The weighted design of a quadratic y = a + b·x + c·x², prepared so that it is well conditioned,
@@ -72,7 +73,8 @@ final class QuadraticDesign {
         double limit = RANK_TOLERANCE * Math.sqrt(sumW);
         for (int k = 0; k < 3; k++) {
             if (!(Math.abs(r.getEntry(k, k)) > limit)) {
-                throw new IllegalArgumentException("the x levels are too close together to separate a quadratic term "
+                throw new UnusableDataException(UnusableDataException.Reason.TOO_FEW_VALUES,
+                        "the x levels are too close together to separate a quadratic term "
                         + "from a line (the centred design has rank below 3)");
             }
         }

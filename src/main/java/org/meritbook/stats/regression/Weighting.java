@@ -3,6 +3,7 @@ package org.meritbook.stats.regression;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
+import org.meritbook.stats.UnusableDataException;
 
 /**
  * Weighting of a least-squares calibration: each point gets a weight that is a power of
@@ -111,12 +112,14 @@ public enum Weighting {
             }
             double v = values[i];
             if (!(v > 0)) {
-                throw new IllegalArgumentException("weighting " + notation + " needs " + basis
+                throw new UnusableDataException(UnusableDataException.Reason.OUT_OF_DOMAIN, "weighting " + notation
+                        + " needs " + basis
                         + " > 0 at every point, but point " + i + " has " + basis + " = " + v);
             }
             weights[i] = power == 1 ? 1.0 / v : 1.0 / (v * v);
             if (!Double.isFinite(weights[i]) || weights[i] == 0) {
-                throw new IllegalArgumentException("weighting " + notation + " gives no usable weight at point "
+                throw new UnusableDataException(UnusableDataException.Reason.OUT_OF_RANGE, "weighting " + notation
+                        + " gives no usable weight at point "
                         + i + " (" + basis + " = " + v + ")");
             }
         }

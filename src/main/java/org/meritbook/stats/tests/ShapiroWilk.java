@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.Objects;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.special.Erf;
+import org.meritbook.stats.UnusableDataException;
 
 /**
  * The Shapiro–Wilk test of normality, with Royston's approximations for the coefficients and
@@ -84,19 +85,22 @@ public record ShapiroWilk(int n, double w, double p) {
         Objects.requireNonNull(values, "values");
         int n = values.length;
         if (n < MIN_N || n > MAX_N) {
-            throw new IllegalArgumentException("the Shapiro–Wilk test needs " + MIN_N + " to " + MAX_N
-                    + " values, but has " + n);
+            throw new UnusableDataException(n < MIN_N ? UnusableDataException.Reason.TOO_FEW_VALUES
+                    : UnusableDataException.Reason.TOO_MANY_VALUES, "the Shapiro–Wilk test needs " + MIN_N + " to "
+                    + MAX_N + " values (Royston's coefficients cover no more), but has " + n);
         }
         for (int i = 0; i < n; i++) {
             if (!Double.isFinite(values[i])) {
-                throw new IllegalArgumentException("every value must be finite, but value " + i + " is " + values[i]);
+                throw new UnusableDataException(UnusableDataException.Reason.NOT_FINITE,
+                        "every value must be finite, but value " + i + " is " + values[i]);
             }
         }
         double[] x = values.clone();
         Arrays.sort(x);
         double range = x[n - 1] - x[0];
         if (!(range > 0)) {
-            throw new IllegalArgumentException("the Shapiro–Wilk test needs values that vary, but all " + n + " equal " + x[0]);
+            throw new UnusableDataException(UnusableDataException.Reason.NO_VARIATION,
+                    "the Shapiro–Wilk test needs values that vary, but all " + n + " equal " + x[0]);
         }
 
         double[] a = coefficients(n);

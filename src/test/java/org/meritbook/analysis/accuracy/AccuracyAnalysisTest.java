@@ -355,7 +355,7 @@ class AccuracyAnalysisTest {
         String[] level = {"L", "L", "", "L", "M", "M", "M", "M"};
         InputException e = assertThrows(InputException.class, () -> run("level: Level\n",
                 block(List.of("Nominal (mg/L)", "Found (mg/L)", "Level"), List.of(NOMINAL, FOUND, level))));
-        assertEquals(ErrorKey.BLANK_LABEL, e.key());
+        assertEquals(ErrorKey.MISSING_LABEL, e.key());
         assertEquals("runs.xlsx, Rec!C4", e.problems().get(0).where());
     }
 

@@ -390,4 +390,92 @@ class CalibrationAnalysisTest {
         double p = q(s, "shapiro_p");
         assertTrue(p > 0 && p <= 1);
     }
+
+    // Issue 6: data the statistics cannot support end in a located error or a result with warnings,
+    // never in an internal error (properties that can fail; no outside source needed).
+
+    @Test
+    void constantResponsesAreALocatedZeroVarianceError() {
+        InputException e = assertThrows(InputException.class,
+                () -> run("", block(new String[] {"1", "2", "4", "8"}, new String[] {"5", "5", "5", "5"})));
+        assertEquals(ErrorKey.ZERO_VARIANCE, e.key());
+        assertEquals("study.md line 10", e.problems().get(0).where());
+        assertTrue(e.getMessage().contains("every point has y = 5.0"), e.getMessage());
+    }
+
+    @Test
+    void aPerfectFitGivesResultsWithAWarningAndTheResidualTestsNotEvaluable() {
+        SectionResult s = run("", block(new String[] {"1", "2", "4", "8", "8"},
+                new String[] {"10", "20", "40", "80", "80"}));
+        assertEquals(10.0, q(s, "slope"), 1e-12);
+        assertEquals(0.0, q(s, "residual_sd"), 1e-12);
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("Perfect fit")), s.warnings().toString());
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("Not evaluable: the Shapiro–Wilk")));
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("Not evaluable: the lack-of-fit")));
+        assertFalse(s.quantity("shapiro_p").isPresent());
+        assertFalse(s.quantity("lack_of_fit_p").isPresent());
+    }
+
+    @Test
+    void autoWeightingWithAZeroStandardSkipsZeroBasesAndTheBlankInTheComparison() {
+        // Miller & Miller's data start with a blank at x = 0.
+        SectionResult s = run("weighting: auto\n", block(text(X), text(Y)));
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("Weighting 1/x was not tried")), s.warnings().toString());
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("Weighting 1/x^2 was not tried")
+                || w.startsWith("Weighting 1/x² was not tried")), s.warnings().toString());
+        Step choice = s.steps().stream().filter(st -> st.id().endsWith("weighting_choice")).findFirst().orElseThrow();
+        assertTrue(Double.isFinite(choice.value()));
+        assertTrue(s.steps().stream().allMatch(st -> Double.isFinite(st.value())));
+    }
+
+    @Test
+    void aTrailStepRefusesANonFiniteValueLikeAQuantity() {
+        assertThrows(IllegalArgumentException.class,
+                () -> new Step("c.x", "x", "x = 1/0", List.of(), Double.POSITIVE_INFINITY, null, null));
+        assertThrows(IllegalArgumentException.class,
+                () -> new Step("c.x", "x", "x = 0/0", List.of(), Double.NaN, null, null));
+    }
+
+    @Test
+    void valuesWhoseSquaresLeaveDoublePrecisionAreALocatedError() {
+        for (String[] ys : List.of(new String[] {"1e307", "2e307", "4.1e307", "7.9e307"},
+                new String[] {"1e-320", "2e-320", "4.1e-320", "7.9e-320"})) {
+            InputException e = assertThrows(InputException.class,
+                    () -> run("", block(new String[] {"1", "2", "4", "8"}, ys)));
+            assertEquals(ErrorKey.UNUSABLE_VALUES, e.key());
+            assertTrue(e.getMessage().contains("another unit"), e.getMessage());
+        }
+    }
+
+    @Test
+    void moreThan5000PointsLeaveShapiroWilkNotEvaluableAndTheRestComputed() {
+        int n = 5001;
+        String[] xs = new String[n];
+        String[] ys = new String[n];
+        java.util.Random random = new java.util.Random(6);
+        for (int i = 0; i < n; i++) {
+            double x = 1 + i % 10;
+            xs[i] = Double.toString(x);
+            ys[i] = Double.toString(10 * x + random.nextGaussian());
+        }
+        SectionResult s = run("", block(xs, ys));
+        assertEquals(n, q(s, "n"));
+        assertEquals(10.0, q(s, "slope"), 0.05);
+        assertFalse(s.quantity("shapiro_p").isPresent());
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("Not evaluable: the Shapiro–Wilk test of the "
+                + "residuals, because") && w.contains("5000")), s.warnings().toString());
+        assertTrue(s.quantity("lack_of_fit_p").isPresent());
+    }
+
+    @Test
+    void theInterceptsTTestMatchesRAndASignificantInterceptIsAWarning() {
+        // R 4.2.2, summary(lm(y ~ x))$coefficients[1, 3:4] on Miller & Miller's data:
+        //   x <- c(0,2,4,6,8,10,12); y <- c(2.1,5.0,9.0,12.6,17.3,21.0,24.7)
+        //   t = 5.14639493266463, p = 0.00362582929043381
+        SectionResult s = run("", block(text(X), text(Y)));
+        assertEquals(5.14639493266463, q(s, "intercept_t"), 1e-11);
+        assertEquals(0.00362582929043381, q(s, "intercept_p"), 1e-13);
+        assertTrue(s.warnings().stream().anyMatch(w -> w.startsWith("The intercept differs significantly from zero")),
+                s.warnings().toString());
+    }
 }
