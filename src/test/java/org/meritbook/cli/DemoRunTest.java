@@ -76,18 +76,19 @@ class DemoRunTest {
         };
     }
 
+    /** The demo's weighting: auto keeps 1/y² on these data (its trail step shows the comparison). */
     @Test
     void weightedCalibrationMatchesAnIndependentFit() throws Exception {
         double[][] p = standardsReadIndependently();
         int n = p.length;
         double meanRaw = 0;
         for (double[] pt : p) {
-            meanRaw += 1 / pt[0] / n;
+            meanRaw += 1 / (pt[1] * pt[1]) / n;
         }
         double[] sy = new double[n];
         double[][] sx = new double[n][2];
         for (int i = 0; i < n; i++) {
-            double sw = Math.sqrt(1 / p[i][0] / meanRaw); // 1/x weights, normalised to mean 1
+            double sw = Math.sqrt(1 / (p[i][1] * p[i][1]) / meanRaw); // 1/y² weights, normalised to mean 1
             sy[i] = sw * p[i][1];
             sx[i][0] = sw;
             sx[i][1] = sw * p[i][0];
@@ -105,7 +106,7 @@ class DemoRunTest {
         assertEquals(se[0], q.get("intercept_se").get("value").asDouble(), 1e-9 * se[0]);
         assertEquals(ols.estimateRegressionStandardError(), q.get("residual_sd").get("value").asDouble(), 1e-9);
         assertEquals("mAU·s per mg/L", q.get("slope").get("unit").asText());
-        assertEquals("1/x", section("linearity").get("settings").get("Weighting").asText());
+        assertEquals("1/y^2 (chosen by auto)", section("linearity").get("settings").get("Weighting").asText());
     }
 
     @Test
