@@ -79,13 +79,13 @@ class BrowserPreviewTest {
 
         Path notebook = dir.resolve(NAME + ".md");
         String good = Files.readString(notebook);
-        Files.writeString(notebook, good.replaceFirst("weighting: 1/x\n", "weighting: 1/x\nsmoothing: yes\n"));
+        Files.writeString(notebook, good.replaceFirst("weighting: auto\n", "weighting: auto\nsmoothing: yes\n"));
         waitFor("the problem is shown", b -> b.findElement(By.id("state")).getText().equals("input needs attention"));
         String problems = browser.findElement(By.id("problem-list")).getText();
         assertTrue(problems.contains(NAME + ".md line") && problems.contains("UNKNOWN_OPTION")
                 && problems.contains("'smoothing'"), problems);
 
-        Files.writeString(notebook, good.replaceFirst("weighting: 1/x\n", "weighting: none\n"));
+        Files.writeString(notebook, good.replaceFirst("weighting: auto\n", "weighting: none\n"));
         waitFor("the fix is run", b -> b.findElement(By.id("state")).getText().equals("up to date"));
         waitFor("the dossier is reloaded with the new weighting",
                 b -> dossierText().contains("Weighting none") || dossierText().contains("Weighting\nnone"));

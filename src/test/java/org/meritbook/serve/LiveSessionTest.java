@@ -82,14 +82,14 @@ class LiveSessionTest {
 
         JsonNode results = JSON.readTree(get("/results.json").body());
         assertTrue(results.get("sections").size() >= 1, "sections");
-        assertEquals("1/x", results.get("sections").get(0).get("settings").get("Weighting").asText());
+        assertEquals("1/y^2 (chosen by auto)", results.get("sections").get(0).get("settings").get("Weighting").asText());
     }
 
     @Test
     void anEditedNotebookIsRunAgain() throws Exception {
         int first = awaitStatus(s -> s.get("state").asText().equals("ok")).get("run").asInt();
         String text = Files.readString(notebook);
-        save(text.replaceFirst("weighting: 1/x", "weighting: none"));
+        save(text.replaceFirst("weighting: auto", "weighting: none"));
 
         JsonNode status = awaitStatus(s -> s.get("state").asText().equals("ok") && s.get("run").asInt() > first
                 && weighting().equals("none"));
@@ -103,8 +103,8 @@ class LiveSessionTest {
         String good = get("/dossier").body();
         String text = Files.readString(notebook);
         List<String> lines = List.of(text.split("\n", -1));
-        int weightingLine = lines.indexOf("weighting: 1/x") + 1;
-        save(text.replaceFirst("weighting: 1/x\n", "weighting: 1/x\nsmoothing: yes\n"));
+        int weightingLine = lines.indexOf("weighting: auto") + 1;
+        save(text.replaceFirst("weighting: auto\n", "weighting: auto\nsmoothing: yes\n"));
 
         JsonNode broken = awaitStatus(s -> s.get("state").asText().equals("error"));
         JsonNode problem = broken.get("problems").get(0);

@@ -28,16 +28,17 @@ class DemoLimitsTest {
                 .run(Path.of("demo-data/hmf-honey-validation.md")).sections().stream()
                 .collect(Collectors.toMap(SectionResult::id, Function.identity()));
         SectionResult solution = sections.get("limits-solution");
-        // R: blank LOD 0.00813284010387189, LOQ 0.0247251688093763 mg/L (through the 1/x line, a = 0.33336, b = 41.726).
-        assertEquals(0.00813284010387189, q(solution, "lod:blank"), 1e-12);
-        assertEquals(0.0247251688093763, q(solution, "loq:blank"), 1e-12);
+        // R (src/test/resources/detection/demo-reference.R): blank LOD 0.00666518620768675, LOQ 0.0233289309768095 mg/L
+        // (through the 1/y² line that weighting: auto keeps, a = 0.395794, b = 41.5474).
+        assertEquals(0.00666518620768675, q(solution, "lod:blank"), 1e-12);
+        assertEquals(0.0233289309768095, q(solution, "loq:blank"), 1e-12);
         assertEquals(q(solution, "lod:blank"), q(solution, "lod"), 0);
-        // ICH Q2(R2) with σ = s(y/x) = 0.657388 of the weighted fit: 0.051990806164875, 0.157547897469318.
-        assertEquals(0.051990806164875, q(solution, "lod:response-sd"), 1e-12);
-        assertEquals(0.157547897469318, q(solution, "loq:response-sd"), 1e-12);
-        // ISO 11843-2 / Hubaux–Vos, weighted, blank at the lowest standard's weight: 0.0151292257719535, 0.0244224006443877.
-        assertEquals(0.0151292257719535, q(solution, "critical_value:prediction-band"), 1e-10);
-        assertEquals(0.0244224006443877, q(solution, "lod:prediction-band"), 1e-9);
+        // ICH Q2(R2) with σ = s(y/x) = 0.177762 of the weighted fit: 0.0141191265044895, 0.0427852318317863.
+        assertEquals(0.0141191265044895, q(solution, "lod:response-sd"), 1e-12);
+        assertEquals(0.0427852318317863, q(solution, "loq:response-sd"), 1e-12);
+        // ISO 11843-2 / Hubaux–Vos, weighted, a blank weighted at the predicted response a: 0.00202926997604416, 0.00405846745940019.
+        assertEquals(0.00202926997604416, q(solution, "critical_value:prediction-band"), 1e-10);
+        assertEquals(0.00405846745940019, q(solution, "lod:prediction-band"), 1e-9);
         // S/N of S1: 30.8291873963516; LOD 0.00973103819257666, LOQ 0.0324367939752555 mg/L.
         assertEquals(0.00973103819257666, q(solution, "lod:signal-noise"), 1e-14);
         assertEquals(0.0324367939752555, q(solution, "loq:signal-noise"), 1e-14);
