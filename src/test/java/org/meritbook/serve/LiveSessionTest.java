@@ -89,7 +89,7 @@ class LiveSessionTest {
     void anEditedNotebookIsRunAgain() throws Exception {
         int first = awaitStatus(s -> s.get("state").asText().equals("ok")).get("run").asInt();
         String text = Files.readString(notebook);
-        save(text.replaceFirst("weighting: auto", "weighting: none"));
+        save(text.replaceFirst("\nweighting: auto\n", "\nweighting: none\n"));
 
         JsonNode status = awaitStatus(s -> s.get("state").asText().equals("ok") && s.get("run").asInt() > first
                 && weighting().equals("none"));

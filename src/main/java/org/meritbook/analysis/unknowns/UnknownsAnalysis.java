@@ -234,8 +234,9 @@ public final class UnknownsAnalysis implements Analysis {
 
     private static DataTable table(MeasuredRows rows, Map<Integer, Group> groupOfRow, Map<String, String> notes,
                                    SectionBuilder section, Units units) {
+        // The columns the cell reads, not the whole block: a sheet's notes and types would push the results off the page.
         List<String> headers = new ArrayList<>();
-        for (Column c : rows.block().columns()) {
+        for (Column c : rows.columns()) {
             headers.add(c.header());
         }
         headers.add("x₀" + unitSuffixParen(units.x()));
@@ -247,8 +248,7 @@ public final class UnknownsAnalysis implements Analysis {
         List<DataTable.Row> out = new ArrayList<>();
         for (MeasuredRows.Row r : rows.rows()) {
             List<TableCell> cells = new ArrayList<>();
-            for (Column c : rows.block().columns()) {
-                CellValue v = c.values().get(r.index());
+            for (CellValue v : r.cells()) {
                 cells.add(TableCell.raw(v.raw(), v.ref().address()));
             }
             Group g = groupOfRow.get(r.index());
