@@ -50,7 +50,7 @@ final class Demo {
 
     Demo() {
         try {
-            notebook = Files.readString(Path.of("demo-data").resolve(NOTEBOOK));
+            notebook = cellsOnTheCalibrationSheet(Files.readString(Path.of("demo-data").resolve(NOTEBOOK)));
             parts = XlsxParts.of(Files.readAllBytes(Path.of("demo-data").resolve(WORKBOOK)));
         } catch (IOException e) {
             throw new UncheckedIOException(e);
@@ -105,6 +105,23 @@ final class Demo {
     /** The stored number of a used cell as a double (D16 holds the text "21.08"). */
     double value(String a1) {
         return a1.equals("D16") ? 21.08 : Double.parseDouble(stored.get(a1));
+    }
+
+    /**
+     * The corpus damages the Calibration sheet: it keeps the cells that read it or use the
+     * calibration's line (the limits, the range and the samples go through it), and drops those that
+     * read only other sheets, which every case would otherwise recompute unchanged.
+     */
+    static String cellsOnTheCalibrationSheet(String notebook) {
+        Matcher m = Pattern.compile("(?ms)^```([a-z-]+)\\n(.*?)^```\\n").matcher(notebook);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) {
+            String body = m.group(2);
+            boolean keep = m.group(1).equals("text") || body.contains("!Calibration!") || body.contains("calibration: linearity");
+            m.appendReplacement(out, Matcher.quoteReplacement(keep ? m.group() : ""));
+        }
+        m.appendTail(out);
+        return out.toString();
     }
 
     /** The notebook with every fenced cell but the calibration cells removed (their narrative stays). */

@@ -53,7 +53,7 @@ final class NotebookMutations {
         for (String option : List.of("weighting: auto", "model: quadratic", "model: linear-through-origin", "weighting: 1/x^2",
                 "formulas: evaluate", "hidden: include", "merged: repeat", "censored: drop")) {
             out.add(demo.workbook("notebook", "option '" + option + "' on an intact workbook", demo.parts,
-                    demo.notebook.replace("weighting: 1/x\n", option + "\n").replace("weighting: none\n", option + "\n"), new Anything()));
+                    demo.notebook.replace("weighting: auto\n", option + "\n").replace("weighting: none\n", option + "\n"), new Anything()));
         }
         return out;
     }

@@ -47,12 +47,16 @@ final class BackCalculation {
             String backId = section.quantity(QuantityDraft.of("back_calculated:" + p.label(),
                     "Back-calculated concentration, " + yAddress + suffix, inversion.formula(), in, back,
                     data.xUnit()));
-            if (p.x() != 0) {
+            double deviation = p.x() == 0 ? Double.NaN : (back - p.x()) / p.x() * 100.0;
+            if (p.x() != 0 && !Double.isFinite(deviation)) {
+                section.warning("No % deviation for " + yAddress + suffix + ": its nominal concentration " + p.x()
+                        + " is so close to zero that the relative deviation is not a finite number.");
+            } else if (p.x() != 0) {
                 section.quantity(QuantityDraft.of("deviation_percent:" + p.label(),
                         "Deviation from nominal, " + yAddress + suffix, "%dev = (x̂ − x) / x × 100",
                         List.of(section.ref("x̂", backId),
                                 StepInput.number("x", p.x(), data.xUnit(), p.xCell().ref().address())),
-                        (back - p.x()) / p.x() * 100.0, "%"));
+                        deviation, "%"));
             }
         }
     }

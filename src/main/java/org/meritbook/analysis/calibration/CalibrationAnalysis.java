@@ -171,6 +171,12 @@ public final class CalibrationAnalysis implements Analysis {
                 section.warning("Weighting " + w.notation() + " was not chosen by auto: " + e.getMessage());
                 continue;
             }
+            if (!Double.isFinite(sum)) {
+                // A concentration near the smallest double makes a relative deviation overflow: no basis to compare on.
+                section.warning("Weighting " + w.notation() + " was not chosen by auto: the sum of relative deviations "
+                        + "of its back-calculated standards is not a finite number (a concentration too close to zero).");
+                continue;
+            }
             sums.put(w, sum);
         }
         if (sums.isEmpty()) {

@@ -177,6 +177,20 @@ class CalibrationAnalysisTest {
     }
 
     @Test
+    void autoWeightingWithAConcentrationNearTheSmallestDoubleNeverFailsInternally() {
+        // Found by the robustness corpus: 4.9e-324 in a concentration cell made a relative deviation infinite.
+        double[] x = X.clone();
+        x[1] = Double.MIN_VALUE;
+        try {
+            SectionResult s = run("weighting: auto\n", block(text(x), text(Y)));
+            assertTrue(s.warnings().stream().anyMatch(w -> w.contains("not chosen by auto") || w.contains("not tried by auto")),
+                    s.warnings().toString());
+        } catch (InputException located) {
+            assertTrue(located.getMessage().contains("Cal!A3") || located.getMessage().contains("line"), located.getMessage());
+        }
+    }
+
+    @Test
     void autoWeightingRecordsTheComparisonInTheTrail() {
         double[] x = {1, 2, 5, 10, 20, 50};
         double[] y = {10.4, 19.6, 51.5, 99.0, 203.0, 497.0};
