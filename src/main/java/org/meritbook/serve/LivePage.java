@@ -159,6 +159,8 @@ final class LivePage {
                 setTimeout(poll, 1000);
               }
 
+              // The cookie now carries the token; keep it out of the address bar and the history.
+              if (location.search.indexOf('token=') >= 0) { history.replaceState(null, '', '/'); }
               // Keep the reader's place in the dossier across reloads.
               byId('dossier').addEventListener('load', () => {
                 try { byId('dossier').contentWindow.scrollTo(0, keepScroll); } catch (e) { /* not reachable */ }

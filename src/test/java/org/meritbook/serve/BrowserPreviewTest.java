@@ -73,8 +73,11 @@ class BrowserPreviewTest {
 
     @Test
     void aBrokenNotebookIsShownWithItsLineAndAFixReloadsTheDossier() throws Exception {
+        browser.get(session.server().base().toString());
+        assertTrue(browser.findElements(By.id("state")).isEmpty(), "without the token the page is refused");
         browser.get(session.uri().toString());
         waitFor("the first run is shown", b -> b.findElement(By.id("state")).getText().equals("up to date"));
+        assertTrue(!browser.getCurrentUrl().contains("token="), "the token leaves the address bar: " + browser.getCurrentUrl());
         waitFor("the dossier is shown", b -> dossierText().contains("Validation of 5-hydroxymethylfurfural"));
 
         Path notebook = dir.resolve(NAME + ".md");

@@ -162,12 +162,39 @@ class LiveSessionTest {
         assertEquals(405, client.send(post, HttpResponse.BodyHandlers.discarding()).statusCode());
     }
 
+    @Test
+    void everyRequestNeedsTheTokenAsQueryOrCookie() throws Exception {
+        awaitStatus(s -> s.get("state").asText().equals("ok"));
+        String token = session.uri().getRawQuery().substring("token=".length());
+        assertTrue(token.matches("[A-Za-z0-9_-]{43}"), "32 random bytes, URL-safe Base64: " + token);
+        for (String path : List.of("/", "/status", "/dossier", "/results.json", "/live.js", "/elsewhere")) {
+            HttpResponse<String> bare = client.send(HttpRequest.newBuilder(session.uri().resolve(path)).timeout(WAIT).build(),
+                    HttpResponse.BodyHandlers.ofString());
+            assertEquals(403, bare.statusCode(), path + " without the token");
+            assertFalse(bare.body().contains("HMF") || bare.body().contains(token), path + " shows nothing of the study");
+            HttpResponse<String> wrong = client.send(HttpRequest.newBuilder(URI.create(session.uri().resolve(path)
+                    + "?token=" + token.substring(1) + "x")).timeout(WAIT).build(), HttpResponse.BodyHandlers.ofString());
+            assertEquals(403, wrong.statusCode(), path + " with a wrong token");
+        }
+        assertFalse(get("/dossier").headers().firstValue("Set-Cookie").isEmpty(), "a tokened answer sets the cookie");
+        String cookie = get("/").headers().firstValue("Set-Cookie").orElseThrow();
+        assertTrue(cookie.contains("HttpOnly") && cookie.contains("SameSite=Strict") && cookie.contains("Path=/"), cookie);
+        String pair = cookie.substring(0, cookie.indexOf(';'));
+        HttpResponse<String> byCookie = client.send(HttpRequest.newBuilder(session.uri().resolve("/dossier"))
+                .header("Cookie", pair).timeout(WAIT).build(), HttpResponse.BodyHandlers.ofString());
+        assertEquals(200, byCookie.statusCode());
+        assertTrue(byCookie.body().contains("HMF"));
+        HttpResponse<String> badCookie = client.send(HttpRequest.newBuilder(session.uri().resolve("/status"))
+                .header("Cookie", pair + "x").timeout(WAIT).build(), HttpResponse.BodyHandlers.ofString());
+        assertEquals(403, badCookie.statusCode());
+    }
+
     /** Host is a restricted header for HttpClient; a raw socket sends it as a browser page could. */
     private int rawStatus(String path, String host) throws IOException {
         InetSocketAddress address = session.server().address();
         try (java.net.Socket socket = new java.net.Socket(address.getAddress(), address.getPort())) {
             socket.setSoTimeout((int) WAIT.toMillis());
-            String head = "GET " + path + " HTTP/1.1\r\nHost: " + host + "\r\nConnection: close\r\n\r\n";
+            String head = "GET " + path + "?" + session.uri().getRawQuery() + " HTTP/1.1\r\nHost: " + host + "\r\nConnection: close\r\n\r\n";
             socket.getOutputStream().write(head.getBytes(StandardCharsets.US_ASCII));
             String statusLine = new String(socket.getInputStream().readNBytes(12), StandardCharsets.US_ASCII);
             return Integer.parseInt(statusLine.substring(9, 12));
@@ -205,7 +232,7 @@ class LiveSessionTest {
     }
 
     private HttpResponse<String> get(String path) throws Exception {
-        URI uri = session.uri().resolve(path);
+        URI uri = URI.create(session.uri().resolve(path) + "?" + session.uri().getRawQuery());
         return client.send(HttpRequest.newBuilder(uri).timeout(WAIT).build(), HttpResponse.BodyHandlers.ofString());
     }
 }
