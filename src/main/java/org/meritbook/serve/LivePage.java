@@ -22,11 +22,17 @@ final class LivePage {
             <script src="/live.js" defer></script>
             </head>
             <body>
-            <header class="bar" id="bar" data-state="running">
+            <header class="bar level-none" id="bar" data-state="running">
               <div class="ident">
                 <span class="mark">meritbook</span>
                 <span class="kind">live preview</span>
                 <span class="notebook" id="notebook"></span>
+              </div>
+              <div class="verdict" id="verdict">
+                <span class="verdict-mark" id="verdict-mark" aria-hidden="true">&middot;</span>
+                <span class="verdict-word" id="verdict-word">no outcome yet</span>
+                <span class="tally"><b id="n-failed">&ndash;</b> failed <b id="n-na">&ndash;</b> not evaluable
+                  <b id="n-passed">&ndash;</b> passed <b id="n-warnings">&ndash;</b> warnings</span>
               </div>
               <dl class="facts">
                 <div class="state"><dt>state</dt><dd id="state">starting</dd></div>
@@ -36,6 +42,7 @@ final class LivePage {
                 <div><dt>run</dt><dd id="run">0</dd></div>
               </dl>
             </header>
+            <p class="announce" id="announce" aria-live="polite"></p>
             <section class="problems" id="problems" hidden>
               <h2 id="problems-title">The input needs attention</h2>
               <p class="note" id="problems-note"></p>
@@ -50,7 +57,7 @@ final class LivePage {
 
     static final byte[] CSS = """
             :root { --ink: #1d2430; --muted: #5d6673; --rule: #d4d8de; --paper: #f7f7f5;
-                    --ok: #2e6b4f; --busy: #6a5d1f; --bad: #9b2f22; }
+                    --ok: #2e6b4f; --busy: #6a5d1f; --bad: #9b2f22; --warn: #8a5a00; }
             [hidden] { display: none !important; }
             html, body { height: 100%; margin: 0; }
             body { display: flex; flex-direction: column; background: var(--paper); color: var(--ink);
@@ -58,7 +65,20 @@ final class LivePage {
             .bar { display: flex; flex-wrap: wrap; align-items: center; justify-content: space-between; gap: 8px 24px;
                    padding: 8px 16px; background: #fff; border-bottom: 1px solid var(--rule); border-left: 6px solid var(--busy); }
             .bar[data-state="ok"] { border-left-color: var(--ok); }
+            .bar.level-fail { border-left-color: var(--bad); }
+            .bar.level-attention { border-left-color: var(--warn); }
+            .bar.level-clear { border-left-color: var(--ok); }
             .bar[data-state="error"] { border-left-color: var(--bad); }
+            .verdict { display: flex; align-items: baseline; gap: 8px; padding: 3px 10px; border-radius: 4px;
+                       background: #eef0f2; font-variant-numeric: tabular-nums; }
+            .verdict-mark { font-weight: 700; }
+            .verdict-word { font-weight: 600; }
+            .tally { color: var(--muted); font-size: 12px; }
+            .tally b { color: var(--ink); font-weight: 600; margin-left: 4px; }
+            .level-fail .verdict { background: #f7e3df; color: var(--bad); }
+            .level-attention .verdict { background: #f6eed6; color: var(--warn); }
+            .level-clear .verdict { background: #e2efe7; color: var(--ok); }
+            .announce { position: absolute; width: 1px; height: 1px; overflow: hidden; clip-path: inset(50%); white-space: nowrap; }
             .ident { display: flex; align-items: baseline; gap: 10px; min-width: 0; }
             .mark { font-weight: 700; letter-spacing: 0.02em; }
             .kind { color: var(--muted); }
@@ -69,7 +89,7 @@ final class LivePage {
             .facts dt { color: var(--muted); font-size: 12px; }
             .facts dd { margin: 0; font-variant-numeric: tabular-nums; }
             .state dd { font-weight: 600; }
-            .bar[data-state="ok"] .state dd { color: var(--ok); }
+            .bar[data-state="ok"] .state dd { color: var(--ink); }
             .bar[data-state="running"] .state dd { color: var(--busy); }
             .bar[data-state="error"] .state dd { color: var(--bad); }
             .problems { padding: 10px 16px 12px; background: #fff; border-bottom: 3px solid var(--bad);
@@ -94,6 +114,14 @@ final class LivePage {
               const byId = (id) => document.getElementById(id);
               const words = { ok: 'up to date', running: 'running', error: 'input needs attention' };
               let shown = 0;
+              let spoken = '';
+              // A word and a mark for each level, so colour is never the only signal.
+              const levels = {
+                fail: ['\u2717', 'criteria failed'],
+                attention: ['!', 'check before issuing'],
+                clear: ['\u2713', 'nothing to flag'],
+                none: ['\u00b7', 'no outcome yet']
+              };
               let keepScroll = 0;
 
               function set(id, text) { byId(id).textContent = text; }
@@ -120,7 +148,29 @@ final class LivePage {
                 return li;
               }
 
+              function showVerdicts(v, run) {
+                const level = v ? v.level : 'none';
+                byId('bar').className = 'bar level-' + level;
+                set('verdict-mark', levels[level][0]);
+                set('verdict-word', level === 'clear' && v.passed > 0 ? 'criteria met' : levels[level][1]);
+                const count = (n) => (v ? String(n) : '\u2013');
+                set('n-failed', count(v && v.failed));
+                set('n-na', count(v && v.not_evaluable));
+                set('n-passed', count(v && v.passed));
+                set('n-warnings', count(v && v.warnings));
+                if (!v) { return; }
+                const sentence = 'Acceptance, run ' + run + ': ' + byId('verdict-word').textContent + '; ' + v.failed + ' failed, '
+                  + v.not_evaluable + ' not evaluable, ' + v.passed + ' passed, ' + v.warnings + ' warnings.';
+                const key = [v.level, v.failed, v.not_evaluable, v.passed, v.warnings].join('/');
+                // Said once per change of outcome, not once per run.
+                if (key !== spoken) {
+                  spoken = key;
+                  set('announce', sentence);
+                }
+              }
+
               function show(s) {
+                showVerdicts(s.verdicts, s.dossier_run);
                 byId('bar').dataset.state = s.state;
                 set('state', words[s.state] || s.state);
                 set('notebook', s.notebook);

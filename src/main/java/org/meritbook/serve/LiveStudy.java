@@ -126,7 +126,8 @@ public final class LiveStudy implements AutoCloseable {
             StudyResults results = runner.apply(study);
             byte[] json = ResultsJson.toBytes(results);
             byte[] html = renderer.renderHtml(results, json);
-            issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json);
+            issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json,
+                    Outcome.of(results));
         } catch (InputException e) {
             e.problems().forEach(p -> problems.add(ShownProblem.of(p)));
         } catch (Throwable e) {

@@ -35,10 +35,12 @@ public record Snapshot(int run, State state, List<ShownProblem> problems, long e
      * @param revision the revision in the notebook's front matter
      * @param html     the HTML dossier
      * @param json     results.json
+     * @param outcome  the acceptance outcome counted from the run's results
      */
-    public record Issued(int run, String title, int revision, byte[] html, byte[] json) {
+    public record Issued(int run, String title, int revision, byte[] html, byte[] json, Outcome outcome) {
         public Issued {
             Objects.requireNonNull(title, "title");
+            Objects.requireNonNull(outcome, "outcome");
             Objects.requireNonNull(html, "html");
             Objects.requireNonNull(json, "json");
         }

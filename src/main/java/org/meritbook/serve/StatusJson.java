@@ -35,9 +35,14 @@ final class StatusJson {
         if (issued == null) {
             root.putNull("revision");
             root.putNull("title");
+            root.putNull("verdicts");
         } else {
             root.put("revision", issued.revision());
             root.put("title", issued.title());
+            // The outcome of the dossier shown (dossier_run), which a later failed run does not replace.
+            Outcome o = issued.outcome();
+            root.putObject("verdicts").put("passed", o.passed()).put("failed", o.failed())
+                    .put("not_evaluable", o.notEvaluable()).put("warnings", o.warnings()).put("level", o.level().word());
         }
         // The run whose dossier /dossier serves: the page reloads its view when this changes.
         root.put("dossier_run", issued == null ? 0 : issued.run());

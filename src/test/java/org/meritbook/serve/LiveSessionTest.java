@@ -189,6 +189,28 @@ class LiveSessionTest {
         assertEquals(403, badCookie.statusCode());
     }
 
+    @Test
+    void aFailingCriterionIsCountedInTheStatus() throws Exception {
+        JsonNode demo = awaitStatus(s -> s.get("state").asText().equals("ok")).get("verdicts");
+        int judged = demo.get("passed").asInt() + demo.get("failed").asInt() + demo.get("not_evaluable").asInt();
+        assertTrue(judged > 0, "the demo's profile judges something: " + demo);
+        int calibrations = JSON.readTree(get("/results.json").body()).findValues("kind").stream()
+                .filter(k -> k.asText().equals("calibration")).mapToInt(k -> 1).sum();
+        // r² <= 1 always and is below 1 for real data, so 'at least 1' fails and 'at least 0' passes, once per calibration.
+        Files.writeString(dir.resolve("impossible.yaml"), "name: impossible linearity\nrules:\n"
+                + "  - quantity: r_squared\n    at-least: 1\n    characteristic: Linearity\n"
+                + "  - quantity: r_squared\n    at-least: 0\n    characteristic: Linearity floor\n");
+        save(Files.readString(notebook).replaceFirst("criteria: linearity-basic\n", "criteria: impossible.yaml\n"));
+        JsonNode verdicts = awaitStatus(s -> s.get("state").asText().equals("ok")
+                && s.get("verdicts").get("failed").asInt() > 0).get("verdicts");
+        assertTrue(calibrations >= 1, "the demo has a calibration");
+        assertEquals(calibrations, verdicts.get("failed").asInt(), verdicts.toString());
+        assertEquals(calibrations, verdicts.get("passed").asInt(), verdicts.toString());
+        assertEquals(0, verdicts.get("not_evaluable").asInt());
+        assertEquals("fail", verdicts.get("level").asText());
+        assertTrue(verdicts.get("warnings").asInt() >= 0);
+    }
+
     /** Host is a restricted header for HttpClient; a raw socket sends it as a browser page could. */
     private int rawStatus(String path, String host) throws IOException {
         InetSocketAddress address = session.server().address();

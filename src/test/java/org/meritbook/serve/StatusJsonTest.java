@@ -18,7 +18,7 @@ class StatusJsonTest {
         String hostile = "</script><img src=x onerror=alert(1)> \"quoted\" \\ \u2028 line";
         Problem p = new Problem(ErrorKey.NOT_A_NUMBER, "runs.xlsx, Cal!B4", "a number", "'" + hostile + "'", "Enter the value.");
         Snapshot s = new Snapshot(3, Snapshot.State.ERROR, List.of(ShownProblem.of(p)), 812, Instant.parse("2026-11-20T10:15:30Z"),
-                new Snapshot.Issued(2, "Study <b>", 4, new byte[0], new byte[0]));
+                new Snapshot.Issued(2, "Study <b>", 4, new byte[0], new byte[0], new Outcome(3, 1, 2, 5)));
 
         byte[] bytes = StatusJson.of(s, "study.md");
         JsonNode status = new ObjectMapper().readTree(bytes);
@@ -29,6 +29,12 @@ class StatusJsonTest {
         assertEquals(4, status.get("revision").asInt());
         assertEquals(2, status.get("dossier_run").asInt());
         assertEquals("2026-11-20T10:15:30Z", status.get("finished_at").asText());
+        JsonNode verdicts = status.get("verdicts");
+        assertEquals(3, verdicts.get("passed").asInt());
+        assertEquals(1, verdicts.get("failed").asInt());
+        assertEquals(2, verdicts.get("not_evaluable").asInt());
+        assertEquals(5, verdicts.get("warnings").asInt());
+        assertEquals("fail", verdicts.get("level").asText());
         JsonNode problem = status.get("problems").get(0);
         assertEquals("NOT_A_NUMBER", problem.get("key").asText());
         assertEquals("runs.xlsx, Cal!B4", problem.get("where").asText());
@@ -44,5 +50,16 @@ class StatusJsonTest {
         assertTrue(status.get("elapsed_ms").isNull());
         assertTrue(status.get("revision").isNull());
         assertEquals(0, status.get("dossier_run").asInt());
+        assertTrue(status.get("verdicts").isNull(), "no outcome before a run succeeds");
+    }
+
+    @Test
+    void theLevelIsFailOnAnyFailureThenAttentionOnAnyDoubtElseClear() {
+        assertEquals(Outcome.Level.FAIL, new Outcome(9, 1, 0, 0).level());
+        assertEquals(Outcome.Level.FAIL, new Outcome(0, 1, 4, 4).level());
+        assertEquals(Outcome.Level.ATTENTION, new Outcome(9, 0, 1, 0).level());
+        assertEquals(Outcome.Level.ATTENTION, new Outcome(9, 0, 0, 1).level());
+        assertEquals(Outcome.Level.CLEAR, new Outcome(9, 0, 0, 0).level());
+        assertEquals(Outcome.Level.CLEAR, new Outcome(0, 0, 0, 0).level());
     }
 }
