@@ -48,6 +48,14 @@ final class LivePage {
               <p class="note" id="problems-note"></p>
               <ol id="problem-list"></ol>
             </section>
+            <section class="changes" id="changes" hidden aria-labelledby="changes-title">
+              <h2 id="changes-title">Changed values</h2>
+              <table>
+                <thead><tr><th scope="col">section</th><th scope="col">quantity</th><th scope="col">was</th>
+                  <th scope="col" aria-hidden="true"></th><th scope="col">now</th></tr></thead>
+                <tbody id="change-list"></tbody>
+              </table>
+            </section>
             <p class="waiting" id="waiting">The study is running for the first time.</p>
             <main><iframe id="dossier" title="Dossier preview"></iframe></main>
             <footer>A preview: nothing is written. Issue the dossier with <code>meritbook run</code>.</footer>
@@ -102,6 +110,17 @@ final class LivePage {
             .problems .key { color: var(--muted); font-size: 12px; margin-left: 8px; }
             .problems .line { margin: 1px 0 0; }
             .problems .line span { color: var(--muted); display: inline-block; min-width: 5.5em; }
+            .changes { padding: 8px 16px 10px; background: #fbfaf4; border-bottom: 1px solid var(--rule);
+                       max-height: 28vh; overflow: auto; }
+            .changes h2 { margin: 0 0 4px; font-size: 13px; font-weight: 600; color: var(--muted); text-transform: lowercase;
+                          letter-spacing: 0.04em; }
+            .changes table { border-collapse: collapse; font-variant-numeric: tabular-nums; }
+            .changes th { text-align: left; font-weight: 400; font-size: 12px; color: var(--muted); padding: 0 14px 2px 0; }
+            .changes td { padding: 1px 14px 1px 0; vertical-align: baseline; white-space: nowrap; }
+            .changes td.name { font-family: ui-monospace, "DejaVu Sans Mono", monospace; }
+            .changes td.was { color: var(--muted); text-decoration: line-through; text-decoration-color: #b9bec6; }
+            .changes td.now { font-weight: 600; }
+            .changes td.arrow { color: var(--muted); }
             .waiting { margin: 24px 16px; color: var(--muted); }
             main { flex: 1; min-height: 0; display: flex; }
             iframe { flex: 1; border: 0; background: #fff; }
@@ -169,8 +188,29 @@ final class LivePage {
                 }
               }
 
+              function changeRow(c) {
+                const tr = document.createElement('tr');
+                const cells = [['section', c.section], ['name', c.name], ['was', c.before === null ? '(new)' : c.before],
+                  ['arrow', '\u2192'], ['now', c.after === null ? '(removed)' : c.after]];
+                for (const [cls, text] of cells) {
+                  const td = document.createElement('td');
+                  td.className = cls;
+                  td.textContent = text;
+                  tr.append(td);
+                }
+                return tr;
+              }
+
+              function showChanges(c, run) {
+                byId('change-list').replaceChildren(...c.results.map(changeRow));
+                byId('changes').hidden = c.results.length === 0;
+                set('changes-title', c.results.length + (c.results.length === 1 ? ' value' : ' values')
+                  + ' changed in run ' + run + ' (since run ' + c.since_run + ')');
+              }
+
               function show(s) {
                 showVerdicts(s.verdicts, s.dossier_run);
+                showChanges(s.changes, s.dossier_run);
                 byId('bar').dataset.state = s.state;
                 set('state', words[s.state] || s.state);
                 set('notebook', s.notebook);

@@ -17,6 +17,8 @@ import org.meritbook.error.InputException;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.revision.ResultsJson;
+import org.meritbook.revision.RevisionDiff;
+import org.meritbook.revision.RevisionDiffer;
 import org.meritbook.study.SourceFile;
 import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
@@ -126,8 +128,12 @@ public final class LiveStudy implements AutoCloseable {
             StudyResults results = runner.apply(study);
             byte[] json = ResultsJson.toBytes(results);
             byte[] html = renderer.renderHtml(results, json);
+            Snapshot.Issued previous = issued;
+            // Compared with the last successful run, so a fix after a broken save lists what the edits moved.
+            List<RevisionDiff.Change> changed = previous == null ? List.of()
+                    : RevisionDiffer.diff("run " + previous.run(), previous.json(), "run " + run, json).results();
             issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json,
-                    Outcome.of(results));
+                    Outcome.of(results), previous == null ? 0 : previous.run(), changed);
         } catch (InputException e) {
             e.problems().forEach(p -> problems.add(ShownProblem.of(p)));
         } catch (Throwable e) {

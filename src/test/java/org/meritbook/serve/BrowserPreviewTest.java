@@ -98,6 +98,11 @@ class BrowserPreviewTest {
         waitFor("the dossier is reloaded with the new weighting",
                 b -> dossierText().contains("Weighting none") || dossierText().contains("Weighting\nnone"));
         assertTrue(browser.findElement(By.id("problems")).getDomAttribute("hidden") != null, "problems hidden again");
+        waitFor("the changed values are listed", b -> b.findElement(By.id("changes")).getDomAttribute("hidden") == null);
+        assertTrue(browser.findElement(By.id("change-list")).getText().contains("slope"),
+                browser.findElement(By.id("change-list")).getText());
+        Files.createDirectories(Path.of("target", "screenshots"));
+        Files.write(Path.of("target", "screenshots", "live-changed.png"), ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
     }
 
     @Test

@@ -18,8 +18,13 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Duration;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
+import java.util.Set;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -95,6 +100,43 @@ class LiveSessionTest {
                 && weighting().equals("none"));
         assertTrue(status.get("dossier_run").asInt() > first);
         assertEquals("none", weighting());
+    }
+
+    @Test
+    void theQuantitiesAReRunMovedAreListedWithOldAndNewValue() throws Exception {
+        JsonNode first = awaitStatus(s -> s.get("state").asText().equals("ok"));
+        assertEquals(0, first.get("changes").get("since_run").asInt());
+        assertEquals(0, first.get("changes").get("results").size(), "nothing to compare the first run with");
+        Map<String, String> before = values(JSON.readTree(get("/results.json").body()));
+        save(Files.readString(notebook).replaceFirst("weighting: 1/x", "weighting: none"));
+        JsonNode status = awaitStatus(s -> s.get("state").asText().equals("ok") && s.get("dossier_run").asInt() > 1);
+        Map<String, String> after = values(JSON.readTree(get("/results.json").body()));
+
+        assertEquals(1, status.get("changes").get("since_run").asInt());
+        Map<String, String[]> listed = new LinkedHashMap<>();
+        for (JsonNode c : status.get("changes").get("results")) {
+            listed.put(c.get("section").asText() + "." + c.get("name").asText(),
+                    new String[] {c.get("before").isNull() ? null : c.get("before").asText(), c.get("after").isNull() ? null : c.get("after").asText()});
+        }
+        Set<String> moved = new LinkedHashSet<>(before.keySet());
+        moved.addAll(after.keySet());
+        moved.removeIf(k -> Objects.equals(before.get(k), after.get(k)));
+        assertEquals(moved, listed.keySet(), "exactly the quantities whose value changed");
+        assertTrue(listed.containsKey("linearity.slope"), "another weighting moves the slope: " + listed.keySet());
+        for (Map.Entry<String, String[]> e : listed.entrySet()) {
+            assertTrue(e.getValue()[0] == null || e.getValue()[0].startsWith(before.get(e.getKey())), e.getKey());
+            assertTrue(e.getValue()[1] == null || e.getValue()[1].startsWith(after.get(e.getKey())), e.getKey());
+        }
+    }
+
+    /** section.quantity to its value as results.json writes it. */
+    private static Map<String, String> values(JsonNode results) {
+        Map<String, String> out = new LinkedHashMap<>();
+        for (JsonNode section : results.get("sections")) {
+            section.get("quantities").fields().forEachRemaining(
+                    q -> out.put(section.get("id").asText() + "." + q.getKey(), q.getValue().get("value").asText()));
+        }
+        return out;
     }
 
     @Test
