@@ -40,10 +40,12 @@ public record Outcome(int passed, int failed, int notEvaluable, int warnings) {
         int warnings = results.warnings().size();
         for (SectionResult section : results.sections()) {
             for (Verdict v : section.verdicts()) {
-                switch (v.outcome()) {
-                    case PASS -> passed++;
-                    case FAIL -> failed++;
-                    case NOT_EVALUABLE -> notEvaluable++;
+                if (v.outcome() == Verdict.Outcome.PASS) {
+                    passed++;
+                } else if (v.outcome() == Verdict.Outcome.FAIL) {
+                    failed++;
+                } else {
+                    notEvaluable++;
                 }
             }
             warnings += section.warnings().size();

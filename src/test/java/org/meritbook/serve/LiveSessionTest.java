@@ -115,8 +115,8 @@ class LiveSessionTest {
         assertEquals(1, status.get("changes").get("since_run").asInt());
         Map<String, String[]> listed = new LinkedHashMap<>();
         for (JsonNode c : status.get("changes").get("results")) {
-            listed.put(c.get("section").asText() + "." + c.get("name").asText(),
-                    new String[] {c.get("before").isNull() ? null : c.get("before").asText(), c.get("after").isNull() ? null : c.get("after").asText()});
+            listed.put(c.get("section").asText() + "." + c.get("name").asText(), new String[] {
+                c.get("before").isNull() ? null : c.get("before").asText(), c.get("after").isNull() ? null : c.get("after").asText()});
         }
         Set<String> moved = new LinkedHashSet<>(before.keySet());
         moved.addAll(after.keySet());
