@@ -33,6 +33,11 @@ public final class RevisionDiffer {
         return diff(before.getFileName().toString(), read(before), after.getFileName().toString(), read(after));
     }
 
+    /** Two runs' results.json as bytes (the live preview keeps them in memory). */
+    public static RevisionDiff diff(String beforeLabel, byte[] before, String afterLabel, byte[] after) {
+        return diff(beforeLabel, ReceivedResults.parse(before, beforeLabel), afterLabel, ReceivedResults.parse(after, afterLabel));
+    }
+
     static RevisionDiff diff(String beforeLabel, JsonNode before, String afterLabel, JsonNode after) {
         return new RevisionDiff(beforeLabel, afterLabel,
                 changes(inputs(before), inputs(after)),

@@ -22,11 +22,17 @@ final class LivePage {
             <script src="/live.js" defer></script>
             </head>
             <body>
-            <header class="bar" id="bar" data-state="running">
+            <header class="bar level-none" id="bar" data-state="running">
               <div class="ident">
                 <span class="mark">meritbook</span>
                 <span class="kind">live preview</span>
                 <span class="notebook" id="notebook"></span>
+              </div>
+              <div class="verdict" id="verdict">
+                <span class="verdict-mark" id="verdict-mark" aria-hidden="true">&middot;</span>
+                <span class="verdict-word" id="verdict-word">no outcome yet</span>
+                <span class="tally"><b id="n-failed">&ndash;</b> failed <b id="n-na">&ndash;</b> not evaluable
+                  <b id="n-passed">&ndash;</b> passed <b id="n-warnings">&ndash;</b> warnings</span>
               </div>
               <dl class="facts">
                 <div class="state"><dt>state</dt><dd id="state">starting</dd></div>
@@ -36,10 +42,19 @@ final class LivePage {
                 <div><dt>run</dt><dd id="run">0</dd></div>
               </dl>
             </header>
+            <p class="announce" id="announce" aria-live="polite"></p>
             <section class="problems" id="problems" hidden>
               <h2 id="problems-title">The input needs attention</h2>
               <p class="note" id="problems-note"></p>
               <ol id="problem-list"></ol>
+            </section>
+            <section class="changes" id="changes" hidden aria-labelledby="changes-title">
+              <h2 id="changes-title">Changed values</h2>
+              <table>
+                <thead><tr><th scope="col">section</th><th scope="col">quantity</th><th scope="col">was</th>
+                  <th scope="col" aria-hidden="true"></th><th scope="col">now</th></tr></thead>
+                <tbody id="change-list"></tbody>
+              </table>
             </section>
             <p class="waiting" id="waiting">The study is running for the first time.</p>
             <main><iframe id="dossier" title="Dossier preview"></iframe></main>
@@ -50,7 +65,7 @@ final class LivePage {
 
     static final byte[] CSS = """
             :root { --ink: #1d2430; --muted: #5d6673; --rule: #d4d8de; --paper: #f7f7f5;
-                    --ok: #2e6b4f; --busy: #6a5d1f; --bad: #9b2f22; }
+                    --ok: #2e6b4f; --busy: #6a5d1f; --bad: #9b2f22; --warn: #8a5a00; }
             [hidden] { display: none !important; }
             html, body { height: 100%; margin: 0; }
             body { display: flex; flex-direction: column; background: var(--paper); color: var(--ink);
@@ -58,7 +73,20 @@ final class LivePage {
             .bar { display: flex; flex-wrap: wrap; align-items: center; justify-content: space-between; gap: 8px 24px;
                    padding: 8px 16px; background: #fff; border-bottom: 1px solid var(--rule); border-left: 6px solid var(--busy); }
             .bar[data-state="ok"] { border-left-color: var(--ok); }
+            .bar.level-fail { border-left-color: var(--bad); }
+            .bar.level-attention { border-left-color: var(--warn); }
+            .bar.level-clear { border-left-color: var(--ok); }
             .bar[data-state="error"] { border-left-color: var(--bad); }
+            .verdict { display: flex; align-items: baseline; gap: 8px; padding: 3px 10px; border-radius: 4px;
+                       background: #eef0f2; font-variant-numeric: tabular-nums; }
+            .verdict-mark { font-weight: 700; }
+            .verdict-word { font-weight: 600; }
+            .tally { color: var(--muted); font-size: 12px; }
+            .tally b { color: var(--ink); font-weight: 600; margin-left: 4px; }
+            .level-fail .verdict { background: #f7e3df; color: var(--bad); }
+            .level-attention .verdict { background: #f6eed6; color: var(--warn); }
+            .level-clear .verdict { background: #e2efe7; color: var(--ok); }
+            .announce { position: absolute; width: 1px; height: 1px; overflow: hidden; clip-path: inset(50%); white-space: nowrap; }
             .ident { display: flex; align-items: baseline; gap: 10px; min-width: 0; }
             .mark { font-weight: 700; letter-spacing: 0.02em; }
             .kind { color: var(--muted); }
@@ -69,7 +97,7 @@ final class LivePage {
             .facts dt { color: var(--muted); font-size: 12px; }
             .facts dd { margin: 0; font-variant-numeric: tabular-nums; }
             .state dd { font-weight: 600; }
-            .bar[data-state="ok"] .state dd { color: var(--ok); }
+            .bar[data-state="ok"] .state dd { color: var(--ink); }
             .bar[data-state="running"] .state dd { color: var(--busy); }
             .bar[data-state="error"] .state dd { color: var(--bad); }
             .problems { padding: 10px 16px 12px; background: #fff; border-bottom: 3px solid var(--bad);
@@ -82,6 +110,17 @@ final class LivePage {
             .problems .key { color: var(--muted); font-size: 12px; margin-left: 8px; }
             .problems .line { margin: 1px 0 0; }
             .problems .line span { color: var(--muted); display: inline-block; min-width: 5.5em; }
+            .changes { padding: 8px 16px 10px; background: #fbfaf4; border-bottom: 1px solid var(--rule);
+                       max-height: 28vh; overflow: auto; }
+            .changes h2 { margin: 0 0 4px; font-size: 13px; font-weight: 600; color: var(--muted); text-transform: lowercase;
+                          letter-spacing: 0.04em; }
+            .changes table { border-collapse: collapse; font-variant-numeric: tabular-nums; }
+            .changes th { text-align: left; font-weight: 400; font-size: 12px; color: var(--muted); padding: 0 14px 2px 0; }
+            .changes td { padding: 1px 14px 1px 0; vertical-align: baseline; white-space: nowrap; }
+            .changes td.name { font-family: ui-monospace, "DejaVu Sans Mono", monospace; }
+            .changes td.was { color: var(--muted); text-decoration: line-through; text-decoration-color: #b9bec6; }
+            .changes td.now { font-weight: 600; }
+            .changes td.arrow { color: var(--muted); }
             .waiting { margin: 24px 16px; color: var(--muted); }
             main { flex: 1; min-height: 0; display: flex; }
             iframe { flex: 1; border: 0; background: #fff; }
@@ -94,6 +133,14 @@ final class LivePage {
               const byId = (id) => document.getElementById(id);
               const words = { ok: 'up to date', running: 'running', error: 'input needs attention' };
               let shown = 0;
+              let spoken = '';
+              // A word and a mark for each level, so colour is never the only signal.
+              const levels = {
+                fail: ['\u2717', 'criteria failed'],
+                attention: ['!', 'check before issuing'],
+                clear: ['\u2713', 'nothing to flag'],
+                none: ['\u00b7', 'no outcome yet']
+              };
               let keepScroll = 0;
 
               function set(id, text) { byId(id).textContent = text; }
@@ -120,7 +167,50 @@ final class LivePage {
                 return li;
               }
 
+              function showVerdicts(v, run) {
+                const level = v ? v.level : 'none';
+                byId('bar').className = 'bar level-' + level;
+                set('verdict-mark', levels[level][0]);
+                set('verdict-word', level === 'clear' && v.passed > 0 ? 'criteria met' : levels[level][1]);
+                const count = (n) => (v ? String(n) : '\u2013');
+                set('n-failed', count(v && v.failed));
+                set('n-na', count(v && v.not_evaluable));
+                set('n-passed', count(v && v.passed));
+                set('n-warnings', count(v && v.warnings));
+                if (!v) { return; }
+                const sentence = 'Acceptance, run ' + run + ': ' + byId('verdict-word').textContent + '; ' + v.failed + ' failed, '
+                  + v.not_evaluable + ' not evaluable, ' + v.passed + ' passed, ' + v.warnings + ' warnings.';
+                const key = [v.level, v.failed, v.not_evaluable, v.passed, v.warnings].join('/');
+                // Said once per change of outcome, not once per run.
+                if (key !== spoken) {
+                  spoken = key;
+                  set('announce', sentence);
+                }
+              }
+
+              function changeRow(c) {
+                const tr = document.createElement('tr');
+                const cells = [['section', c.section], ['name', c.name], ['was', c.before === null ? '(new)' : c.before],
+                  ['arrow', '\u2192'], ['now', c.after === null ? '(removed)' : c.after]];
+                for (const [cls, text] of cells) {
+                  const td = document.createElement('td');
+                  td.className = cls;
+                  td.textContent = text;
+                  tr.append(td);
+                }
+                return tr;
+              }
+
+              function showChanges(c, run) {
+                byId('change-list').replaceChildren(...c.results.map(changeRow));
+                byId('changes').hidden = c.results.length === 0;
+                set('changes-title', c.results.length + (c.results.length === 1 ? ' value' : ' values')
+                  + ' changed in run ' + run + ' (since run ' + c.since_run + ')');
+              }
+
               function show(s) {
+                showVerdicts(s.verdicts, s.dossier_run);
+                showChanges(s.changes, s.dossier_run);
                 byId('bar').dataset.state = s.state;
                 set('state', words[s.state] || s.state);
                 set('notebook', s.notebook);
@@ -159,6 +249,8 @@ final class LivePage {
                 setTimeout(poll, 1000);
               }
 
+              // The cookie now carries the token; keep it out of the address bar and the history.
+              if (location.search.indexOf('token=') >= 0) { history.replaceState(null, '', '/'); }
               // Keep the reader's place in the dossier across reloads.
               byId('dossier').addEventListener('load', () => {
                 try { byId('dossier').contentWindow.scrollTo(0, keepScroll); } catch (e) { /* not reachable */ }

@@ -9,6 +9,10 @@ import java.net.InetAddress;
 import java.net.InetSocketAddress;
 import java.net.URI;
 import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.SecureRandom;
+import java.util.Base64;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
@@ -19,6 +23,9 @@ import java.util.concurrent.atomic.AtomicInteger;
  * The routes of the live preview, on the JDK's own HTTP server bound to 127.0.0.1 only:
  * {@code /} the page, {@code /status} the state as JSON, {@code /dossier} the latest good HTML
  * dossier, {@code /results.json} its results. Read-only: any method but GET and HEAD is refused.
+ * Every request must carry the session's random token, as {@code ?token=} (the printed address) or
+ * as the cookie the first tokened answer sets, so another local user or a page in the browser that
+ * guesses the port reads nothing.
  */
 public final class LiveServer implements AutoCloseable {
     private static final String HTML = "text/html; charset=utf-8";
@@ -32,11 +39,20 @@ public final class LiveServer implements AutoCloseable {
     private final HttpServer server;
     private final ExecutorService executor;
     private final LiveStudy study;
+    private final String token;
 
-    private LiveServer(HttpServer server, ExecutorService executor, LiveStudy study) {
+    private LiveServer(HttpServer server, ExecutorService executor, LiveStudy study, String token) {
         this.server = server;
         this.executor = executor;
         this.study = study;
+        this.token = token;
+    }
+
+    /** 32 random bytes, URL-safe Base64 without padding (43 characters). */
+    static String newToken() {
+        byte[] random = new byte[32];
+        new SecureRandom().nextBytes(random);
+        return Base64.getUrlEncoder().withoutPadding().encodeToString(random);
     }
 
     /** Binds 127.0.0.1:port (0 for any free port) and starts answering. */
@@ -49,7 +65,7 @@ public final class LiveServer implements AutoCloseable {
             t.setDaemon(true);
             return t;
         });
-        LiveServer live = new LiveServer(server, executor, study);
+        LiveServer live = new LiveServer(server, executor, study, newToken());
         server.createContext("/", live::handle);
         server.setExecutor(executor);
         server.start();
@@ -60,8 +76,19 @@ public final class LiveServer implements AutoCloseable {
         return server.getAddress();
     }
 
+    /** The address to open, token included. */
     public URI uri() {
+        return URI.create(base() + "?token=" + token);
+    }
+
+    /** The server's root without the token (for messages that must not leak it). */
+    public URI base() {
         return URI.create("http://127.0.0.1:" + address().getPort() + "/");
+    }
+
+    /** The cookie's name carries the port: cookies are not kept apart by port, two previews would clash. */
+    String cookieName() {
+        return "meritbook_live_" + address().getPort();
     }
 
     private void handle(HttpExchange exchange) throws IOException {
@@ -74,7 +101,15 @@ public final class LiveServer implements AutoCloseable {
             }
             if (!fromThisMachine(exchange)) {
                 // A page elsewhere could point a host name at 127.0.0.1 (DNS rebinding) and read the lab's data.
-                send(exchange, 403, "text/plain; charset=utf-8", bytes("Open the preview as " + uri() + "\n"));
+                send(exchange, 403, "text/plain; charset=utf-8", bytes("Open the preview as " + base() + "\n"));
+                return;
+            }
+            if (queryToken(exchange)) {
+                exchange.getResponseHeaders().add("Set-Cookie", cookieName() + "=" + token
+                        + "; Path=/; HttpOnly; SameSite=Strict");
+            } else if (!cookieToken(exchange)) {
+                send(exchange, 403, "text/plain; charset=utf-8",
+                        bytes("Open the preview at the address meritbook serve printed (it carries the access token).\n"));
                 return;
             }
             route(exchange);
@@ -108,8 +143,39 @@ public final class LiveServer implements AutoCloseable {
                     send(exchange, 200, JSON, issued.json());
                 }
             }
-            default -> send(exchange, 404, "text/plain; charset=utf-8", bytes("Not found. The preview is at " + uri() + "\n"));
+            default -> send(exchange, 404, "text/plain; charset=utf-8", bytes("Not found.\n"));
         }
+    }
+
+    private boolean queryToken(HttpExchange exchange) {
+        String query = exchange.getRequestURI().getRawQuery();
+        if (query == null) {
+            return false;
+        }
+        for (String pair : query.split("&")) {
+            if (pair.startsWith("token=") && matches(pair.substring("token=".length()))) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private boolean cookieToken(HttpExchange exchange) {
+        String prefix = cookieName() + "=";
+        for (String header : exchange.getRequestHeaders().getOrDefault("Cookie", List.of())) {
+            for (String cookie : header.split(";")) {
+                String c = cookie.trim();
+                if (c.startsWith(prefix) && matches(c.substring(prefix.length()))) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    /** Compared in constant time, so response timing tells nothing about a guessed prefix. */
+    private boolean matches(String offered) {
+        return MessageDigest.isEqual(offered.getBytes(StandardCharsets.US_ASCII), token.getBytes(StandardCharsets.US_ASCII));
     }
 
     /** Requests must name this server by its loopback address or as localhost. */

@@ -10,12 +10,15 @@ import java.util.Set;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Consumer;
+import java.util.function.Function;
 import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.error.InputException;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.revision.ResultsJson;
+import org.meritbook.revision.RevisionDiff;
+import org.meritbook.revision.RevisionDiffer;
 import org.meritbook.study.SourceFile;
 import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
@@ -28,7 +31,7 @@ import org.meritbook.study.StudyParser;
  */
 public final class LiveStudy implements AutoCloseable {
     private final Path notebook;
-    private final StudyRunner runner = StudyRunner.withBuiltInAnalyses();
+    private final Function<Study, StudyResults> runner;
     private final DossierRenderer renderer;
     private final Consumer<Set<Path>> inputsChanged;
     private final Consumer<Snapshot> finished;
@@ -45,6 +48,13 @@ public final class LiveStudy implements AutoCloseable {
      * @param finished      told each completed run's snapshot (for the console)
      */
     public LiveStudy(Path notebook, DossierRenderer renderer, Consumer<Set<Path>> inputsChanged, Consumer<Snapshot> finished) {
+        this(notebook, renderer, inputsChanged, finished, StudyRunner.withBuiltInAnalyses()::run);
+    }
+
+    /** With another pipeline step between parse and rendering (tests inject failures here). */
+    LiveStudy(Path notebook, DossierRenderer renderer, Consumer<Set<Path>> inputsChanged, Consumer<Snapshot> finished,
+              Function<Study, StudyResults> runner) {
+        this.runner = runner;
         this.notebook = notebook.toAbsolutePath().normalize();
         this.renderer = renderer;
         this.inputsChanged = inputsChanged;
@@ -90,8 +100,20 @@ public final class LiveStudy implements AutoCloseable {
                 }
                 requested = false;
             }
-            runOnce();
+            try {
+                runOnce();
+            } catch (Throwable e) {
+                // Only the bookkeeping around the pipeline or the console callback can get here; the
+                // worker lives on, and a run left half done is not shown as running for ever.
+                current.updateAndGet(s -> s.state() == Snapshot.State.RUNNING ? failed(s, e) : s);
+                e.printStackTrace(System.err);
+            }
         }
+    }
+
+    private Snapshot failed(Snapshot before, Throwable e) {
+        return new Snapshot(before.run() + 1, Snapshot.State.ERROR, List.of(ShownProblem.internal(notebook.getFileName().toString(), e)),
+                before.elapsedMs(), Instant.now(), before.issued());
     }
 
     private void runOnce() {
@@ -103,14 +125,21 @@ public final class LiveStudy implements AutoCloseable {
         try {
             Study study = StudyParser.parse(notebook);
             inputsChanged.accept(inputs(study));
-            StudyResults results = runner.run(study);
+            StudyResults results = runner.apply(study);
             byte[] json = ResultsJson.toBytes(results);
             byte[] html = renderer.renderHtml(results, json);
-            issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json);
+            Snapshot.Issued previous = issued;
+            // Compared with the last successful run, so a fix after a broken save lists what the edits moved.
+            List<RevisionDiff.Change> changed = previous == null ? List.of()
+                    : RevisionDiffer.diff("run " + previous.run(), previous.json(), "run " + run, json).results();
+            issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json,
+                    Outcome.of(results), previous == null ? 0 : previous.run(), changed);
         } catch (InputException e) {
             e.problems().forEach(p -> problems.add(ShownProblem.of(p)));
-        } catch (RuntimeException e) {
-            // The preview keeps serving; the error is shown on the page and its stack trace on the console.
+        } catch (Throwable e) {
+            // Anything else, even OutOfMemoryError or StackOverflowError: the run's objects are garbage
+            // now, so the preview keeps serving; the error is shown on the page, its stack trace on the
+            // console, and the next save runs again.
             problems.add(ShownProblem.internal(notebook.getFileName().toString(), e));
             e.printStackTrace(System.err);
         }

@@ -21,7 +21,7 @@ public record ShownProblem(String key, String where, String expected, String fou
         return new ShownProblem(p.key().name(), p.where(), p.expected(), p.found(), p.fix(), p.message());
     }
 
-    static ShownProblem internal(String where, RuntimeException e) {
+    static ShownProblem internal(String where, Throwable e) {
         String found = e.getClass().getName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
         String fix = "Please report it with the input that caused it; the console shows the details.";
         return new ShownProblem("INTERNAL_ERROR", where, "a completed run", found, fix,

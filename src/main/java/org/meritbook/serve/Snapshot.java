@@ -3,6 +3,7 @@ package org.meritbook.serve;
 import java.time.Instant;
 import java.util.List;
 import java.util.Objects;
+import org.meritbook.revision.RevisionDiff;
 
 /**
  * What the live study shows at one moment; replaced as a whole, never changed, so a request
@@ -35,10 +36,16 @@ public record Snapshot(int run, State state, List<ShownProblem> problems, long e
      * @param revision the revision in the notebook's front matter
      * @param html     the HTML dossier
      * @param json     results.json
+     * @param outcome  the acceptance outcome counted from the run's results
+     * @param sinceRun the earlier successful run the changes are counted from, or 0 when this is the first
+     * @param changed  quantities whose value changed since that run ({@code section.name}, old, new; null for added or removed)
      */
-    public record Issued(int run, String title, int revision, byte[] html, byte[] json) {
+    public record Issued(int run, String title, int revision, byte[] html, byte[] json, Outcome outcome, int sinceRun,
+                         List<RevisionDiff.Change> changed) {
         public Issued {
+            changed = List.copyOf(changed);
             Objects.requireNonNull(title, "title");
+            Objects.requireNonNull(outcome, "outcome");
             Objects.requireNonNull(html, "html");
             Objects.requireNonNull(json, "json");
         }

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.charset.StandardCharsets;
+import org.meritbook.revision.RevisionDiff;
 
 /**
  * The body of {@code GET /status}. Written with Jackson, so any text from a notebook or a workbook
@@ -35,9 +36,25 @@ final class StatusJson {
         if (issued == null) {
             root.putNull("revision");
             root.putNull("title");
+            root.putNull("verdicts");
         } else {
             root.put("revision", issued.revision());
             root.put("title", issued.title());
+            // The outcome of the dossier shown (dossier_run), which a later failed run does not replace.
+            Outcome o = issued.outcome();
+            root.putObject("verdicts").put("passed", o.passed()).put("failed", o.failed())
+                    .put("not_evaluable", o.notEvaluable()).put("warnings", o.warnings()).put("level", o.level().word());
+        }
+        ObjectNode changes = root.putObject("changes");
+        changes.put("since_run", issued == null ? 0 : issued.sinceRun());
+        ArrayNode changed = changes.putArray("results");
+        if (issued != null) {
+            for (RevisionDiff.Change c : issued.changed()) {
+                // what is section.quantity; quantity names may hold ':' but section ids hold no '.'.
+                int dot = c.what().indexOf('.');
+                changed.addObject().put("section", dot < 0 ? "" : c.what().substring(0, dot))
+                        .put("name", c.what().substring(dot + 1)).put("before", c.before()).put("after", c.after());
+            }
         }
         // The run whose dossier /dossier serves: the page reloads its view when this changes.
         root.put("dossier_run", issued == null ? 0 : issued.run());

@@ -1,5 +1,7 @@
 package org.meritbook.serve;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
@@ -13,7 +15,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meritbook.dossier.DossierRenderer;
 import org.openqa.selenium.By;
+import org.openqa.selenium.OutputType;
+import org.openqa.selenium.TakesScreenshot;
 import org.openqa.selenium.WebDriver;
+import org.openqa.selenium.WebElement;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.chrome.ChromeDriverService;
 import org.openqa.selenium.chrome.ChromeOptions;
@@ -73,8 +78,11 @@ class BrowserPreviewTest {
 
     @Test
     void aBrokenNotebookIsShownWithItsLineAndAFixReloadsTheDossier() throws Exception {
+        browser.get(session.server().base().toString());
+        assertTrue(browser.findElements(By.id("state")).isEmpty(), "without the token the page is refused");
         browser.get(session.uri().toString());
         waitFor("the first run is shown", b -> b.findElement(By.id("state")).getText().equals("up to date"));
+        assertTrue(!browser.getCurrentUrl().contains("token="), "the token leaves the address bar: " + browser.getCurrentUrl());
         waitFor("the dossier is shown", b -> dossierText().contains("Validation of 5-hydroxymethylfurfural"));
 
         Path notebook = dir.resolve(NAME + ".md");
@@ -90,5 +98,32 @@ class BrowserPreviewTest {
         waitFor("the dossier is reloaded with the new weighting",
                 b -> dossierText().contains("Weighting none") || dossierText().contains("Weighting\nnone"));
         assertTrue(browser.findElement(By.id("problems")).getDomAttribute("hidden") != null, "problems hidden again");
+        waitFor("the changed values are listed", b -> b.findElement(By.id("changes")).getDomAttribute("hidden") == null);
+        assertTrue(browser.findElement(By.id("change-list")).getText().contains("slope"),
+                browser.findElement(By.id("change-list")).getText());
+        Files.createDirectories(Path.of("target", "screenshots"));
+        Files.write(Path.of("target", "screenshots", "live-changed.png"), ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
+    }
+
+    @Test
+    void aFailingCriterionTurnsTheBarRedAndIsAnnounced() throws Exception {
+        browser.get(session.uri().toString());
+        waitFor("the first run is shown", b -> b.findElement(By.id("state")).getText().equals("up to date"));
+        waitFor("the outcome is shown", b -> !b.findElement(By.id("bar")).getDomAttribute("class").contains("level-none"));
+        assertFalse(browser.findElement(By.id("bar")).getDomAttribute("class").contains("level-fail"),
+                "the demo fails no criterion");
+        // r² is below 1 for real data: this profile must fail.
+        Files.writeString(dir.resolve("impossible.yaml"), "name: impossible linearity\nrules:\n"
+                + "  - quantity: r_squared\n    at-least: 1\n    characteristic: Linearity\n");
+        Path notebook = dir.resolve(NAME + ".md");
+        Files.writeString(notebook, Files.readString(notebook).replaceFirst("criteria: linearity-basic\n", "criteria: impossible.yaml\n"));
+        waitFor("the bar turns to the failed state", b -> b.findElement(By.id("bar")).getDomAttribute("class").contains("level-fail"));
+        assertEquals("criteria failed", browser.findElement(By.id("verdict-word")).getText());
+        assertTrue(Integer.parseInt(browser.findElement(By.id("n-failed")).getText()) > 0);
+        WebElement announce = browser.findElement(By.id("announce"));
+        assertEquals("polite", announce.getDomAttribute("aria-live"));
+        assertTrue(announce.getDomProperty("textContent").contains("criteria failed"), announce.getDomProperty("textContent"));
+        Files.createDirectories(Path.of("target", "screenshots"));
+        Files.write(Path.of("target", "screenshots", "live-failed.png"), ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
     }
 }

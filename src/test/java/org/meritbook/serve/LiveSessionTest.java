@@ -18,8 +18,13 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Duration;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
+import java.util.Set;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -98,6 +103,44 @@ class LiveSessionTest {
     }
 
     @Test
+    void theQuantitiesAReRunMovedAreListedWithOldAndNewValue() throws Exception {
+        JsonNode first = awaitStatus(s -> s.get("state").asText().equals("ok"));
+        assertEquals(0, first.get("changes").get("since_run").asInt());
+        assertEquals(0, first.get("changes").get("results").size(), "nothing to compare the first run with");
+        Map<String, String> before = values(JSON.readTree(get("/results.json").body()));
+        // The first cell's weighting line, whatever the demo chooses there, becomes an unweighted fit.
+        save(Files.readString(notebook).replaceFirst("\nweighting: (?!none\n)[^\n]+\n", "\nweighting: none\n"));
+        JsonNode status = awaitStatus(s -> s.get("state").asText().equals("ok") && s.get("dossier_run").asInt() > 1);
+        Map<String, String> after = values(JSON.readTree(get("/results.json").body()));
+
+        assertEquals(1, status.get("changes").get("since_run").asInt());
+        Map<String, String[]> listed = new LinkedHashMap<>();
+        for (JsonNode c : status.get("changes").get("results")) {
+            listed.put(c.get("section").asText() + "." + c.get("name").asText(), new String[] {
+                c.get("before").isNull() ? null : c.get("before").asText(), c.get("after").isNull() ? null : c.get("after").asText()});
+        }
+        Set<String> moved = new LinkedHashSet<>(before.keySet());
+        moved.addAll(after.keySet());
+        moved.removeIf(k -> Objects.equals(before.get(k), after.get(k)));
+        assertEquals(moved, listed.keySet(), "exactly the quantities whose value changed");
+        assertTrue(listed.containsKey("linearity.slope"), "another weighting moves the slope: " + listed.keySet());
+        for (Map.Entry<String, String[]> e : listed.entrySet()) {
+            assertTrue(e.getValue()[0] == null || e.getValue()[0].startsWith(before.get(e.getKey())), e.getKey());
+            assertTrue(e.getValue()[1] == null || e.getValue()[1].startsWith(after.get(e.getKey())), e.getKey());
+        }
+    }
+
+    /** section.quantity to its value as results.json writes it. */
+    private static Map<String, String> values(JsonNode results) {
+        Map<String, String> out = new LinkedHashMap<>();
+        for (JsonNode section : results.get("sections")) {
+            section.get("quantities").fields().forEachRemaining(
+                    q -> out.put(section.get("id").asText() + "." + q.getKey(), q.getValue().get("value").asText()));
+        }
+        return out;
+    }
+
+    @Test
     void aBrokenNotebookIsReportedWhileTheLastGoodDossierStaysServed() throws Exception {
         awaitStatus(s -> s.get("state").asText().equals("ok"));
         String good = get("/dossier").body();
@@ -162,12 +205,61 @@ class LiveSessionTest {
         assertEquals(405, client.send(post, HttpResponse.BodyHandlers.discarding()).statusCode());
     }
 
+    @Test
+    void everyRequestNeedsTheTokenAsQueryOrCookie() throws Exception {
+        awaitStatus(s -> s.get("state").asText().equals("ok"));
+        String token = session.uri().getRawQuery().substring("token=".length());
+        assertTrue(token.matches("[A-Za-z0-9_-]{43}"), "32 random bytes, URL-safe Base64: " + token);
+        for (String path : List.of("/", "/status", "/dossier", "/results.json", "/live.js", "/elsewhere")) {
+            HttpResponse<String> bare = client.send(HttpRequest.newBuilder(session.uri().resolve(path)).timeout(WAIT).build(),
+                    HttpResponse.BodyHandlers.ofString());
+            assertEquals(403, bare.statusCode(), path + " without the token");
+            assertFalse(bare.body().contains("HMF") || bare.body().contains(token), path + " shows nothing of the study");
+            HttpResponse<String> wrong = client.send(HttpRequest.newBuilder(URI.create(session.uri().resolve(path)
+                    + "?token=" + token.substring(1) + "x")).timeout(WAIT).build(), HttpResponse.BodyHandlers.ofString());
+            assertEquals(403, wrong.statusCode(), path + " with a wrong token");
+        }
+        assertFalse(get("/dossier").headers().firstValue("Set-Cookie").isEmpty(), "a tokened answer sets the cookie");
+        String cookie = get("/").headers().firstValue("Set-Cookie").orElseThrow();
+        assertTrue(cookie.contains("HttpOnly") && cookie.contains("SameSite=Strict") && cookie.contains("Path=/"), cookie);
+        String pair = cookie.substring(0, cookie.indexOf(';'));
+        HttpResponse<String> byCookie = client.send(HttpRequest.newBuilder(session.uri().resolve("/dossier"))
+                .header("Cookie", pair).timeout(WAIT).build(), HttpResponse.BodyHandlers.ofString());
+        assertEquals(200, byCookie.statusCode());
+        assertTrue(byCookie.body().contains("HMF"));
+        HttpResponse<String> badCookie = client.send(HttpRequest.newBuilder(session.uri().resolve("/status"))
+                .header("Cookie", pair + "x").timeout(WAIT).build(), HttpResponse.BodyHandlers.ofString());
+        assertEquals(403, badCookie.statusCode());
+    }
+
+    @Test
+    void aFailingCriterionIsCountedInTheStatus() throws Exception {
+        JsonNode demo = awaitStatus(s -> s.get("state").asText().equals("ok")).get("verdicts");
+        int judged = demo.get("passed").asInt() + demo.get("failed").asInt() + demo.get("not_evaluable").asInt();
+        assertTrue(judged > 0, "the demo's profile judges something: " + demo);
+        int calibrations = JSON.readTree(get("/results.json").body()).findValues("kind").stream()
+                .filter(k -> k.asText().equals("calibration")).mapToInt(k -> 1).sum();
+        // r² <= 1 always and is below 1 for real data, so 'at least 1' fails and 'at least 0' passes, once per calibration.
+        Files.writeString(dir.resolve("impossible.yaml"), "name: impossible linearity\nrules:\n"
+                + "  - quantity: r_squared\n    at-least: 1\n    characteristic: Linearity\n"
+                + "  - quantity: r_squared\n    at-least: 0\n    characteristic: Linearity floor\n");
+        save(Files.readString(notebook).replaceFirst("criteria: linearity-basic\n", "criteria: impossible.yaml\n"));
+        JsonNode verdicts = awaitStatus(s -> s.get("state").asText().equals("ok")
+                && s.get("verdicts").get("failed").asInt() > 0).get("verdicts");
+        assertTrue(calibrations >= 1, "the demo has a calibration");
+        assertEquals(calibrations, verdicts.get("failed").asInt(), verdicts.toString());
+        assertEquals(calibrations, verdicts.get("passed").asInt(), verdicts.toString());
+        assertEquals(0, verdicts.get("not_evaluable").asInt());
+        assertEquals("fail", verdicts.get("level").asText());
+        assertTrue(verdicts.get("warnings").asInt() >= 0);
+    }
+
     /** Host is a restricted header for HttpClient; a raw socket sends it as a browser page could. */
     private int rawStatus(String path, String host) throws IOException {
         InetSocketAddress address = session.server().address();
         try (java.net.Socket socket = new java.net.Socket(address.getAddress(), address.getPort())) {
             socket.setSoTimeout((int) WAIT.toMillis());
-            String head = "GET " + path + " HTTP/1.1\r\nHost: " + host + "\r\nConnection: close\r\n\r\n";
+            String head = "GET " + path + "?" + session.uri().getRawQuery() + " HTTP/1.1\r\nHost: " + host + "\r\nConnection: close\r\n\r\n";
             socket.getOutputStream().write(head.getBytes(StandardCharsets.US_ASCII));
             String statusLine = new String(socket.getInputStream().readNBytes(12), StandardCharsets.US_ASCII);
             return Integer.parseInt(statusLine.substring(9, 12));
@@ -205,7 +297,7 @@ class LiveSessionTest {
     }
 
     private HttpResponse<String> get(String path) throws Exception {
-        URI uri = session.uri().resolve(path);
+        URI uri = URI.create(session.uri().resolve(path) + "?" + session.uri().getRawQuery());
         return client.send(HttpRequest.newBuilder(uri).timeout(WAIT).build(), HttpResponse.BodyHandlers.ofString());
     }
 }

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.CountDownLatch;
@@ -78,6 +79,46 @@ class LiveStudyTest {
         byte[] json = ResultsJson.toBytes(results);
         assertArrayEquals(json, first.issued().json());
         assertArrayEquals(renderer.render(results, json).html(), first.issued().html());
+    }
+
+    @Test
+    void aRunKilledByAnyThrowableIsReportedAndTheNextRequestRunsAgain() throws Exception {
+        Path notebook = demoCopy();
+        StudyRunner real = StudyRunner.withBuiltInAnalyses();
+        LinkedBlockingQueue<Throwable> failures = new LinkedBlockingQueue<>(List.of(
+                new StackOverflowError("injected deep recursion"), new OutOfMemoryError("injected: Java heap space"),
+                new AssertionError("injected unexpected state")));
+        LinkedBlockingQueue<Snapshot> done = new LinkedBlockingQueue<>();
+        LiveStudy study = new LiveStudy(notebook, new DossierRenderer(Optional.empty()), files -> { }, done::add, s -> {
+            Throwable t = failures.poll();
+            if (t instanceof Error e) {
+                throw e;
+            }
+            return real.run(s);
+        });
+        try {
+            study.start();
+            for (String error : List.of("java.lang.StackOverflowError: injected deep recursion",
+                    "java.lang.OutOfMemoryError: injected: Java heap space", "java.lang.AssertionError: injected unexpected state")) {
+                Snapshot failed = poll(done);
+                assertEquals(Snapshot.State.ERROR, failed.state(), error);
+                assertEquals(Snapshot.State.ERROR, study.snapshot().state(), "/status shows the failure, not running");
+                assertEquals(1, failed.problems().size());
+                ShownProblem p = failed.problems().get(0);
+                assertEquals("INTERNAL_ERROR", p.key());
+                assertEquals(NAME + ".md", p.where());
+                assertEquals(error, p.found());
+                assertEquals(null, failed.issued(), "nothing to show yet");
+                study.request();
+            }
+            Snapshot recovered = poll(done);
+            assertEquals(Snapshot.State.OK, recovered.state());
+            assertEquals(4, recovered.run());
+            assertEquals(4, recovered.issued().run());
+            assertEquals(List.of(), recovered.problems());
+        } finally {
+            study.close();
+        }
     }
 
     private static Snapshot poll(LinkedBlockingQueue<Snapshot> done) throws InterruptedException {
