@@ -82,7 +82,7 @@ final class DossierModelBuilder {
                     ? new SectionView(number, anchor, cell.id(), cell.kind().keyword(), cell.title(), before, after,
                     List.of(), SectionView.TableView.none(), List.of(),
                     List.of(), List.of(), List.of("This analysis produced no result."), false)
-                    : sectionBuilder.build(number, anchor, r, before, after);
+                    : sectionBuilder.build(number, anchor, r, before, after, results.supporting(r));
             sections.add(view);
             toc.add(new TocEntry(number, view.title(), anchor, List.of()));
         }
@@ -96,7 +96,7 @@ final class DossierModelBuilder {
         toc.add(new TocEntry("B", "Input manifest", "manifest", List.of()));
         toc.add(new TocEntry("C", "Software and environment", "software", List.of()));
 
-        Summary summary = summary(summaryNumber, results.sections(), sections, profile(results.acceptance()),
+        Summary summary = summary(summaryNumber, results, sections, profile(results.acceptance()),
                 results.warnings());
         Cover cover = new Cover(fm.title(), orDash(fm.method()), orDash(fm.laboratory()),
                 String.valueOf(fm.revision()), date.display(), orDash(fm.preparedBy()), status(fm), summary.counts(),
@@ -181,11 +181,13 @@ final class DossierModelBuilder {
                 p.rules().stream().map(r -> new ProfileRule(r.text(), r.source())).toList());
     }
 
-    private Summary summary(String number, List<SectionResult> results, List<SectionView> views, Profile profile,
+    private Summary summary(String number, StudyResults study, List<SectionView> views, Profile profile,
                             List<String> warnings) {
+        List<SectionResult> results = study.sections();
         List<SummaryRow> rows = new ArrayList<>();
-        int pass = 0, fail = 0, na = 0, none = 0;
+        int pass = 0, fail = 0, na = 0, none = 0, supportingVerdicts = 0;
         for (SectionResult r : results) {
+            boolean supporting = study.supporting(r);
             String anchor = views.stream().filter(v -> v.id().equals(r.id())).map(SectionView::anchor).findFirst()
                     .orElse("");
             String section = SectionViewBuilder.title(r);
@@ -202,7 +204,7 @@ final class DossierModelBuilder {
                 }
                 for (Verdict x : judged) {
                     rows.add(new SummaryRow(section, anchor, q.label(), v.withUnit(), v.uncertainty(), x.rule(),
-                            Verdicts.view(x)));
+                            Verdicts.view(x, supporting)));
                 }
             }
             for (Verdict x : r.verdicts()) {
@@ -212,7 +214,11 @@ final class DossierModelBuilder {
                 }
                 DisplayFormatter.Formatted v = q.map(format::quantity).orElse(null);
                 rows.add(new SummaryRow(section, anchor, x.characteristic(), v == null ? "—" : v.withUnit(),
-                        v == null ? "" : v.uncertainty(), x.rule(), Verdicts.view(x)));
+                        v == null ? "" : v.uncertainty(), x.rule(), Verdicts.view(x, supporting)));
+            }
+            if (supporting) {
+                supportingVerdicts += r.verdicts().size(); // shown above, kept out of the counts
+                continue;
             }
             for (Verdict x : r.verdicts()) {
                 switch (x.outcome()) {
@@ -231,7 +237,9 @@ final class DossierModelBuilder {
         }
         String counts = pass + " passed, " + fail + " failed, " + na + " not evaluable; " + none
                 + (none == 1 ? " result" : " results") + " without a criterion; " + all.size()
-                + (all.size() == 1 ? " warning" : " warnings");
+                + (all.size() == 1 ? " warning" : " warnings")
+                + (supportingVerdicts == 0 ? "" : "; " + supportingVerdicts + " verdict" + (supportingVerdicts == 1 ? "" : "s")
+                        + " of supporting checks not counted");
         return new Summary(number, rows, counts, profile, all);
     }
 
