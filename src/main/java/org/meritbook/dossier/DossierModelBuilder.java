@@ -128,10 +128,11 @@ final class DossierModelBuilder {
         }
         if (!"built in".equals(profile.origin())) {
             return "Acceptance criteria are the laboratory's own (profile file " + profile.origin()
-                    + ", attached); they are applied as written.";
+                    + ", attached); they are applied as written; " + profile.comparison().statement() + ".";
         }
         return "Acceptance criteria are defaults (profile " + fm.criteria() + ")"
-                + " and must be confirmed locally before this dossier is relied on.";
+                + " and must be confirmed locally before this dossier is relied on; "
+                + profile.comparison().statement() + ".";
     }
 
     private static Changes changes(RevisionContext earlier) {
@@ -177,7 +178,10 @@ final class DossierModelBuilder {
         if (p == null) {
             return new Profile(false, "", "", List.of());
         }
-        return new Profile(true, p.name() + " (" + p.origin() + ")", p.description(),
+        // How a value meets its limit is part of the criteria: stated beside them.
+        String compared = "Comparison: " + p.comparison().statement() + " (compare: " + p.comparison().word() + ").";
+        return new Profile(true, p.name() + " (" + p.origin() + ")",
+                p.description() == null || p.description().isBlank() ? compared : p.description() + " " + compared,
                 p.rules().stream().map(r -> new ProfileRule(r.text(), r.source())).toList());
     }
 

@@ -125,7 +125,8 @@ public final class ResultsJson {
         AcceptanceProfile profile = results.acceptance();
         if (profile != null) {
             ObjectNode a = n.putObject("acceptance");
-            a.put("name", profile.name()).put("origin", profile.origin()).put("description", profile.description());
+            a.put("name", profile.name()).put("origin", profile.origin()).put("description", profile.description())
+                    .put("compare", profile.comparison().word());
             ArrayNode rules = a.putArray("rules");
             for (Rule rule : profile.rules()) {
                 rules.addObject().put("rule", rule.text()).put("source", rule.source());
