@@ -183,7 +183,8 @@ class AcceptanceTest {
         var study = StudyParser.parse("---\ntitle: t\ncriteria: trace-metals\n---\n", dir.resolve("s.md"));
         InputException e = assertThrows(InputException.class, () -> AcceptanceProfiles.of(study));
         assertTrue(e.getMessage().startsWith("s.md line 3: expected a built-in acceptance profile "
-                + "(linearity-basic, bioanalytical-calibration, recovery-ppm, food-precision-10-mg-kg) or a .yaml profile file but found 'trace-metals'."),
+                + "(linearity-basic, bioanalytical-calibration, recovery-ppm, food-precision-10-mg-kg) or a .yaml profile file"
+                + " but found 'trace-metals'."),
                 e.getMessage());
     }
 
@@ -238,7 +239,8 @@ class AcceptanceTest {
     @Test
     void aProfileFileStatesItsComparisonAndAMisspeltOneIsRefused() throws Exception {
         Path file = dir.resolve("lab.yaml");
-        Files.writeString(file, "compare: rounded-to-limit\nrules:\n  - quantity: r_squared\n    at-least: 0.995\n");
+        Files.writeString(file,
+                "compare: rounded-to-limit\nrules:\n  - quantity: r_squared\n    at-least: 0.995\n");
         assertEquals(Comparison.ROUNDED_TO_LIMIT, ProfileFile.read(file, "lab.yaml").comparison());
         Files.writeString(file, "rules:\n  - quantity: r_squared\n    at-least: 0.995\n");
         assertEquals(Comparison.AS_COMPUTED, ProfileFile.read(file, "lab.yaml").comparison(), "the default");
