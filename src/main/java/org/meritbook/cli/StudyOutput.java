@@ -69,13 +69,22 @@ final class StudyOutput {
             out.println("  " + s.id() + ": " + summary + (s.warnings().isEmpty() ? ""
                     : " (" + s.warnings().size() + " warning" + (s.warnings().size() == 1 ? "" : "s") + ")"));
         }
-        List<Verdict> verdicts = results.sections().stream().flatMap(s -> s.verdicts().stream()).toList();
+        // Supporting cells are judged and shown, but only reporting cells decide the outcome.
+        List<Verdict> verdicts = results.reportingVerdicts();
         if (results.study().frontMatter().criteria() != null) {
             out.println("  acceptance (" + results.study().frontMatter().criteria() + "): "
                     + count(verdicts, Verdict.Outcome.PASS) + " passed, " + count(verdicts, Verdict.Outcome.FAIL)
                     + " failed, " + count(verdicts, Verdict.Outcome.NOT_EVALUABLE) + " not evaluable");
             verdicts.stream().filter(v -> v.outcome() == Verdict.Outcome.FAIL)
                     .forEach(v -> out.println("    FAIL " + v.characteristic() + ": " + v.reason()));
+            for (SectionResult s : results.sections()) {
+                if (results.supporting(s) && !s.verdicts().isEmpty()) {
+                    List<Verdict> own = s.verdicts();
+                    out.println("  supporting " + s.id() + " (not counted): " + count(own, Verdict.Outcome.PASS)
+                            + " passed, " + count(own, Verdict.Outcome.FAIL) + " failed, "
+                            + count(own, Verdict.Outcome.NOT_EVALUABLE) + " not evaluable");
+                }
+            }
         }
         String verb = switch (published.outcome()) {
             case NEW -> "wrote ";

@@ -13,18 +13,26 @@ import org.meritbook.analysis.SectionResult;
  * @param description what it is for, in a sentence
  * @param origin      "built in" or the profile file's path as written
  * @param rules       the rules, in the order the dossier lists them
+ * @param comparison  how values are compared with their limits (as computed, or rounded to the limit first)
  */
-public record AcceptanceProfile(String name, String description, String origin, List<Rule> rules) {
+public record AcceptanceProfile(String name, String description, String origin, List<Rule> rules,
+                                Comparison comparison) {
     public AcceptanceProfile {
         Objects.requireNonNull(name, "name");
+        Objects.requireNonNull(comparison, "comparison");
         rules = List.copyOf(rules);
+    }
+
+    /** A profile that compares values as computed (the built-in profiles do). */
+    public AcceptanceProfile(String name, String description, String origin, List<Rule> rules) {
+        this(name, description, origin, rules, Comparison.AS_COMPUTED);
     }
 
     /** The section with this profile's verdicts added, in rule order. */
     public SectionResult judge(SectionResult section) {
         List<Verdict> verdicts = new ArrayList<>(section.verdicts());
         for (Rule rule : rules) {
-            verdicts.addAll(rule.judge(section));
+            verdicts.addAll(rule.judge(section, comparison));
         }
         return section.withVerdicts(verdicts);
     }

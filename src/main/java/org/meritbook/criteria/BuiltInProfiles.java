@@ -10,6 +10,9 @@ import org.meritbook.study.AnalysisKind;
  * laboratory to confirm against its own procedures and the rules that apply to it.
  */
 public final class BuiltInProfiles {
+    /** Every built-in profile compares values as computed: no rounding towards a limit. */
+    static final Comparison BUILT_IN_COMPARISON = Comparison.AS_COMPUTED;
+
     private BuiltInProfiles() {
     }
 
@@ -22,12 +25,13 @@ public final class BuiltInProfiles {
                         new QuantityRule(AnalysisKind.CALIBRATION, "Linearity: lack of fit", "lack_of_fit_p", true, 0.05,
                                 "lack-of-fit p", null, "lack-of-fit F test at the 5 % level"),
                         new QuantityRule(AnalysisKind.CALIBRATION, "Linearity: no curvature", "mandel_p", true, 0.05,
-                                "Mandel p", "straight line", "Mandel's fitting test at the 5 % level (ISO 8466-1)"))));
+                                "Mandel p", "straight line", "Mandel's fitting test at the 5 % level (ISO 8466-1)")),
+                BUILT_IN_COMPARISON));
         all.put("bioanalytical-calibration", new AcceptanceProfile("bioanalytical-calibration",
                 "Calibration standards of a bioanalytical method: back-calculated concentrations near nominal.",
                 "built in", List.of(new DeviationRule("Back-calculated standards", 15, 20, 0.75,
                         "ICH M10 bioanalytical method validation, calibration curve (±15 %, ±20 % at the LLOQ, "
-                                + "75 % of standards)"))));
+                                + "75 % of standards)")), BUILT_IN_COMPARISON));
         String aoac = "AOAC Official Methods of Analysis, Appendix F (Guidelines for Standard Method Performance "
                 + "Requirements), expected recovery 80-110 % for analytes at 1 to 10 mg/kg (from memory); "
                 + "a default to confirm locally";
@@ -36,7 +40,7 @@ public final class BuiltInProfiles {
                         new QuantityRule(AnalysisKind.ACCURACY, "Recovery", "recovery_percent", true, 80,
                                 "mean recovery (%)", null, aoac),
                         new QuantityRule(AnalysisKind.ACCURACY, "Recovery", "recovery_percent", false, 110,
-                                "mean recovery (%)", null, aoac))));
+                                "mean recovery (%)", null, aoac)), BUILT_IN_COMPARISON));
         // AOAC's table of expected precision by concentration; the row for 10 mg/kg (10 ppm). Intermediate
         // precision lies between repeatability and reproducibility, so judging it against RSD_R is lenient.
         all.put("food-precision-10-mg-kg", new AcceptanceProfile("food-precision-10-mg-kg",
@@ -48,7 +52,7 @@ public final class BuiltInProfiles {
                         new QuantityRule(AnalysisKind.PRECISION, "Intermediate precision", "intermediate_cv_percent", false,
                                 11, "RSD_I (%)", null, "AOAC Official Methods of Analysis, Appendix F (2016), expected "
                                         + "RSD_R at 10 ppm (from memory), an upper bound for RSD_I; a default to confirm "
-                                        + "locally"))));
+                                        + "locally")), BUILT_IN_COMPARISON));
         return all;
     }
 }

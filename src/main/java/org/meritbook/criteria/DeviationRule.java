@@ -39,7 +39,7 @@ public record DeviationRule(String characteristic, double tolerance, double lowe
     }
 
     @Override
-    public List<Verdict> judge(SectionResult section) {
+    public List<Verdict> judge(SectionResult section, Comparison comparison) {
         if (section.kind() != AnalysisKind.CALIBRATION) {
             return List.of();
         }
@@ -62,8 +62,9 @@ public record DeviationRule(String characteristic, double tolerance, double lowe
         for (int i = 0; i < judged.size(); i++) {
             double[] p = judged.get(i);
             double limit = p[0] == lowest ? lowestTolerance : tolerance;
-            if (Math.abs(p[1]) > limit) {
-                outside.add(labels.get(i) + " (" + Limits.text(p[1]) + " %)");
+            if (!comparison.passes(Math.abs(p[1]), limit, false)) {
+                // the size is compared with the limit; the sign is printed as computed
+                outside.add(labels.get(i) + " (" + (p[1] < 0 ? "−" : "") + comparison.text(Math.abs(p[1]), limit) + " %)");
             }
         }
         int within = judged.size() - outside.size();

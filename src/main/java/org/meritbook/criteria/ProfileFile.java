@@ -23,6 +23,7 @@ import org.yaml.snakeyaml.error.YAMLException;
  * <pre>
  * name: QC-lab linearity
  * description: SOP QA-12, section 4
+ * compare: as-computed             # or rounded-to-limit (optional; as-computed when absent)
  * rules:
  *   - quantity: r_squared          # any calibration quantity name
  *     at-least: 0.998              # or at-most:
@@ -35,7 +36,7 @@ import org.yaml.snakeyaml.error.YAMLException;
  * </pre>
  */
 final class ProfileFile {
-    private static final Set<String> TOP = Set.of("name", "description", "rules");
+    private static final Set<String> TOP = Set.of("name", "description", "compare", "rules");
     private static final Set<String> RULE = Set.of("kind", "quantity", "at-least", "at-most", "within",
             "lowest-level-within", "fraction", "characteristic", "source", "model");
 
@@ -69,7 +70,7 @@ final class ProfileFile {
         }
         String name = top.get("name") == null ? written : String.valueOf(top.get("name"));
         String description = top.get("description") == null ? "" : String.valueOf(top.get("description"));
-        return new AcceptanceProfile(name, description, written, rules);
+        return new AcceptanceProfile(name, description, written, rules, comparison(top.get("compare"), where));
     }
 
     private static Rule rule(Map<?, ?> r, String where, String which) {
@@ -110,6 +111,15 @@ final class ProfileFile {
                     "'" + model + "'" + Suggestion.hint(model, models));
         }
         return new QuantityRule(kind, characteristic, q, atLeast, limit, q, model, source);
+    }
+
+    private static Comparison comparison(Object written, String where) {
+        if (written == null) {
+            return Comparison.AS_COMPUTED;
+        }
+        String w = String.valueOf(written);
+        return Comparison.fromWord(w).orElseThrow(() -> bad(where, "'compare:' one of " + String.join(", ", Comparison.words()),
+                "'" + w + "'" + Suggestion.hint(w, Comparison.words())));
     }
 
     private static double number(Map<?, ?> r, String key, String where, String which) {

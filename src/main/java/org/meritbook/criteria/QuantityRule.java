@@ -39,7 +39,7 @@ public record QuantityRule(AnalysisKind kind, String characteristic, String quan
     }
 
     @Override
-    public List<Verdict> judge(SectionResult section) {
+    public List<Verdict> judge(SectionResult section, Comparison comparison) {
         if (section.kind() != kind || !modelMatches(section)) {
             return List.of();
         }
@@ -52,10 +52,10 @@ public record QuantityRule(AnalysisKind kind, String characteristic, String quan
         List<Verdict> verdicts = new ArrayList<>();
         for (Quantity q : judged) {
             double v = q.value();
-            boolean pass = atLeast ? v >= limit : v <= limit;
+            boolean pass = comparison.passes(v, limit, atLeast);
             String member = q.name().equals(quantity) ? "" : " (" + q.name().substring(q.name().indexOf(':') + 1) + ")";
             verdicts.add(new Verdict(characteristic + member, q.name(), text(),
-                    pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL, symbol + " = " + Limits.text(v)));
+                    pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL, symbol + " = " + comparison.text(v, limit)));
         }
         return verdicts;
     }

@@ -11,6 +11,14 @@ public sealed interface Rule permits QuantityRule, DeviationRule {
     /** Where the limit comes from (a guideline, an SOP, or "common practice"), as the profile states it. */
     String source();
 
-    /** The verdicts on one section (one per judged family member), empty when the rule does not apply. */
-    List<Verdict> judge(SectionResult section);
+    /** The verdicts on one section, values compared as computed. */
+    default List<Verdict> judge(SectionResult section) {
+        return judge(section, Comparison.AS_COMPUTED);
+    }
+
+    /**
+     * The verdicts on one section (one per judged family member), empty when the rule does not apply;
+     * values are compared with the limit as the profile states.
+     */
+    List<Verdict> judge(SectionResult section, Comparison comparison);
 }

@@ -82,7 +82,7 @@ final class DossierModelBuilder {
                     ? new SectionView(number, anchor, cell.id(), cell.kind().keyword(), cell.title(), before, after,
                     List.of(), SectionView.TableView.none(), List.of(),
                     List.of(), List.of(), List.of("This analysis produced no result."), false)
-                    : sectionBuilder.build(number, anchor, r, before, after);
+                    : sectionBuilder.build(number, anchor, r, before, after, results.supporting(r));
             sections.add(view);
             toc.add(new TocEntry(number, view.title(), anchor, List.of()));
         }
@@ -96,7 +96,7 @@ final class DossierModelBuilder {
         toc.add(new TocEntry("B", "Input manifest", "manifest", List.of()));
         toc.add(new TocEntry("C", "Software and environment", "software", List.of()));
 
-        Summary summary = summary(summaryNumber, results.sections(), sections, profile(results.acceptance()),
+        Summary summary = summary(summaryNumber, results, sections, profile(results.acceptance()),
                 results.warnings());
         Cover cover = new Cover(fm.title(), orDash(fm.method()), orDash(fm.laboratory()),
                 String.valueOf(fm.revision()), date.display(), orDash(fm.preparedBy()), status(fm), summary.counts(),
@@ -128,10 +128,11 @@ final class DossierModelBuilder {
         }
         if (!"built in".equals(profile.origin())) {
             return "Acceptance criteria are the laboratory's own (profile file " + profile.origin()
-                    + ", attached); they are applied as written.";
+                    + ", attached); they are applied as written; " + profile.comparison().statement() + ".";
         }
         return "Acceptance criteria are defaults (profile " + fm.criteria() + ")"
-                + " and must be confirmed locally before this dossier is relied on.";
+                + " and must be confirmed locally before this dossier is relied on; "
+                + profile.comparison().statement() + ".";
     }
 
     private static Changes changes(RevisionContext earlier) {
@@ -177,15 +178,20 @@ final class DossierModelBuilder {
         if (p == null) {
             return new Profile(false, "", "", List.of());
         }
-        return new Profile(true, p.name() + " (" + p.origin() + ")", p.description(),
+        // How a value meets its limit is part of the criteria: stated beside them.
+        String compared = "Comparison: " + p.comparison().statement() + " (compare: " + p.comparison().word() + ").";
+        return new Profile(true, p.name() + " (" + p.origin() + ")",
+                p.description() == null || p.description().isBlank() ? compared : p.description() + " " + compared,
                 p.rules().stream().map(r -> new ProfileRule(r.text(), r.source())).toList());
     }
 
-    private Summary summary(String number, List<SectionResult> results, List<SectionView> views, Profile profile,
+    private Summary summary(String number, StudyResults study, List<SectionView> views, Profile profile,
                             List<String> warnings) {
+        List<SectionResult> results = study.sections();
         List<SummaryRow> rows = new ArrayList<>();
-        int pass = 0, fail = 0, na = 0, none = 0;
+        int pass = 0, fail = 0, na = 0, none = 0, supportingVerdicts = 0;
         for (SectionResult r : results) {
+            boolean supporting = study.supporting(r);
             String anchor = views.stream().filter(v -> v.id().equals(r.id())).map(SectionView::anchor).findFirst()
                     .orElse("");
             String section = SectionViewBuilder.title(r);
@@ -202,7 +208,7 @@ final class DossierModelBuilder {
                 }
                 for (Verdict x : judged) {
                     rows.add(new SummaryRow(section, anchor, q.label(), v.withUnit(), v.uncertainty(), x.rule(),
-                            Verdicts.view(x)));
+                            Verdicts.view(x, supporting)));
                 }
             }
             for (Verdict x : r.verdicts()) {
@@ -212,7 +218,11 @@ final class DossierModelBuilder {
                 }
                 DisplayFormatter.Formatted v = q.map(format::quantity).orElse(null);
                 rows.add(new SummaryRow(section, anchor, x.characteristic(), v == null ? "—" : v.withUnit(),
-                        v == null ? "" : v.uncertainty(), x.rule(), Verdicts.view(x)));
+                        v == null ? "" : v.uncertainty(), x.rule(), Verdicts.view(x, supporting)));
+            }
+            if (supporting) {
+                supportingVerdicts += r.verdicts().size(); // shown above, kept out of the counts
+                continue;
             }
             for (Verdict x : r.verdicts()) {
                 switch (x.outcome()) {
@@ -231,7 +241,9 @@ final class DossierModelBuilder {
         }
         String counts = pass + " passed, " + fail + " failed, " + na + " not evaluable; " + none
                 + (none == 1 ? " result" : " results") + " without a criterion; " + all.size()
-                + (all.size() == 1 ? " warning" : " warnings");
+                + (all.size() == 1 ? " warning" : " warnings")
+                + (supportingVerdicts == 0 ? "" : "; " + supportingVerdicts + " verdict" + (supportingVerdicts == 1 ? "" : "s")
+                        + " of supporting checks not counted");
         return new Summary(number, rows, counts, profile, all);
     }
 

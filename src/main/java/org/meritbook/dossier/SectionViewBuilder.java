@@ -37,6 +37,11 @@ final class SectionViewBuilder {
     }
 
     SectionView build(String number, String anchor, SectionResult r, Markup before, Markup after) {
+        return build(number, anchor, r, before, after, false);
+    }
+
+    /** The section; a supporting cell's verdicts say beside them that they are not counted. */
+    SectionView build(String number, String anchor, SectionResult r, Markup before, Markup after, boolean supporting) {
         Set<String> inTable = new HashSet<>();
         TableView table = table(number, r, inTable);
         List<FigureView> figures = new ArrayList<>();
@@ -58,7 +63,7 @@ final class SectionViewBuilder {
         }
         List<VerdictRow> verdicts = new ArrayList<>();
         for (Verdict v : r.verdicts()) {
-            verdicts.add(new VerdictRow(v.characteristic(), v.rule(), Verdicts.view(v)));
+            verdicts.add(new VerdictRow(v.characteristic(), v.rule(), Verdicts.view(v, supporting)));
         }
         List<SettingRow> settings = new ArrayList<>();
         for (Setting s : r.settings()) {

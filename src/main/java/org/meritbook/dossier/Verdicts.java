@@ -10,8 +10,17 @@ final class Verdicts {
     private Verdicts() {
     }
 
+    /** Said beside each verdict of a cell marked {@code role: supporting}. */
+    static final String SUPPORTING = "supporting check: not counted in the overall outcome";
+
     static VerdictView view(Verdict v) {
-        String reason = v.reason() == null ? "" : v.reason();
+        return view(v, false);
+    }
+
+    /** The verdict, with the note that it does not count when its cell is a supporting one. */
+    static VerdictView view(Verdict v, boolean supporting) {
+        String given = v.reason() == null ? "" : v.reason();
+        String reason = supporting ? (given.isEmpty() ? SUPPORTING : given + " (" + SUPPORTING + ")") : given;
         return switch (v.outcome()) {
             case PASS -> new VerdictView("Pass", "✓", "pass", reason);
             case FAIL -> new VerdictView("Fail", "✗", "fail", reason);

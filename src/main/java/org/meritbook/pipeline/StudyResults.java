@@ -3,7 +3,9 @@ package org.meritbook.pipeline;
 import java.util.List;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.criteria.AcceptanceProfile;
+import org.meritbook.criteria.Verdict;
 import org.meritbook.revision.InputFile;
+import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.Study;
 
 /**
@@ -43,6 +45,19 @@ public record StudyResults(Study study, List<InputFile> inputs, List<SectionResu
     public StudyResults(Study study, List<InputFile> inputs, List<SectionResult> sections,
                         List<SoftwareComponent> software) {
         this(study, inputs, sections, software, null);
+    }
+
+    /**
+     * True when the section's cell is marked {@code role: supporting}: shown and judged, but kept out
+     * of the study's outcome and its counts.
+     */
+    public boolean supporting(SectionResult section) {
+        return study.cell(section.id()).map(AnalysisCell::supporting).orElse(false);
+    }
+
+    /** The verdicts that decide the study's outcome: those of the reporting (not supporting) sections. */
+    public List<Verdict> reportingVerdicts() {
+        return sections.stream().filter(s -> !supporting(s)).flatMap(s -> s.verdicts().stream()).toList();
     }
 
     /** A component and its version, e.g. ("Apache POI", "5.4.1"). */

@@ -15,6 +15,7 @@ import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.Rule;
 import org.meritbook.criteria.Verdict;
 import org.meritbook.pipeline.StudyResults;
+import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.FrontMatter;
 import org.meritbook.trail.Step;
 import org.meritbook.trail.StepInput;
@@ -80,7 +81,7 @@ public final class ResultsJson {
         }
         ArrayNode sections = root.putArray("sections");
         for (SectionResult s : results.sections()) {
-            sections.add(section(s));
+            sections.add(section(s, results.supporting(s)));
         }
         ArrayNode trail = root.putArray("trail");
         for (SectionResult s : results.sections()) {
@@ -124,7 +125,8 @@ public final class ResultsJson {
         AcceptanceProfile profile = results.acceptance();
         if (profile != null) {
             ObjectNode a = n.putObject("acceptance");
-            a.put("name", profile.name()).put("origin", profile.origin()).put("description", profile.description());
+            a.put("name", profile.name()).put("origin", profile.origin()).put("description", profile.description())
+                    .put("compare", profile.comparison().word());
             ArrayNode rules = a.putArray("rules");
             for (Rule rule : profile.rules()) {
                 rules.addObject().put("rule", rule.text()).put("source", rule.source());
@@ -135,11 +137,13 @@ public final class ResultsJson {
         return n;
     }
 
-    private static ObjectNode section(SectionResult s) {
+    private static ObjectNode section(SectionResult s, boolean supporting) {
         ObjectNode n = MAPPER.createObjectNode();
         n.put("id", s.id());
         n.put("kind", s.kind().keyword());
         n.put("title", s.title());
+        // supporting: judged, but its verdicts do not count towards the study's outcome.
+        n.put("role", supporting ? AnalysisCell.SUPPORTING : AnalysisCell.REPORTING);
         ObjectNode settings = n.putObject("settings");
         for (Setting setting : s.settings()) {
             settings.put(setting.label(), setting.value());

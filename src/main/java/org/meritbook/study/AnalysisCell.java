@@ -24,6 +24,16 @@ public record AnalysisCell(String id, AnalysisKind kind, String title, int line,
         exclusions = List.copyOf(exclusions);
     }
 
+    /** The default {@code role:}: the cell's verdicts count towards the study's outcome. */
+    public static final String REPORTING = "reporting";
+    /** {@code role: supporting}: a check beside the reporting cells, judged but not counted. */
+    public static final String SUPPORTING = "supporting";
+
+    /** True when the notebook marks this cell {@code role: supporting}. */
+    public boolean supporting() {
+        return option("role").map(v -> SUPPORTING.equals(v.text())).orElse(false);
+    }
+
     public Optional<OptionValue> option(String name) {
         return Optional.ofNullable(options.get(name));
     }

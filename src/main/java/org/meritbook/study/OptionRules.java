@@ -24,6 +24,8 @@ final class OptionRules {
                 "sigma", List.of("blank", "residual", "intercept"),
                 "replicates", List.of("together", "each"),
                 "lob", List.of("parametric", "non-parametric"),
+                // every kind: a supporting cell is shown and judged but kept out of the overall outcome.
+                "role", List.of(AnalysisCell.REPORTING, AnalysisCell.SUPPORTING),
                 // precision: the unit of the results as a mass fraction, for the Horwitz ratio.
                 "horwitz", MassFractions.UNITS));
         all.putAll(ReadingOptions.choices()); // formulas, hidden, merged

@@ -122,6 +122,43 @@ class CommandLineTest {
     }
 
     @Test
+    void aSupportingCellIsJudgedAndShownButKeptOutOfTheOutcome() throws Exception {
+        workbook(null);
+        Path nb = notebook("runs!Cal!A1:B6");
+        Files.writeString(dir.resolve("strict.yaml"), """
+                name: strict
+                rules:
+                  - quantity: r_squared
+                    at-least: 0.9999999
+                    characteristic: Linearity
+                """);
+        Files.writeString(nb, Files.readString(nb)
+                .replace("title: Exit code check", "title: Exit code check\ncriteria: strict.yaml")
+                .replace("y: Area\n", "y: Area\nrole: supporting\n"));
+        Outcome o = Cli.execute("run", nb.toString(), "-o", dir.resolve("out").toString());
+        assertEquals(0, o.code(), "only reporting cells' failures give exit 1: " + o.out() + o.err());
+        assertTrue(o.out().contains("acceptance (strict.yaml): 0 passed, 0 failed, 0 not evaluable"), o.out());
+        assertTrue(o.out().contains("supporting calibration (not counted): 0 passed, 1 failed"), o.out());
+        String json = Files.readString(dir.resolve("out/study/rev1/results.json"));
+        assertTrue(json.contains("\"role\" : \"supporting\""), json);
+        assertTrue(json.contains("\"outcome\" : \"fail\""), "still judged: " + json);
+        String html = Files.readString(dir.resolve("out/study/rev1/study-rev1.html"));
+        assertTrue(html.contains("supporting check: not counted in the overall outcome"), "said beside the verdict");
+        assertTrue(html.contains("0 passed, 0 failed, 0 not evaluable"), "the counts leave it out");
+    }
+
+    @Test
+    void anUnknownRoleIsALocatedError() throws Exception {
+        workbook(null);
+        Path nb = notebook("runs!Cal!A1:B6");
+        Files.writeString(nb, Files.readString(nb).replace("y: Area\n", "y: Area\nrole: support\n"));
+        Outcome o = Cli.execute("run", nb.toString(), "-o", dir.resolve("out").toString());
+        assertEquals(2, o.code(), o.err());
+        assertTrue(o.err().contains("study.md line 11"), o.err());
+        assertTrue(o.err().contains("supporting"), o.err());
+    }
+
+    @Test
     void textInANumericColumnExitsTwoNamingTheCell() throws Exception {
         workbook("<0.05");
         Outcome o = Cli.execute("run", notebook("runs!Cal!A1:B6").toString(), "-o", dir.resolve("out").toString());

@@ -183,7 +183,70 @@ class AcceptanceTest {
         var study = StudyParser.parse("---\ntitle: t\ncriteria: trace-metals\n---\n", dir.resolve("s.md"));
         InputException e = assertThrows(InputException.class, () -> AcceptanceProfiles.of(study));
         assertTrue(e.getMessage().startsWith("s.md line 3: expected a built-in acceptance profile "
-                + "(linearity-basic, bioanalytical-calibration, recovery-ppm, food-precision-10-mg-kg) or a .yaml profile file but found 'trace-metals'."),
+                + "(linearity-basic, bioanalytical-calibration, recovery-ppm, food-precision-10-mg-kg) or a .yaml profile file"
+                + " but found 'trace-metals'."),
                 e.getMessage());
+    }
+
+    // The −2.00496 % against "within 2" case of issue 6. Rounding to the limit's decimals before comparing
+    // is pharmacopoeial practice (USP General Notices, significant figures and rounding; from memory).
+    private static final double[] TWO_LEVELS = {1, 10};
+    private static final double[] NEAR_TWO = {0.5, -2.00496};
+
+    @Test
+    void asComputedTheDeviationJustOverTheLimitFailsAndPrintsTheDigitsThatShowWhy() {
+        DeviationRule rule = new DeviationRule("Back-calculated standards", 2, 5, 1.0, "test limit");
+        Verdict v = rule.judge(calibration(TWO_LEVELS, NEAR_TWO, "linear", 0.999, List.of()),
+                Comparison.AS_COMPUTED).get(0);
+        assertEquals(Verdict.Outcome.FAIL, v.outcome());
+        assertEquals("1 of 2 standards within their limit; outside: P1 (−2.00496 %)", v.reason());
+    }
+
+    @Test
+    void roundedToTheLimitTheSameDeviationIsWithinAndPrintsTheRoundedValue() {
+        DeviationRule rule = new DeviationRule("Back-calculated standards", 2, 5, 1.0, "test limit");
+        Verdict v = rule.judge(calibration(TWO_LEVELS, NEAR_TWO, "linear", 0.999, List.of()),
+                Comparison.ROUNDED_TO_LIMIT).get(0);
+        assertEquals(Verdict.Outcome.PASS, v.outcome(), v.reason());
+        assertEquals("2 of 2 standards within their limit", v.reason());
+    }
+
+    @Test
+    void aQuantityRuleJudgesBothWaysAndItsPrintedValueAgreesWithItsVerdict() {
+        QuantityRule atMost = new QuantityRule(AnalysisKind.CALIBRATION, "Fit", "r_squared", false, 2, "v", null, "test");
+        SectionResult s = calibration(TWO_LEVELS, NEAR_TWO, "linear", 2.00496, List.of());
+        Verdict computed = atMost.judge(s, Comparison.AS_COMPUTED).get(0);
+        assertEquals(Verdict.Outcome.FAIL, computed.outcome());
+        assertEquals("v = 2.00496", computed.reason());
+        Verdict rounded = atMost.judge(s, Comparison.ROUNDED_TO_LIMIT).get(0);
+        assertEquals(Verdict.Outcome.PASS, rounded.outcome());
+        assertEquals("v = 2 (rounded from 2.00496)", rounded.reason());
+    }
+
+    @Test
+    void sixSignificantFiguresNeverPrintTheLimitItselfForAValueThatFails() {
+        // 2.0000004 prints as 2 at six significant figures, which would contradict "fail ≤ 2".
+        assertEquals("2.0000004", Comparison.AS_COMPUTED.text(2.0000004, 2));
+        assertEquals("2.00496", Comparison.AS_COMPUTED.text(2.00496, 2));
+        assertEquals("0.998735", Comparison.AS_COMPUTED.text(0.998734567, 0.995));
+        // rounded to the limit's decimals, half away from zero: 0.9945 against 0.995 rounds to 0.995 (pass ≥)
+        assertTrue(Comparison.ROUNDED_TO_LIMIT.passes(0.9945, 0.995, true));
+        assertTrue(!Comparison.AS_COMPUTED.passes(0.9945, 0.995, true));
+        assertEquals(3, Comparison.decimals(0.995));
+        assertEquals(0, Comparison.decimals(15));
+    }
+
+    @Test
+    void aProfileFileStatesItsComparisonAndAMisspeltOneIsRefused() throws Exception {
+        Path file = dir.resolve("lab.yaml");
+        Files.writeString(file,
+                "compare: rounded-to-limit\nrules:\n  - quantity: r_squared\n    at-least: 0.995\n");
+        assertEquals(Comparison.ROUNDED_TO_LIMIT, ProfileFile.read(file, "lab.yaml").comparison());
+        Files.writeString(file, "rules:\n  - quantity: r_squared\n    at-least: 0.995\n");
+        assertEquals(Comparison.AS_COMPUTED, ProfileFile.read(file, "lab.yaml").comparison(), "the default");
+        Files.writeString(file, "compare: rounded\nrules:\n  - quantity: r_squared\n    at-least: 0.995\n");
+        InputException e = assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml"));
+        assertTrue(e.getMessage().contains("'compare:' one of as-computed, rounded-to-limit"), e.getMessage());
+        assertTrue(BuiltInProfiles.all().values().stream().allMatch(p -> p.comparison() == Comparison.AS_COMPUTED));
     }
 }

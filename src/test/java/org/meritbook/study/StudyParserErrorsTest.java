@@ -51,8 +51,8 @@ class StudyParserErrorsTest {
                 """);
         assertProblem(ErrorKey.UNKNOWN_OPTION, "study.md line 11", p);
         assertEquals("study.md line 11: expected an option of a calibration cell (data, x, y, weighting, model, exclude,"
-                + " id, censored, formulas, hidden, merged) but found 'wieghting'. Correct the option name (did you mean 'weighting'?) or remove"
-                + " the line.", p.message());
+                + " id, role, censored, formulas, hidden, merged) but found 'wieghting'. Correct the option name"
+                + " (did you mean 'weighting'?) or remove the line.", p.message());
     }
 
     @Test
