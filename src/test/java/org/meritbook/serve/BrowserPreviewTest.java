@@ -64,7 +64,7 @@ class BrowserPreviewTest {
     }
 
     private void waitFor(String what, java.util.function.Function<WebDriver, Boolean> condition) {
-        new WebDriverWait(browser, Duration.ofSeconds(20)).withMessage(what).until(condition);
+        new WebDriverWait(browser, Duration.ofSeconds(90)).withMessage(what).until(condition);
     }
 
     private String dossierText() {

@@ -35,8 +35,11 @@ import org.meritbook.dossier.DossierRenderer;
 class LiveSessionTest {
     private static final String NAME = "hmf-honey-validation";
     private static final ObjectMapper JSON = new ObjectMapper();
-    /** Every wait is bounded: a condition not met by then fails the test. */
-    private static final Duration WAIT = Duration.ofSeconds(15);
+    /**
+     * Every wait is bounded: a condition not met by then fails the test. Generous, since the demo (every
+     * kind, an 80-page dossier) runs cold in a few seconds but far slower on a loaded machine.
+     */
+    private static final Duration WAIT = Duration.ofSeconds(90);
 
     @TempDir
     Path dir;

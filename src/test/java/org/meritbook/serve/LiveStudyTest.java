@@ -122,9 +122,9 @@ class LiveStudyTest {
     }
 
     private static Snapshot poll(LinkedBlockingQueue<Snapshot> done) throws InterruptedException {
-        Snapshot s = done.poll(15, TimeUnit.SECONDS);
+        Snapshot s = done.poll(90, TimeUnit.SECONDS);
         if (s == null) {
-            throw new AssertionError("no run completed within 15 s");
+            throw new AssertionError("no run completed within 90 s");
         }
         return s;
     }
