@@ -59,7 +59,9 @@ class DiffCommandTest {
         assertTrue(report.contains("linearity.slope: "), report);
         assertTrue(report.contains("linearity.back_calculated:D16: "), report);
         assertTrue(!report.contains("Calibration!D15:"), "an unchanged cell is not listed:\n" + report);
-        assertTrue(!report.contains("Settings"), "no statistical choice changed:\n" + report);
+        // 1/x² and 1/y² are within 0.02 % of each other in Σ|%dev| on these data, so the correction tips
+        // weighting: auto from one to the other; diff must say so, among the settings.
+        assertTrue(report.contains("linearity Weighting: 1/y^2 (chosen by auto) → 1/x^2 (chosen by auto)"), report);
 
         // Revision 2's dossier carries the history and the changes since revision 1, found beside it.
         String text;
