@@ -42,6 +42,7 @@ public final class CalibrationAnalysis implements Analysis {
         Weighting weighting = chooseWeighting(options, data, section);
         section.setting("Model", options.model().description(), options.model().keyword());
         section.setting("Weighting", weighting.notation() + (options.weighting().isAuto() ? " (chosen by auto)" : ""));
+        section.setting("Weight scaling", PointsStep.scaling(weighting));
         section.setting("Confidence level", "95 %");
         double[] x = data.usedX();
         double[] y = data.usedY();

@@ -1,0 +1,92 @@
+package org.meritbook.analysis.calibration;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.SectionResult;
+import org.meritbook.analysis.Setting;
+import org.meritbook.study.Study;
+import org.meritbook.study.StudyParser;
+import org.meritbook.trail.Step;
+import org.meritbook.workbook.CellRef;
+import org.meritbook.workbook.CellValue;
+import org.meritbook.workbook.Column;
+import org.meritbook.workbook.DataBlock;
+import org.junit.jupiter.api.Test;
+
+/**
+ * What a reviewer asks of a finished calibration section: the weight scaling, the equation, the ANOVA
+ * table and the studentized residuals. Reference values: R 4.2.2 (R 4.x, anova(lm(...)), rstandard()),
+ * the script in {@code org.meritbook.stats.regression.RegressionAnovaTest}; same invented data.
+ */
+class CalibrationFinishTest {
+    private static final String[] X = {"1", "1", "2", "2", "5", "5", "10", "10", "20", "20"};
+    private static final String[] Y = {"42.3", "40.9", "83.1", "85.6", "206.2", "201.4", "418.8", "409.5", "829.0",
+        "846.3"};
+
+    static SectionResult run(String options) {
+        String notebook = """
+                ---
+                title: Test study
+                sources:
+                  runs: runs.xlsx
+                ---
+
+                ## Linearity
+
+                ```calibration
+                data: runs!Cal!A1:B11
+                x: Conc
+                y: Signal
+                %s```
+                """.formatted(options);
+        Study study = StudyParser.parse(notebook, Path.of("study.md"));
+        return new CalibrationAnalysis().run(study.cells().get(0), new AnalysisContext(study, ref -> block()));
+    }
+
+    private static DataBlock block() {
+        List<CellValue> xv = new ArrayList<>();
+        List<CellValue> yv = new ArrayList<>();
+        for (int i = 0; i < X.length; i++) {
+            xv.add(new CellValue(new CellRef("Cal", i + 1, 0), CellValue.Kind.NUMBER, Double.parseDouble(X[i]), X[i], null));
+            yv.add(new CellValue(new CellRef("Cal", i + 1, 1), CellValue.Kind.NUMBER, Double.parseDouble(Y[i]), Y[i], null));
+        }
+        return new DataBlock(Path.of("runs.xlsx"), "Cal", "A1:B11",
+                List.of(new Column("Conc (mg/L)", "Conc", "mg/L", "A", xv),
+                        new Column("Signal (mAU·s)", "Signal", "mAU·s", "B", yv)), List.of());
+    }
+
+    static String setting(SectionResult s, String label) {
+        return s.settings().stream().filter(st -> st.label().equals(label)).map(Setting::value).findFirst()
+                .orElseThrow(() -> new AssertionError("no setting " + label));
+    }
+
+    static Step step(SectionResult s, String name) {
+        return s.steps().stream().filter(st -> st.id().endsWith("." + name)).findFirst()
+                .orElseThrow(() -> new AssertionError("no step " + name));
+    }
+
+    static double q(SectionResult s, String name) {
+        return s.quantity(name).orElseThrow(() -> new AssertionError("no quantity " + name)).value();
+    }
+
+    @Test
+    void weightScalingIsStatedAndItsDivisorIsInTheTrail() {
+        SectionResult s = run("weighting: 1/x^2\n");
+        assertTrue(setting(s, "Weight scaling").contains("average 1"));
+        // mean of 1/x² over the ten standards, computed here from the data, not from the fit
+        double mean = 0;
+        for (String x : X) {
+            mean += 1 / (Double.parseDouble(x) * Double.parseDouble(x));
+        }
+        mean /= X.length;
+        Step scale = step(s, "weight_scale");
+        assertEquals(mean, scale.value(), 1e-15);
+        assertEquals("1/(mg/L)²", scale.unit());
+        assertTrue(setting(run(""), "Weight scaling").startsWith("none"));
+    }
+}
