@@ -61,6 +61,7 @@ public final class CalibrationAnalysis implements Analysis {
         } else {
             LineFit fit = Attempt.required(where, "calibration data a straight line can be fitted to", fix,
                     () -> LeastSquares.fitLine(x, y, weighting, options.model().lineModel()));
+            section.setting("Calibration equation", Equation.rounded(data, fit));
             inversion = new LineTrail(section, data, fit).record();
             curve = CalibrationCurve.of(fit);
             checks.record(fit);

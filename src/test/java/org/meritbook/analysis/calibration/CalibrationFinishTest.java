@@ -89,4 +89,19 @@ class CalibrationFinishTest {
         assertEquals("1/(mg/L)²", scale.unit());
         assertTrue(setting(run(""), "Weight scaling").startsWith("none"));
     }
+
+    @Test
+    void equationIsWrittenWithUnitsRoundedByItsIntervalsAndInFullInTheTrail() {
+        SectionResult s = run("weighting: 1/x^2\n");
+        // R 4.x, coef() and confint() of lm(y ~ x, weights = 1/x^2): a = 0.28656957928804494 (95 % half-width
+        // 1.67491, so one decimal), b = 41.46046925566341912 (half-width 0.85486, so two decimals)
+        assertEquals("Signal (mAU·s) = 0.3 + 41.46 · Conc (mg/L)", setting(s, "Calibration equation"));
+        Step full = step(s, "equation");
+        assertTrue(full.label().endsWith("Signal (mAU·s) = " + q(s, "intercept") + " + " + q(s, "slope")
+                + " · Conc (mg/L)"), full.label());
+        assertEquals(0.28656957928804494, q(s, "intercept"), 1e-12);
+        assertEquals(41.46046925566341912, q(s, "slope"), 1e-12);
+        SectionResult origin = run("weighting: 1/x^2\nmodel: linear-through-origin\n");
+        assertTrue(setting(origin, "Calibration equation").matches("Signal \\(mAU·s\\) = [0-9.]+ · Conc \\(mg/L\\)"));
+    }
 }
