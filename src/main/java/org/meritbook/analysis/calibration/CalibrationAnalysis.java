@@ -15,7 +15,9 @@ import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.stats.regression.LeastSquares;
 import org.meritbook.stats.regression.LineFit;
+import org.meritbook.stats.regression.LineModel;
 import org.meritbook.stats.regression.QuadraticFit;
+import org.meritbook.stats.regression.RegressionAnova;
 import org.meritbook.stats.regression.Weighting;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.trail.StepInput;
@@ -58,6 +60,8 @@ public final class CalibrationAnalysis implements Analysis {
             inversion = new QuadraticTrail(section, data, fit).record();
             curve = CalibrationCurve.of(fit, min(x), max(x));
             checks.record(fit);
+            AnovaTrail.record(section, RegressionAnova.of(fit.x(), fit.y(), fit.weights(), fit.fitted(), 3, true), true,
+                    data.yUnit(), section.stepId("n"));
         } else {
             LineFit fit = Attempt.required(where, "calibration data a straight line can be fitted to", fix,
                     () -> LeastSquares.fitLine(x, y, weighting, options.model().lineModel()));
@@ -65,6 +69,8 @@ public final class CalibrationAnalysis implements Analysis {
             inversion = new LineTrail(section, data, fit).record();
             curve = CalibrationCurve.of(fit);
             checks.record(fit);
+            AnovaTrail.record(section, RegressionAnova.of(fit), fit.model() == LineModel.WITH_INTERCEPT, data.yUnit(),
+                    section.stepId("n"));
             section.export(new CalibrationLine(cell.id(), fit, data.xUnit(), data.yUnit(), min(x), max(x)));
         }
         BackCalculation.record(section, data, curve, inversion);

@@ -104,4 +104,32 @@ class CalibrationFinishTest {
         SectionResult origin = run("weighting: 1/x^2\nmodel: linear-through-origin\n");
         assertTrue(setting(origin, "Calibration equation").matches("Signal \\(mAU·s\\) = [0-9.]+ · Conc \\(mg/L\\)"));
     }
+
+    @Test
+    void anovaRowsAreQuantitiesThatMatchRForTheWeightedFit() {
+        SectionResult s = run("weighting: 1/x^2\n");
+        // R 4.x, anova(lm(y ~ x, weights = w)) with w = 1/x² scaled to average 1, and anova(that, lm(y ~ factor(x)))
+        assertEquals(1, q(s, "anova_regression_df"));
+        assertEquals(8, q(s, "anova_residual_df"));
+        assertEquals(9, q(s, "anova_total_df"));
+        assertEquals(3, q(s, "anova_lack_of_fit_df"));
+        assertEquals(5, q(s, "anova_pure_error_df"));
+        assertEquals(31309.161865336, q(s, "anova_regression_ss"), 1e-7);
+        assertEquals(20.0245664300045, q(s, "anova_residual_ss"), 1e-10);
+        assertEquals(2.50307080375, q(s, "anova_residual_ms"), 1e-10);
+        assertEquals(12508.30053, q(s, "anova_regression_f"), 1e-5);
+        assertEquals(4.56483576814457e-14, q(s, "anova_regression_p"), 1e-21);
+        assertEquals(8.39841479852685, q(s, "anova_lack_of_fit_ss"), 1e-10);
+        assertEquals(11.6261516314777, q(s, "anova_pure_error_ss"), 1e-10);
+        assertEquals(11.6261516314777 / 5, q(s, "anova_pure_error_ms"), 1e-10);
+        assertEquals(31329.186431766, q(s, "anova_total_ss"), 1e-7);
+        // the residual mean square is s²(y/x), so the ANOVA and the fit agree
+        assertEquals(q(s, "residual_sd") * q(s, "residual_sd"), q(s, "anova_residual_ms"), 1e-12);
+        assertEquals("(mAU·s)²", s.quantity("anova_residual_ss").orElseThrow().unit());
+        for (var quantity : s.quantities()) {
+            String base = quantity.name().contains(":") ? quantity.name().substring(0, quantity.name().indexOf(':'))
+                    : quantity.name();
+            assertTrue(org.meritbook.study.AnalysisKind.CALIBRATION.reportedNames().contains(base), base);
+        }
+    }
 }
