@@ -45,6 +45,7 @@ public final class CalibrationAnalysis implements Analysis {
         section.setting("Model", options.model().description(), options.model().keyword());
         section.setting("Weighting", weighting.notation() + (options.weighting().isAuto() ? " (chosen by auto)" : ""));
         section.setting("Weight scaling", PointsStep.scaling(weighting));
+        section.setting("Shapiro–Wilk test on", "the standardized residuals eᵢ·√wᵢ / s(y/x) of the points in the fit");
         section.setting("Confidence level", "95 %");
         double[] x = data.usedX();
         double[] y = data.usedY();

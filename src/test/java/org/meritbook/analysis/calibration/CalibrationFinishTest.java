@@ -88,6 +88,7 @@ class CalibrationFinishTest {
         assertEquals(mean, scale.value(), 1e-15);
         assertEquals("1/(mg/L)²", scale.unit());
         assertTrue(setting(run(""), "Weight scaling").startsWith("none"));
+        assertTrue(setting(s, "Shapiro–Wilk test on").startsWith("the standardized residuals"));
     }
 
     @Test
