@@ -72,6 +72,7 @@ public final class CalibrationAnalysis implements Analysis {
             checks.record(fit);
             AnovaTrail.record(section, RegressionAnova.of(fit), fit.model() == LineModel.WITH_INTERCEPT, data.yUnit(),
                     section.stepId("n"));
+            recordResiduals(section, data, fit);
             section.export(new CalibrationLine(cell.id(), fit, data.xUnit(), data.yUnit(), min(x), max(x)));
         }
         BackCalculation.record(section, data, curve, inversion);
@@ -192,6 +193,28 @@ public final class CalibrationAnalysis implements Analysis {
         section.step("weighting_choice", "Weighting chosen by auto: " + best.notation(),
                 "choose w minimising Σ|(x̂ᵢ − xᵢ)/xᵢ| × 100 over the standards with xᵢ ≠ 0", inputs, sums.get(best), "%", null);
         return best;
+    }
+
+    /** Standardized and internally studentized residuals per point, for the data table. */
+    private static void recordResiduals(SectionBuilder section, CalibrationData data, LineFit fit) {
+        double[] z = fit.standardizedResiduals();
+        double[] r = fit.studentizedResiduals();
+        double[] h = fit.leverages();
+        String points = section.stepId("n");
+        String s = section.stepId("residual_sd");
+        List<CalibrationPoint> used = data.used();
+        for (int i = 0; i < used.size(); i++) {
+            String label = used.get(i).label();
+            String zId = section.quantity(SectionBuilder.QuantityDraft.of("standardized_residual:" + label,
+                    "Standardized residual of " + label, "zᵢ = eᵢ·√wᵢ / s(y/x)",
+                    List.of(LineTrail.from("x, y, w", points), section.ref("s(y/x)", s)), z[i], null));
+            if (Double.isFinite(r[i])) {
+                section.quantity(SectionBuilder.QuantityDraft.of("studentized_residual:" + label,
+                        "Studentized residual of " + label, "rᵢ = zᵢ / √(1 − hᵢᵢ), hᵢᵢ = wᵢ(1/Σw + (xᵢ − x̄w)²/Sxx)",
+                        List.of(section.ref("z", zId), StepInput.number("hᵢᵢ", h[i], null, "leverage, weighted")),
+                        r[i], null).withMethod("internally studentized residual; Draper & Smith, ch. 8"));
+            }
+        }
     }
 
     private static void flagResiduals(SectionBuilder section, CalibrationData data, CalibrationCurve curve) {

@@ -133,4 +133,14 @@ class CalibrationFinishTest {
             assertTrue(org.meritbook.study.AnalysisKind.CALIBRATION.reportedNames().contains(base), base);
         }
     }
+
+    @Test
+    void studentizedResidualsSitInTheTableAndMatchRstandard() {
+        SectionResult s = run("weighting: 1/x^2\n");
+        // R 4.x, rstandard(lm(y ~ x, weights = 1/x^2)): the first and last standards (rows 2 and 11)
+        assertEquals(0.9000333801633713, q(s, "studentized_residual:B2"), 1e-11);
+        assertEquals(1.1510441065004728, q(s, "studentized_residual:B11"), 1e-11);
+        assertTrue(s.table().headers().contains("Studentized residual"));
+        assertTrue(s.table().headers().contains("Standardized residual"));
+    }
 }
