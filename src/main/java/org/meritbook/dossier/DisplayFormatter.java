@@ -86,7 +86,7 @@ public final class DisplayFormatter {
     }
 
     private static boolean isCount(String base) {
-        return base.equals("n") || base.endsWith("_count");
+        return base.equals("n") || base.endsWith("_count") || base.endsWith("_df");
     }
 
     private static boolean isP(String base) {

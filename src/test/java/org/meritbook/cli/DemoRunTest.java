@@ -107,6 +107,10 @@ class DemoRunTest {
         assertEquals(ols.estimateRegressionStandardError(), q.get("residual_sd").get("value").asDouble(), 1e-9);
         assertEquals("mAU·s per mg/L", q.get("slope").get("unit").asText());
         assertEquals("1/y^2 (chosen by auto)", section("linearity").get("settings").get("Weighting").asText());
+        // the equation rounded as the dossier rounds a quantity with an interval: the slope 41.55 ± 0.40, the
+        // intercept to the two decimals its own 95 % half-width allows (so 0.40, not the 0.396 of a fixed 3 digits)
+        assertEquals("Peak area (mAU·s) = 0.40 + 41.55 · Nominal (mg/L)",
+                section("linearity").get("settings").get("Calibration equation").asText());
     }
 
     @Test

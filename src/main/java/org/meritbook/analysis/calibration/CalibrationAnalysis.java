@@ -15,7 +15,9 @@ import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.stats.regression.LeastSquares;
 import org.meritbook.stats.regression.LineFit;
+import org.meritbook.stats.regression.LineModel;
 import org.meritbook.stats.regression.QuadraticFit;
+import org.meritbook.stats.regression.RegressionAnova;
 import org.meritbook.stats.regression.Weighting;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.trail.StepInput;
@@ -42,6 +44,8 @@ public final class CalibrationAnalysis implements Analysis {
         Weighting weighting = chooseWeighting(options, data, section);
         section.setting("Model", options.model().description(), options.model().keyword());
         section.setting("Weighting", weighting.notation() + (options.weighting().isAuto() ? " (chosen by auto)" : ""));
+        section.setting("Weight scaling", PointsStep.scaling(weighting));
+        section.setting("Shapiro–Wilk test on", "the standardized residuals eᵢ·√wᵢ / s(y/x) of the points in the fit");
         section.setting("Confidence level", "95 %");
         double[] x = data.usedX();
         double[] y = data.usedY();
@@ -57,12 +61,18 @@ public final class CalibrationAnalysis implements Analysis {
             inversion = new QuadraticTrail(section, data, fit).record();
             curve = CalibrationCurve.of(fit, min(x), max(x));
             checks.record(fit);
+            AnovaTrail.record(section, RegressionAnova.of(fit.x(), fit.y(), fit.weights(), fit.fitted(), 3, true), true,
+                    data.yUnit(), section.stepId("n"));
         } else {
             LineFit fit = Attempt.required(where, "calibration data a straight line can be fitted to", fix,
                     () -> LeastSquares.fitLine(x, y, weighting, options.model().lineModel()));
+            section.setting("Calibration equation", Equation.rounded(data, fit));
             inversion = new LineTrail(section, data, fit).record();
             curve = CalibrationCurve.of(fit);
             checks.record(fit);
+            AnovaTrail.record(section, RegressionAnova.of(fit), fit.model() == LineModel.WITH_INTERCEPT, data.yUnit(),
+                    section.stepId("n"));
+            recordResiduals(section, data, fit);
             section.export(new CalibrationLine(cell.id(), fit, data.xUnit(), data.yUnit(), min(x), max(x)));
         }
         BackCalculation.record(section, data, curve, inversion);
@@ -189,6 +199,28 @@ public final class CalibrationAnalysis implements Analysis {
         section.step("weighting_choice", "Weighting chosen by auto: " + best.notation(),
                 "choose w minimising Σ|(x̂ᵢ − xᵢ)/xᵢ| × 100 over the standards with xᵢ ≠ 0", inputs, sums.get(best), "%", null);
         return best;
+    }
+
+    /** Standardized and internally studentized residuals per point, for the data table. */
+    private static void recordResiduals(SectionBuilder section, CalibrationData data, LineFit fit) {
+        double[] z = fit.standardizedResiduals();
+        double[] r = fit.studentizedResiduals();
+        double[] h = fit.leverages();
+        String points = section.stepId("n");
+        String s = section.stepId("residual_sd");
+        List<CalibrationPoint> used = data.used();
+        for (int i = 0; i < used.size(); i++) {
+            String label = used.get(i).label();
+            String zId = section.quantity(SectionBuilder.QuantityDraft.of("standardized_residual:" + label,
+                    "Standardized residual of " + label, "zᵢ = eᵢ·√wᵢ / s(y/x)",
+                    List.of(LineTrail.from("x, y, w", points), section.ref("s(y/x)", s)), z[i], null));
+            if (Double.isFinite(r[i])) {
+                section.quantity(SectionBuilder.QuantityDraft.of("studentized_residual:" + label,
+                        "Studentized residual of " + label, "rᵢ = zᵢ / √(1 − hᵢᵢ), hᵢᵢ = wᵢ(1/Σw + (xᵢ − x̄w)²/Sxx)",
+                        List.of(section.ref("z", zId), StepInput.number("hᵢᵢ", h[i], null, "leverage, weighted")),
+                        r[i], null).withMethod("internally studentized residual; Draper & Smith, ch. 8"));
+            }
+        }
     }
 
     private static void flagResiduals(SectionBuilder section, CalibrationData data, CalibrationCurve curve) {

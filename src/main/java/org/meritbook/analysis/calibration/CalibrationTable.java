@@ -27,6 +27,8 @@ final class CalibrationTable {
         String xUnit = data.xUnit();
         headers.add("Back-calculated" + (xUnit == null ? "" : " (" + xUnit + ")"));
         headers.add("Deviation (%)");
+        headers.add("Standardized residual");
+        headers.add("Studentized residual");
         List<DataTable.Row> rows = new ArrayList<>();
         for (int i = 0; i < data.points().size(); i++) {
             CalibrationPoint p = data.points().get(i);
@@ -37,6 +39,8 @@ final class CalibrationTable {
             }
             cells.add(computedOrBlank("back_calculated:" + p.label(), hasQuantity));
             cells.add(computedOrBlank("deviation_percent:" + p.label(), hasQuantity));
+            cells.add(computedOrBlank("standardized_residual:" + p.label(), hasQuantity));
+            cells.add(computedOrBlank("studentized_residual:" + p.label(), hasQuantity));
             rows.add(new DataTable.Row(p.label(), cells, p.exclusionReason()));
         }
         return new DataTable(headers, rows);

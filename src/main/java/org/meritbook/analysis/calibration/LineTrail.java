@@ -90,6 +90,10 @@ final class LineTrail {
                 origin ? "Coefficient of determination r² (uncentred, through origin)" : "Coefficient of determination r²",
                 origin ? "r² = Σwᵢŷᵢ² / Σwᵢyᵢ²" : "r² = r·r",
                 List.of(from("x, y, w", points), section.ref("b", slope)), fit.rSquared(), null).inSummary());
+        section.step("equation", "Calibration equation, every digit (the value shown is the slope b): " + Equation.full(data, fit),
+                origin ? "y = b·x" : "y = a + b·x",
+                origin ? List.of(section.ref("b", slope)) : List.of(section.ref("a", intercept), section.ref("b", slope)),
+                fit.slope(), slopeUnit, null);
         List<StepInput> coefficients = intercept == null ? List.of(section.ref("b", slope))
                 : List.of(section.ref("a", intercept), section.ref("b", slope));
         return new BackCalculation.Inversion(intercept == null ? "x̂ = y / b" : "x̂ = (y − a) / b", coefficients);

@@ -37,7 +37,40 @@ final class PointsStep {
         for (String decision : data.block().decisions()) {
             inputs.add(StepInput.text("reading " + block, decision, data.block().file().getFileName().toString()));
         }
-        return section.quantity(QuantityDraft.of("n", "Number of calibration points in the fit",
+        String id = section.quantity(QuantityDraft.of("n", "Number of calibration points in the fit",
                 "n = points in the range not excluded", inputs, n, null));
+        if (weighting != Weighting.NONE) {
+            recordScale(section, data, weighting, id);
+        }
+        return id;
+    }
+
+    /**
+     * How the weights are scaled: each raw weight is divided by their mean, so they average 1. The
+     * slope and intercept do not depend on that choice, but s(y/x) and the sums of squares do: they
+     * are those of a point of average weight.
+     */
+    private static void recordScale(SectionBuilder section, CalibrationData data, Weighting weighting, String points) {
+        double[] raw = weighting.rawWeights(data.usedX(), data.usedY());
+        double mean = 0;
+        for (double v : raw) {
+            mean += v;
+        }
+        mean /= raw.length;
+        String symbol = weighting.basis() + "ᵢ" + (weighting.power() == 2 ? "²" : "");
+        String basisUnit = "x".equals(weighting.basis()) ? data.xUnit() : data.yUnit();
+        String unit = basisUnit == null ? null : "1/(" + basisUnit + ")" + (weighting.power() == 2 ? "²" : "");
+        section.step("weight_scale", "Mean raw weight, the divisor that scales the weights to average 1",
+                "w′ᵢ = 1/" + symbol + ";  w̄′ = Σw′ᵢ / n;  wᵢ = w′ᵢ / w̄′, so Σwᵢ = n",
+                List.of(StepInput.text(weighting.basis() + ", n", "the points listed in " + points, points)),
+                mean, unit, null);
+    }
+
+    /** The settings line that says how the weights are scaled. */
+    static String scaling(Weighting weighting) {
+        return weighting == Weighting.NONE ? "none: every weight is 1"
+                : "each weight " + weighting.notation() + " divided by the mean weight of the points in the fit, so "
+                + "the weights average 1 (Σw = n); s(y/x) and the sums of squares are those of a point of average "
+                + "weight";
     }
 }

@@ -135,6 +135,37 @@ public record LineFit(LineModel model, Weighting weighting, int n, int degreesOf
         return standardizedResiduals.clone();
     }
 
+    /**
+     * Leverages h_ii = w_i·(1/Σw + (x_i − x̄w)²/Sxx), or w_i·x_i²/Sxx through the origin: the diagonal
+     * of the weighted hat matrix W^½X(X'WX)⁻¹X'W^½ (Draper &amp; Smith, ch. 8 and 9).
+     */
+    public double[] leverages() {
+        double sumW = 0;
+        for (double w : weights) {
+            sumW += w;
+        }
+        double[] h = new double[n];
+        for (int i = 0; i < n; i++) {
+            h[i] = model == LineModel.THROUGH_ORIGIN ? weights[i] * x[i] * x[i] / sxx
+                    : weights[i] * (1 / sumW + (x[i] - weightedMeanX) * (x[i] - weightedMeanX) / sxx);
+        }
+        return h;
+    }
+
+    /**
+     * Internally studentized residuals e_i·√w_i / (s·√(1 − h_ii)), what R's {@code rstandard()} gives
+     * for a weighted {@code lm}. 0 for a perfect fit; NaN where h_ii = 1 (a point that alone fixes the
+     * line has no residual to studentize).
+     */
+    public double[] studentizedResiduals() {
+        double[] h = leverages();
+        double[] r = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = residualSd > 0 ? residuals[i] * Math.sqrt(weights[i]) / (residualSd * Math.sqrt(1 - h[i])) : 0;
+        }
+        return r;
+    }
+
     /** The response the line gives at x0: a + b·x0. */
     public double predict(double x0) {
         return intercept + slope * x0;
