@@ -20,6 +20,10 @@ public record FigureSpec(String id, String title, String xTitle, String yTitle, 
     }
 
     /**
+     * A point with an infinite coordinate (a relative value of a concentration near the smallest
+     * double) cannot be drawn and is left out; the section's warnings say why its value is missing.
+     * NaN stays: it is a gap in a line.
+     *
      * @param name   legend text
      * @param style  how to draw it
      * @param x      x values
@@ -30,8 +34,20 @@ public record FigureSpec(String id, String title, String xTitle, String yTitle, 
             if (x.length != y.length) {
                 throw new IllegalArgumentException("series " + name + ": x and y differ in length");
             }
-            x = x.clone();
-            y = y.clone();
+            int drawable = 0;
+            for (int i = 0; i < x.length; i++) {
+                drawable += Double.isInfinite(x[i]) || Double.isInfinite(y[i]) ? 0 : 1;
+            }
+            double[] fx = new double[drawable];
+            double[] fy = new double[drawable];
+            for (int i = 0, k = 0; i < x.length; i++) {
+                if (!Double.isInfinite(x[i]) && !Double.isInfinite(y[i])) {
+                    fx[k] = x[i];
+                    fy[k++] = y[i];
+                }
+            }
+            x = fx;
+            y = fy;
         }
 
         @Override

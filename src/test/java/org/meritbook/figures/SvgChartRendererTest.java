@@ -202,4 +202,14 @@ class SvgChartRendererTest {
         f.setNamespaceAware(true);
         return f.newDocumentBuilder().parse(new InputSource(new StringReader(svg)));
     }
+
+    @Test
+    void aPointWithAnInfiniteCoordinateIsLeftOutOfItsSeries() {
+        // Found by the robustness corpus: a response factor y/x of a concentration of 4.9e-324 is infinite.
+        FigureSpec.Series s = new FigureSpec.Series("levels", FigureSpec.Style.POINTS,
+                new double[] {1, 2, 3, 4}, new double[] {10, Double.POSITIVE_INFINITY, 30, Double.NaN});
+        org.junit.jupiter.api.Assertions.assertArrayEquals(new double[] {1, 3, 4}, s.x());
+        org.junit.jupiter.api.Assertions.assertEquals(3, s.y().length);
+        org.junit.jupiter.api.Assertions.assertTrue(Double.isNaN(s.y()[2]), "NaN stays, a gap in a line");
+    }
 }

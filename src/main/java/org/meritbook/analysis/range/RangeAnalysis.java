@@ -45,6 +45,7 @@ public final class RangeAnalysis implements Analysis {
         double tolerance = percent(cell, context, "tolerance", DEFAULT_TOLERANCE);
         double deviationLimit = percent(cell, context, "deviation", DEFAULT_DEVIATION);
         List<LevelCheck> levels = levels(line.fit());
+        long positive = java.util.Arrays.stream(line.fit().x()).filter(v -> v > 0).distinct().count();
         if (levels.size() < 2) {
             throw new InputException(ErrorKey.TOO_FEW_POINTS, context.where(cell.lineOf("calibration")),
                     "a calibration with at least two levels above zero", levels.size() + " in '" + line.cellId() + "'",
@@ -52,6 +53,10 @@ public final class RangeAnalysis implements Analysis {
         }
         SectionBuilder section = new SectionBuilder(cell);
         section.setting("Calibration", "'" + line.cellId() + "', " + levels.size() + " levels above zero");
+        if (levels.size() < positive) {
+            section.warning((positive - levels.size()) + " level(s) of '" + line.cellId() + "' left out of the range: "
+                    + "their concentration is so close to zero that a response factor or relative deviation is not finite.");
+        }
         section.setting("Response factor", "y/x per standard, averaged per level; within ±" + trimmed(tolerance)
                 + " % of the span's mean" + (cell.option("tolerance").isPresent() ? "" : " (default, common practice)"));
         section.setting("Back-calculated deviation", "mean per level within ±" + trimmed(deviationLimit) + " %"
@@ -129,7 +134,9 @@ public final class RangeAnalysis implements Analysis {
                 rf += p[1] / p[0];
             }
             int n = e.getValue().size();
-            levels.add(new LevelCheck(e.getKey(), n, dev / n, rf / n));
+            if (Double.isFinite(dev) && Double.isFinite(rf)) { // a level near the smallest double has no finite ratio
+                levels.add(new LevelCheck(e.getKey(), n, dev / n, rf / n));
+            }
         }
         return levels;
     }

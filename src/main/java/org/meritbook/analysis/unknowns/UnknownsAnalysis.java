@@ -243,8 +243,7 @@ public final class UnknownsAnalysis implements Analysis {
         if (units.convert()) {
             headers.add("Content (" + units.result() + ")");
         }
-        headers.add("QC deviation (%)");
-        headers.add("Flag");
+        headers.add("Flag"); // QC deviations are in the results and the summary: the table must fit the page
         List<DataTable.Row> out = new ArrayList<>();
         for (MeasuredRows.Row r : rows.rows()) {
             List<TableCell> cells = new ArrayList<>();
@@ -257,7 +256,6 @@ public final class UnknownsAnalysis implements Analysis {
             if (units.convert()) {
                 cells.add(computed(section, id == null ? null : "content:" + id));
             }
-            cells.add(computed(section, id == null ? null : "qc_deviation_percent:" + id));
             cells.add(TableCell.raw(id == null ? "" : notes.getOrDefault(id, ""), null));
             out.add(new DataTable.Row(id == null ? r.label(UnknownsOptions.SAMPLE) : id, cells, r.exclusionReason()));
         }
