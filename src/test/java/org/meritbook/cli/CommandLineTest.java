@@ -269,8 +269,8 @@ class CommandLineTest {
         Outcome o = Cli.execute("run", nb.toString(), "-o", dir.resolve("out").toString());
         assertEquals(0, o.code(), o.err());
         String html = Files.readString(dir.resolve("out/study/rev1/study-rev1.html"));
-        // Perfect fit; lack of fit, Mandel, Shapiro–Wilk and the intercept's t test not evaluable.
-        assertTrue(html.contains("without a criterion; 5 warnings"), "the count includes the section's warnings");
+        // Perfect fit; lack of fit, Mandel, Shapiro–Wilk, the intercept's t test and the regression ANOVA's F not evaluable.
+        assertTrue(html.contains("without a criterion; 6 warnings"), "the count includes the section's warnings");
         assertTrue(html.contains("<li>calibration: Perfect fit"), "the summary lists the section's warning");
     }
 }

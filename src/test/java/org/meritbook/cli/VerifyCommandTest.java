@@ -263,8 +263,8 @@ class VerifyCommandTest {
         }
         Outcome o = Cli.execute("verify", copy.toString());
         assertEquals(1, o.code(), o.out() + o.err());
-        assertTrue(o.out().matches("(?s).*page \\d+ shows \"[^\"]*41\\.37 ± 0\\.31[^\"]*\" where its attachments give "
-                + "\"[^\"]*41\\.73 ± 0\\.31[^\"]*\".*"), o.out());
+        assertTrue(o.out().matches("(?s).*page \\d+ shows \"[^\"]*14\\.55 ± 0\\.40[^\"]*\" where its attachments give "
+                + "\"[^\"]*41\\.55 ± 0\\.40[^\"]*\".*"), o.out());
     }
 
     /**
