@@ -151,7 +151,7 @@ public record MeasuredRows(DataBlock block, List<Column> columns, List<Row> rows
         for (Exclusion e : cell.exclusions()) {
             CellRef ref = byAddress.get(e.address());
             if (ref != null) {
-                reasons.put(ref, e.reason());
+                reasons.put(ref, e.shownReason());
                 claimed.add(e);
             }
         }

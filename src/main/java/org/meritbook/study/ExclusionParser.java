@@ -14,7 +14,7 @@ import org.meritbook.error.ErrorKey;
  * A point leaves the statistics only this way, so every entry must name one cell and say why.
  */
 final class ExclusionParser {
-    private static final List<String> KEYS = List.of("cell", "reason");
+    private static final List<String> KEYS = List.of("cell", "reason", "by", "on");
     private static final String SHAPE = "a list of entries '- cell: Sheet!C17' with 'reason: ...'";
     // Unquoted sheet: no '!' and no leading quote; quoted sheet: '' escapes a quote.
     private static final Pattern ADDRESS = Pattern.compile("(?:'((?:[^']|'')+)'|([^'!][^!]*))!\\$?([A-Za-z]{1,3})\\$?([0-9]{1,7})");
@@ -73,7 +73,17 @@ final class ExclusionParser {
         if (!ok || address == null || reason == null) {
             return null;
         }
-        return new Exclusion(address[0], address[1], reason, entry.line());
+        String by = optional(map.get("by"), "who excluded the point, e.g. 'by: I. Hollinsworth'");
+        String on = optional(map.get("on"), "the date of the exclusion, e.g. 'on: 2026-11-20'");
+        if (on != null && !on.matches("\\d{4}-\\d{2}-\\d{2}")) {
+            problems.add(ErrorKey.BAD_OPTION_VALUE, map.get("on").line(), "a date as YYYY-MM-DD for 'on:'",
+                    Problems.quote(on), "Write the date of the exclusion as e.g. 2026-11-20.");
+            return null;
+        }
+        if (map.containsKey("by") && by == null || map.containsKey("on") && on == null) {
+            return null;
+        }
+        return new Exclusion(address[0], address[1], reason, by, on, entry.line());
     }
 
     /** {sheet, A1} or null when reported. */
@@ -95,6 +105,19 @@ final class ExclusionParser {
         }
         String sheet = m.group(1) != null ? m.group(1).replace("''", "'") : m.group(2);
         return new String[] {sheet, m.group(3).toUpperCase(Locale.ROOT) + m.group(4)};
+    }
+
+    /** An optional one-line entry key: null when absent; reported (and null) when empty or not text. */
+    private String optional(OptionValue value, String expected) {
+        if (value == null) {
+            return null;
+        }
+        if (!value.isScalar() || value.text().isBlank()) {
+            problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), expected, Problems.describe(value),
+                    "Fill it in or remove the line.");
+            return null;
+        }
+        return value.text().strip();
     }
 
     private String reason(OptionValue reason, int entryLine) {
