@@ -9,6 +9,7 @@ import org.meritbook.analysis.SectionResult;
 import org.meritbook.study.AnalysisKind;
 import org.meritbook.trail.Step;
 import org.meritbook.trail.StepInput;
+import org.meritbook.analysis.Verdict;
 
 /**
  * Back-calculated calibration standards within ±tolerance % of nominal (±lowestLevelTolerance % at

@@ -6,6 +6,7 @@ import java.util.Objects;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.study.AnalysisKind;
+import org.meritbook.analysis.Verdict;
 
 /**
  * A limit on one named quantity (results.json name) of every section of one kind, e.g.

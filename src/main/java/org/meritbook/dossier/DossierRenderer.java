@@ -19,7 +19,7 @@ import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.revision.RevisionContext;
-import org.meritbook.revision.InputFile;
+import org.meritbook.pipeline.InputFile;
 import org.meritbook.study.FrontMatter;
 
 /**

@@ -27,8 +27,6 @@ import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
-import org.meritbook.revision.InputFile;
-import org.meritbook.revision.Sha256;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.AnalysisKind;
 import org.meritbook.study.SourceFile;

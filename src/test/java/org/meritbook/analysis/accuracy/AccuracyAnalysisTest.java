@@ -17,7 +17,7 @@ import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
 import org.meritbook.criteria.AcceptanceProfiles;
-import org.meritbook.criteria.Verdict;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.error.InputException;
