@@ -74,6 +74,14 @@ public record QuantityRule(AnalysisKind kind, String characteristic, String quan
                 .filter(q -> q.name().equals(quantity) || q.name().startsWith(quantity + ":")).toList();
     }
 
+    /**
+     * Whether this rule judges sections of this kind and model, the model as the notebook words it
+     * (null for a section without one), as {@link #judge} decides from the section's settings.
+     */
+    public boolean judges(AnalysisKind sectionKind, String sectionModel) {
+        return sectionKind == kind && (model == null || model.equals(sectionModel));
+    }
+
     private boolean modelMatches(SectionResult section) {
         return model == null || section.settings().stream()
                 .anyMatch(s -> s.label().equals("Model") && model.equals(s.key()));
