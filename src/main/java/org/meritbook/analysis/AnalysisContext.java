@@ -17,23 +17,30 @@ import org.meritbook.study.Study;
  * @param study   the whole study (for messages: the notebook's file name)
  * @param data    data access
  * @param earlier the sections of the cells run so far, by cell id
+ * @param bands   the limits the study's acceptance profile sets, for figures that draw them
  */
-public record AnalysisContext(Study study, DataAccess data, Map<String, SectionResult> earlier) {
+public record AnalysisContext(Study study, DataAccess data, Map<String, SectionResult> earlier, AcceptanceBands bands) {
     public AnalysisContext {
         Objects.requireNonNull(study, "study");
         Objects.requireNonNull(data, "data");
+        Objects.requireNonNull(bands, "bands");
         earlier = Collections.unmodifiableMap(new LinkedHashMap<>(earlier));
     }
 
+    /** A study judged by no profile. */
     public AnalysisContext(Study study, DataAccess data) {
-        this(study, data, Map.of());
+        this(study, data, Map.of(), AcceptanceBands.NONE);
+    }
+
+    public AnalysisContext(Study study, DataAccess data, AcceptanceBands bands) {
+        this(study, data, Map.of(), bands);
     }
 
     /** This context with one more section run. */
     public AnalysisContext with(SectionResult section) {
         Map<String, SectionResult> more = new LinkedHashMap<>(earlier);
         more.put(section.id(), section);
-        return new AnalysisContext(study, data, more);
+        return new AnalysisContext(study, data, more, bands);
     }
 
     /** {@code "study.md line 14"}, the form every notebook-located message uses. */

@@ -2,7 +2,6 @@ package org.meritbook.analysis;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.meritbook.criteria.Verdict;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.stats.Interval;
 import org.meritbook.study.AnalysisCell;

@@ -3,7 +3,6 @@ package org.meritbook.analysis;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
-import org.meritbook.criteria.Verdict;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.study.AnalysisKind;
 import org.meritbook.trail.Step;

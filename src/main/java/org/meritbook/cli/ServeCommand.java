@@ -8,9 +8,9 @@ import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
-import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
+import org.meritbook.publishing.PublishingSequence;
 import org.meritbook.serve.LiveSession;
 import org.meritbook.serve.ShownProblem;
 import org.meritbook.serve.Snapshot;
@@ -31,6 +31,15 @@ final class ServeCommand implements Callable<Integer> {
             description = "Port on 127.0.0.1 (default ${DEFAULT-VALUE}; 0 picks a free one).")
     int port;
 
+    @Option(names = {"-o", "--out"}, paramLabel = "DIR", defaultValue = "out",
+            description = "The output folder 'run' writes into (default: ${DEFAULT-VALUE}): the preview shows the "
+                    + "revision history and the changes since the latest revision in DIR/<study>/, as run would.")
+    Path out;
+
+    @Option(names = "--templates", paramLabel = "DIR",
+            description = "Use the dossier templates in DIR (a lab's own copy of report-templates/), as given to run.")
+    Path templates;
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -40,11 +49,12 @@ final class ServeCommand implements Callable<Integer> {
             throw new InputException(ErrorKey.FILE_NOT_FOUND, notebook.toString(), "a study notebook", "no such file",
                     "Check the path, or write a starter notebook with 'meritbook new WORKBOOK'.");
         }
-        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter console = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         LiveSession session;
         try {
-            session = LiveSession.start(notebook, port, new DossierRenderer(Optional.empty()), s -> report(s, out));
+            session = LiveSession.start(notebook, port, PublishingSequence.standard(Optional.ofNullable(templates)),
+                    Optional.of(out), s -> report(s, console));
         } catch (BindException e) {
             err.println("meritbook: port " + port + " on 127.0.0.1 is in use; choose another with --port N (0 picks a free one).");
             err.flush();
@@ -56,8 +66,8 @@ final class ServeCommand implements Callable<Integer> {
             stopped.countDown();
         }, "meritbook-live-stop");
         Runtime.getRuntime().addShutdownHook(hook);
-        out.println("meritbook serve: " + session.uri() + " (Ctrl-C stops; nothing is written)");
-        out.flush();
+        console.println("meritbook serve: " + session.uri() + " (Ctrl-C stops; nothing is written)");
+        console.flush();
         stopped.await();
         return Main.DONE;
     }

@@ -4,8 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.meritbook.dossier.DossierRenderer;
-import org.meritbook.pipeline.StudyRunner;
+import org.meritbook.publishing.PublishingSequence;
 import org.meritbook.revision.DossierVerifier;
 import org.meritbook.revision.Verification;
 import picocli.CommandLine;
@@ -37,10 +36,9 @@ final class VerifyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        StudyRunner runner = StudyRunner.withBuiltInAnalyses();
-        DossierRenderer renderer = new DossierRenderer(Optional.ofNullable(templates));
-        Verification v = new DossierVerifier(runner::run, (results, json, revisions) ->
-                renderer.render(results, json, revisions).pdf()).verify(dossier, Optional.ofNullable(against));
+        // The same sequence run issues with: the same analyses, the same renderer and templates.
+        PublishingSequence sequence = PublishingSequence.standard(Optional.ofNullable(templates));
+        Verification v = new DossierVerifier(sequence::run, sequence::pdf).verify(dossier, Optional.ofNullable(against));
         PrintWriter out = spec.commandLine().getOut();
         if (v.reproduced()) {
             out.println("meritbook: verified " + v.dossier() + ": all " + v.quantities() + " results of "

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import org.meritbook.analysis.SectionResult;
+import org.meritbook.analysis.Verdict;
 
 /**
  * A named set of acceptance rules. Built-in profiles are defaults to be confirmed by the laboratory;

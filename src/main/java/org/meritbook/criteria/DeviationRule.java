@@ -9,6 +9,7 @@ import org.meritbook.analysis.SectionResult;
 import org.meritbook.study.AnalysisKind;
 import org.meritbook.trail.Step;
 import org.meritbook.trail.StepInput;
+import org.meritbook.analysis.Verdict;
 
 /**
  * Back-calculated calibration standards within ±tolerance % of nominal (±lowestLevelTolerance % at
@@ -40,7 +41,7 @@ public record DeviationRule(String characteristic, double tolerance, double lowe
 
     @Override
     public List<Verdict> judge(SectionResult section, Comparison comparison) {
-        if (section.kind() != AnalysisKind.CALIBRATION) {
+        if (!judges(section.kind())) {
             return List.of();
         }
         List<double[]> judged = new ArrayList<>(); // nominal, deviation
@@ -73,6 +74,11 @@ public record DeviationRule(String characteristic, double tolerance, double lowe
                 + (outside.isEmpty() ? "" : "; outside: " + String.join(", ", outside));
         return List.of(new Verdict(characteristic, null, text(),
                 pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL, reason));
+    }
+
+    /** Whether this rule judges sections of this kind: calibrations, whose standards are back-calculated. */
+    public boolean judges(AnalysisKind kind) {
+        return kind == AnalysisKind.CALIBRATION;
     }
 
     /** The nominal concentration x the deviation step used, as its trail records it. */

@@ -6,6 +6,7 @@ import java.util.Objects;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.study.AnalysisKind;
+import org.meritbook.analysis.Verdict;
 
 /**
  * A limit on one named quantity (results.json name) of every section of one kind, e.g.
@@ -71,6 +72,14 @@ public record QuantityRule(AnalysisKind kind, String characteristic, String quan
         }
         return section.quantities().stream()
                 .filter(q -> q.name().equals(quantity) || q.name().startsWith(quantity + ":")).toList();
+    }
+
+    /**
+     * Whether this rule judges sections of this kind and model, the model as the notebook words it
+     * (null for a section without one), as {@link #judge} decides from the section's settings.
+     */
+    public boolean judges(AnalysisKind sectionKind, String sectionModel) {
+        return sectionKind == kind && (model == null || model.equals(sectionModel));
     }
 
     private boolean modelMatches(SectionResult section) {

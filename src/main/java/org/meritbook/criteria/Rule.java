@@ -2,6 +2,7 @@ package org.meritbook.criteria;
 
 import java.util.List;
 import org.meritbook.analysis.SectionResult;
+import org.meritbook.analysis.Verdict;
 
 /** One acceptance rule of a profile: it judges the sections it applies to. */
 public sealed interface Rule permits QuantityRule, DeviationRule {

@@ -9,7 +9,7 @@ import java.util.GregorianCalendar;
 import java.util.List;
 import java.util.Locale;
 import java.util.TimeZone;
-import org.meritbook.revision.InputFile;
+import org.meritbook.pipeline.InputFile;
 import org.meritbook.study.FrontMatter;
 
 /**

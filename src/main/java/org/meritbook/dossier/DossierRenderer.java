@@ -19,7 +19,7 @@ import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.revision.RevisionContext;
-import org.meritbook.revision.InputFile;
+import org.meritbook.pipeline.InputFile;
 import org.meritbook.study.FrontMatter;
 
 /**
@@ -75,7 +75,12 @@ public final class DossierRenderer {
      * preview, which skips the PDF (about a second of work) on every change.
      */
     public byte[] renderHtml(StudyResults results, byte[] resultsJson) {
-        Prepared p = prepare(results, resultsJson, RevisionContext.none());
+        return renderHtml(results, resultsJson, RevisionContext.none());
+    }
+
+    /** The HTML dossier alone, with the earlier revisions' history and the changes since the latest. */
+    public byte[] renderHtml(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
+        Prepared p = prepare(results, resultsJson, revisions);
         return templates.render(p.view().forPdf(false)).getBytes(StandardCharsets.UTF_8);
     }
 

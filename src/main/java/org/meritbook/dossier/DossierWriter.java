@@ -19,10 +19,13 @@ public final class DossierWriter {
 
     /** {@code <notebook name without .md>-rev<N>}, e.g. {@code nitrite-rev2}. */
     public static String baseName(Study study) {
+        return stem(study) + "-rev" + study.frontMatter().revision();
+    }
+
+    /** The notebook's name without .md, e.g. {@code nitrite}: the study's output folder and its files' stem. */
+    public static String stem(Study study) {
         String name = study.file().getFileName().toString();
-        String stem = name.toLowerCase(Locale.ROOT).endsWith(".md") ? name.substring(0, name.length() - 3)
-                : name;
-        return stem + "-rev" + study.frontMatter().revision();
+        return name.toLowerCase(Locale.ROOT).endsWith(".md") ? name.substring(0, name.length() - 3) : name;
     }
 
     /** File name → bytes, in the order a run reports them: PDF, HTML, results.json, trail.md. */

@@ -9,7 +9,7 @@ import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
 import org.meritbook.analysis.TableCell;
-import org.meritbook.criteria.Verdict;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.dossier.SectionView.CellView;
 import org.meritbook.dossier.SectionView.ColumnView;
 import org.meritbook.dossier.SectionView.Exclusion;

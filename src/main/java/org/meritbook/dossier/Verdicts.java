@@ -1,6 +1,6 @@
 package org.meritbook.dossier;
 
-import org.meritbook.criteria.Verdict;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.dossier.DossierView.VerdictView;
 
 /** How outcomes read: a word and a symbol, so that colour is never the only signal. */

@@ -3,8 +3,7 @@ package org.meritbook.pipeline;
 import java.util.List;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.criteria.AcceptanceProfile;
-import org.meritbook.criteria.Verdict;
-import org.meritbook.revision.InputFile;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.Study;
 

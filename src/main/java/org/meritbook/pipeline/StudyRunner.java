@@ -25,10 +25,9 @@ import org.meritbook.analysis.range.RangeAnalysis;
 import org.meritbook.analysis.unknowns.UnknownsAnalysis;
 import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.AcceptanceProfiles;
+import org.meritbook.criteria.ProfileBands;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
-import org.meritbook.revision.InputFile;
-import org.meritbook.revision.Sha256;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.AnalysisKind;
 import org.meritbook.study.SourceFile;
@@ -83,7 +82,7 @@ public final class StudyRunner {
                         .add(block.sheet() + "!" + block.range());
                 return block;
             };
-            AnalysisContext context = new AnalysisContext(study, access);
+            AnalysisContext context = new AnalysisContext(study, access, ProfileBands.of(profile));
             for (AnalysisCell cell : study.cells()) {
                 SectionResult section = analyses.get(cell.kind()).run(cell, context);
                 context = context.with(section);

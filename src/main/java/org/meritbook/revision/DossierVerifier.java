@@ -23,6 +23,7 @@ import org.meritbook.pipeline.SourceTypes;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyResults.SoftwareComponent;
 import org.meritbook.study.Study;
+import org.meritbook.pipeline.Sha256;
 
 /**
  * Verifies a dossier from what it carries, treating the file as untrusted: it must be an intact PDF

@@ -13,12 +13,13 @@ import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
 import org.meritbook.criteria.AcceptanceProfile;
 import org.meritbook.criteria.Rule;
-import org.meritbook.criteria.Verdict;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.FrontMatter;
 import org.meritbook.trail.Step;
 import org.meritbook.trail.StepInput;
+import org.meritbook.pipeline.InputFile;
 
 /**
  * Writes results.json, the stable machine-readable record of a run (schema in docs/results.md).

@@ -16,6 +16,7 @@ import org.meritbook.error.InputException;
 import org.meritbook.study.SourceFile;
 import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
+import org.meritbook.pipeline.Sha256;
 
 /**
  * Unpacks a received dossier's inputs into a fresh private folder so that the study can run again,

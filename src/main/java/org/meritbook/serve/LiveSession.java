@@ -4,9 +4,12 @@ import java.io.IOException;
 import java.net.URI;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
 import org.meritbook.dossier.DossierRenderer;
+import org.meritbook.pipeline.StudyRunner;
+import org.meritbook.publishing.PublishingSequence;
 
 /**
  * {@code meritbook serve} assembled: the study, the watcher that re-runs it and the server that
@@ -27,15 +30,26 @@ public final class LiveSession implements AutoCloseable {
     }
 
     /**
-     * Starts serving on 127.0.0.1:port (0 for any free port) and runs the study once.
+     * Starts serving on 127.0.0.1:port (0 for any free port) and runs the study once, knowing no
+     * output folder (the preview of a first revision).
      *
      * @param finished told each completed run (for the console); called on the worker thread
      */
     public static LiveSession start(Path notebook, int port, DossierRenderer renderer, Consumer<Snapshot> finished)
             throws IOException {
+        return start(notebook, port, new PublishingSequence(StudyRunner.withBuiltInAnalyses()::run, renderer),
+                Optional.empty(), finished);
+    }
+
+    /**
+     * @param sequence the publishing sequence {@code run} issues with
+     * @param out      {@code run}'s output folder, whose earlier revisions the preview shows as the next run would
+     */
+    public static LiveSession start(Path notebook, int port, PublishingSequence sequence, Optional<Path> out,
+                                    Consumer<Snapshot> finished) throws IOException {
         LiveStudy[] study = new LiveStudy[1];
         FileWatcher watcher = new FileWatcher(DEBOUNCE, () -> study[0].request());
-        study[0] = new LiveStudy(notebook, renderer, watcher::watch, finished);
+        study[0] = new LiveStudy(notebook, sequence, out, watcher::watch, finished);
         LiveServer server;
         try {
             // The notebook is watched from the start, so an edit during a failed first parse is seen.

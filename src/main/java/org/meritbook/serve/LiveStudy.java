@@ -16,7 +16,8 @@ import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.error.InputException;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
-import org.meritbook.revision.ResultsJson;
+import org.meritbook.publishing.PublishingSequence;
+import org.meritbook.revision.RevisionContext;
 import org.meritbook.revision.RevisionDiff;
 import org.meritbook.revision.RevisionDiffer;
 import org.meritbook.study.SourceFile;
@@ -24,15 +25,16 @@ import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
 
 /**
- * A notebook kept up to date: runs the ordinary pipeline (parse, {@link StudyRunner}, results.json,
- * the HTML dossier) on one background thread whenever {@link #request()} is called. Requests that
- * arrive during a run are folded into a single following run, so a burst of saves costs at most
- * one extra run. Writes nothing to disk.
+ * A notebook kept up to date: takes the steps of the publishing sequence {@code run} issues with
+ * (parse, the study, its earlier revisions, results.json, the HTML dossier; {@link PublishingSequence})
+ * on one background thread whenever {@link #request()} is called. Requests that arrive during a run
+ * are folded into a single following run, so a burst of saves costs at most one extra run. Writes
+ * nothing to disk.
  */
 public final class LiveStudy implements AutoCloseable {
     private final Path notebook;
-    private final Function<Study, StudyResults> runner;
-    private final DossierRenderer renderer;
+    private final PublishingSequence sequence;
+    private final Optional<Path> out;
     private final Consumer<Set<Path>> inputsChanged;
     private final Consumer<Snapshot> finished;
     private final AtomicReference<Snapshot> current = new AtomicReference<>(Snapshot.initial());
@@ -42,6 +44,8 @@ public final class LiveStudy implements AutoCloseable {
     private boolean closed;
 
     /**
+     * A preview that knows no output folder, so no earlier revision: a first revision's dossier.
+     *
      * @param notebook      the study notebook
      * @param renderer      renders the HTML dossier (default or a lab's templates)
      * @param inputsChanged told the files the notebook reads (itself, its workbooks, a profile file) after each parse
@@ -54,9 +58,19 @@ public final class LiveStudy implements AutoCloseable {
     /** With another pipeline step between parse and rendering (tests inject failures here). */
     LiveStudy(Path notebook, DossierRenderer renderer, Consumer<Set<Path>> inputsChanged, Consumer<Snapshot> finished,
               Function<Study, StudyResults> runner) {
-        this.runner = runner;
+        this(notebook, new PublishingSequence(runner, renderer), Optional.empty(), inputsChanged, finished);
+    }
+
+    /**
+     * @param sequence the publishing sequence {@code run} issues with
+     * @param out      the output folder {@code run} writes into ({@code -o}): the preview shows the history
+     *                 and the changes since the latest revision published there, as the next run would
+     */
+    public LiveStudy(Path notebook, PublishingSequence sequence, Optional<Path> out, Consumer<Set<Path>> inputsChanged,
+                     Consumer<Snapshot> finished) {
+        this.sequence = sequence;
+        this.out = out;
         this.notebook = notebook.toAbsolutePath().normalize();
-        this.renderer = renderer;
         this.inputsChanged = inputsChanged;
         this.finished = finished;
         this.worker = new Thread(this::work, "meritbook-live-runner");
@@ -125,9 +139,12 @@ public final class LiveStudy implements AutoCloseable {
         try {
             Study study = StudyParser.parse(notebook);
             inputsChanged.accept(inputs(study));
-            StudyResults results = runner.apply(study);
-            byte[] json = ResultsJson.toBytes(results);
-            byte[] html = renderer.renderHtml(results, json);
+            StudyResults results = sequence.run(study);
+            PublishingSequence.Draft draft = out.isPresent()
+                    ? sequence.draft(results, PublishingSequence.studyFolder(out.get(), study))
+                    : sequence.draft(results, RevisionContext.none());
+            byte[] json = draft.json();
+            byte[] html = sequence.html(draft);
             Snapshot.Issued previous = issued;
             // Compared with the last successful run, so a fix after a broken save lists what the edits moved.
             List<RevisionDiff.Change> changed = previous == null ? List.of()

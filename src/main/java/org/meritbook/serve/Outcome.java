@@ -1,7 +1,7 @@
 package org.meritbook.serve;
 
 import org.meritbook.analysis.SectionResult;
-import org.meritbook.criteria.Verdict;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.pipeline.StudyResults;
 
 /**

@@ -17,7 +17,7 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.dossier.DisplayFormatter;
 import org.meritbook.dossier.PdfAssertions;
-import org.meritbook.revision.Sha256;
+import org.meritbook.pipeline.Sha256;
 import org.meritbook.stats.Interval;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;

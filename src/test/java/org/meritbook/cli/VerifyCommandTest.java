@@ -49,7 +49,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meritbook.cli.Cli.Outcome;
-import org.meritbook.revision.Sha256;
+import org.meritbook.pipeline.Sha256;
 
 /**
  * {@code meritbook verify} against a hostile sender: a dossier re-run from its own attachments, and

@@ -19,6 +19,7 @@ import org.meritbook.study.AnalysisKind;
 import org.meritbook.study.StudyParser;
 import org.meritbook.trail.Step;
 import org.meritbook.trail.StepInput;
+import org.meritbook.analysis.Verdict;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -9,7 +9,7 @@ import java.util.Calendar;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
-import org.meritbook.revision.InputFile;
+import org.meritbook.pipeline.InputFile;
 import org.meritbook.study.FrontMatter;
 
 class DocumentDateTest {

@@ -21,7 +21,7 @@ import java.util.function.Function;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.cli.Main;
-import org.meritbook.criteria.Verdict;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.error.InputException;
 import org.meritbook.error.Problem;

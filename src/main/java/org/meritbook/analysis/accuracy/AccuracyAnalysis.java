@@ -10,6 +10,7 @@ import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.study.AnalysisCell;
+import org.meritbook.study.AnalysisKind;
 
 /**
  * Accuracy (DESIGN §4): % recovery R = measured / known × 100 and % error R − 100 per row; with
@@ -24,6 +25,8 @@ public final class AccuracyAnalysis implements Analysis {
     static final double LEVEL = 0.95;
     /** The recovery of an unbiased method. */
     static final double TARGET = 100.0;
+    /** The mean recovery's name: the figure draws the profile's limits on it. */
+    static final String RECOVERY = "recovery_percent";
 
     @Override
     public SectionResult run(AnalysisCell cell, AnalysisContext context) {
@@ -46,7 +49,8 @@ public final class AccuracyAnalysis implements Analysis {
             LevelSummary.record(section, ":" + level, "level " + level, recoveries.used(data.usedAt(level)));
         }
         LevelSummary.record(section, "", "all levels", recoveries.used(data.used()));
-        AccuracyFigures.addTo(section, cell.id(), data, recoveries, AccuracyFigures.band(context.study()));
+        AccuracyFigures.addTo(section, cell.id(), data, recoveries,
+                context.bands().on(AnalysisKind.ACCURACY, null, RECOVERY));
         return section.build(AccuracyTable.of(data, recoveries, readBack, section::hasQuantity));
     }
 

@@ -2,54 +2,19 @@ package org.meritbook.analysis.accuracy;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.meritbook.analysis.AcceptanceBands.Band;
 import org.meritbook.analysis.SectionBuilder;
-import org.meritbook.criteria.AcceptanceProfile;
-import org.meritbook.criteria.AcceptanceProfiles;
-import org.meritbook.criteria.QuantityRule;
-import org.meritbook.criteria.Rule;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.figures.FigureSpec.Series;
 import org.meritbook.figures.FigureSpec.Style;
-import org.meritbook.study.AnalysisKind;
-import org.meritbook.study.Study;
 
 /**
  * The recovery figure: each result's recovery against its known value, the level means, 100 %, and
- * the acceptance range when the study's profile sets one on {@code recovery_percent}.
+ * the acceptance range when the profile judging the section sets one on {@code recovery_percent}
+ * (through {@link org.meritbook.analysis.AcceptanceBands}).
  */
 final class AccuracyFigures {
-    /**
-     * The limits a profile sets on the mean recovery (either may be absent).
-     *
-     * @param low  lowest accepted recovery, or NaN
-     * @param high highest accepted recovery, or NaN
-     */
-    record Band(double low, double high) {
-        static final Band NONE = new Band(Double.NaN, Double.NaN);
-    }
-
     private AccuracyFigures() {
-    }
-
-    /** The profile's limits on the whole {@code recovery_percent} family; none for per-level limits. */
-    static Band band(Study study) {
-        AcceptanceProfile profile = AcceptanceProfiles.of(study);
-        if (profile == null) {
-            return Band.NONE;
-        }
-        double low = Double.NaN;
-        double high = Double.NaN;
-        for (Rule rule : profile.rules()) {
-            if (rule instanceof QuantityRule q && q.kind() == AnalysisKind.ACCURACY
-                    && q.quantity().equals("recovery_percent")) {
-                if (q.atLeast()) {
-                    low = Double.isNaN(low) ? q.limit() : Math.max(low, q.limit());
-                } else {
-                    high = Double.isNaN(high) ? q.limit() : Math.min(high, q.limit());
-                }
-            }
-        }
-        return new Band(low, high);
     }
 
     static void addTo(SectionBuilder section, String id, AccuracyData data, RowRecoveries recoveries, Band band) {
@@ -77,7 +42,7 @@ final class AccuracyFigures {
         double[] span = span(data, recoveries);
         series.add(new Series("100 %", Style.REFERENCE, span, new double[] {AccuracyAnalysis.TARGET,
             AccuracyAnalysis.TARGET}));
-        String accepted = "Acceptance range (profile)";
+        String accepted = "Acceptance range (profile " + band.profile() + ")";
         if (!Double.isNaN(band.low())) {
             series.add(new Series(accepted, Style.DOTTED, span, new double[] {band.low(), band.low()}));
         }

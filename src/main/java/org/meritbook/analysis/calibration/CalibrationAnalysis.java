@@ -20,6 +20,7 @@ import org.meritbook.stats.regression.QuadraticFit;
 import org.meritbook.stats.regression.RegressionAnova;
 import org.meritbook.stats.regression.Weighting;
 import org.meritbook.study.AnalysisCell;
+import org.meritbook.study.AnalysisKind;
 import org.meritbook.trail.StepInput;
 
 /**
@@ -77,7 +78,7 @@ public final class CalibrationAnalysis implements Analysis {
         }
         BackCalculation.record(section, data, curve, inversion);
         flagResiduals(section, data, curve);
-        CalibrationFigures.addTo(section, cell.id(), data, curve);
+        CalibrationFigures.addTo(section, cell.id(), data, curve, context.bands().deviation(AnalysisKind.CALIBRATION));
         return section.build(CalibrationTable.of(data, section::hasQuantity));
     }
 

@@ -1,8 +1,12 @@
 package org.meritbook.analysis.calibration;
 
+import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
+import org.meritbook.analysis.AcceptanceBands.DeviationBand;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.figures.FigureSpec.Series;
@@ -10,28 +14,30 @@ import org.meritbook.figures.FigureSpec.Style;
 
 /**
  * The calibration figures as data: fit with 95 % confidence and prediction bands, standardized
- * residuals, and back-calculated % deviation with the tolerance band. Curves are evaluated here so
+ * residuals, and back-calculated % deviation with the profile's limits. Curves are evaluated here so
  * that the figure renderer never fits anything.
  */
 final class CalibrationFigures {
     /** Points along the fitted curve and bands. */
     private static final int GRID = 60;
     /**
-     * Deviation band drawn until acceptance profiles set it: ±15 % is the usual limit for
-     * calibration standards (ICH M10 bioanalytical method validation, §3.2.5, from memory);
-     * a default to confirm locally.
+     * The guide drawn when no rule of the study's profile limits the deviation: ±15 % is the usual
+     * limit for calibration standards (ICH M10 bioanalytical method validation, §3.2.5, from memory),
+     * labelled as common practice, not as this study's criterion.
      */
     static final double DEVIATION_BAND_PERCENT = 15.0;
 
     private CalibrationFigures() {
     }
 
-    static void addTo(SectionBuilder section, String id, CalibrationData data, CalibrationCurve fit) {
+    /** @param band the deviation limits of the profile judging the section, if it sets any */
+    static void addTo(SectionBuilder section, String id, CalibrationData data, CalibrationCurve fit,
+                      Optional<DeviationBand> band) {
         String xTitle = titled(data.xColumn().name(), data.xUnit());
         String yTitle = titled(data.yColumn().name(), data.yUnit());
         section.figure(fitFigure(id, data, fit, xTitle, yTitle));
         section.figure(residualFigure(id, data, fit, xTitle));
-        section.figure(deviationFigure(id, data, fit, xTitle));
+        section.figure(deviationFigure(id, data, fit, xTitle, band));
     }
 
     private static FigureSpec fitFigure(String id, CalibrationData data, CalibrationCurve fit, String xTitle, String yTitle) {
@@ -78,7 +84,8 @@ final class CalibrationFigures {
                 "Standardized residual e·√w / s(y/x)", series);
     }
 
-    private static FigureSpec deviationFigure(String id, CalibrationData data, CalibrationCurve fit, String xTitle) {
+    private static FigureSpec deviationFigure(String id, CalibrationData data, CalibrationCurve fit, String xTitle,
+                                              Optional<DeviationBand> band) {
         List<Double> xs = new ArrayList<>();
         List<Double> ds = new ArrayList<>();
         for (CalibrationPoint p : data.used()) {
@@ -90,17 +97,50 @@ final class CalibrationFigures {
         }
         double[] x = xs.stream().mapToDouble(Double::doubleValue).toArray();
         double[] span = {min(data.usedX()), max(data.usedX())};
-        double band = DEVIATION_BAND_PERCENT;
         List<Series> series = new ArrayList<>();
         series.add(new Series("Deviation of back-calculated standards", Style.POINTS, x,
                 ds.stream().mapToDouble(Double::doubleValue).toArray()));
         addExcluded(series, data, true, fit);
         series.add(new Series("Zero", Style.REFERENCE, span, new double[] {0, 0}));
-        String tolerance = "±" + (int) band + " % (default, confirm locally)";
-        series.add(new Series(tolerance, Style.DOTTED, span, new double[] {band, band}));
-        series.add(new Series(tolerance, Style.DOTTED, span, new double[] {-band, -band}));
+        if (band.isPresent()) {
+            addLimits(series, band.get(), span, x);
+        } else {
+            String guide = "±" + percent(DEVIATION_BAND_PERCENT)
+                    + " % guide (common practice; the study's profile sets no deviation limit)";
+            double g = DEVIATION_BAND_PERCENT;
+            series.add(new Series(guide, Style.DOTTED, span, new double[] {g, g}));
+            series.add(new Series(guide, Style.DOTTED, span, new double[] {-g, -g}));
+        }
         return new FigureSpec(id + ".deviation", "Back-calculated concentration: % deviation from nominal", xTitle,
                 "Deviation (%)", series);
+    }
+
+    /**
+     * The profile's limits, ±tolerance over the span; when the limit at the lowest level differs it is
+     * drawn from the lowest level to halfway towards the next, where the band steps to the general limit.
+     *
+     * @param judged the nominal concentrations whose deviation is drawn (the lowest is the rule's lowest level)
+     */
+    private static void addLimits(List<Series> series, DeviationBand band, double[] span, double[] judged) {
+        double[] levels = Arrays.stream(judged.length == 0 ? span : judged).distinct().sorted().toArray();
+        double t = band.tolerance();
+        double l = band.lowestTolerance();
+        String name = "Acceptance limit ±" + percent(t) + " %"
+                + (l == t ? "" : ", ±" + percent(l) + " % at the lowest level") + " (profile " + band.profile() + ")";
+        double[] xs;
+        double[] up;
+        if (l == t || levels.length < 2) {
+            double only = levels.length < 2 ? l : t;
+            xs = span;
+            up = new double[] {only, only};
+        } else {
+            double step = (levels[0] + levels[1]) / 2;
+            xs = new double[] {Math.min(span[0], levels[0]), step, step, span[1]};
+            up = new double[] {l, l, t, t};
+        }
+        double[] down = Arrays.stream(up).map(v -> -v).toArray();
+        series.add(new Series(name, Style.DOTTED, xs, up));
+        series.add(new Series(name, Style.DOTTED, xs, down));
     }
 
     private static void addExcluded(List<Series> series, CalibrationData data, boolean asDeviation, CalibrationCurve fit) {
@@ -136,6 +176,11 @@ final class CalibrationFigures {
             g[i] = lo + (hi - lo) * i / (GRID - 1);
         }
         return g;
+    }
+
+    /** A limit as the profile states it: 10, 12.5 (no trailing zeros, no exponent). */
+    private static String percent(double v) {
+        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
     private static String titled(String name, String unit) {

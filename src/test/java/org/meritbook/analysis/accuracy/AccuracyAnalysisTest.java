@@ -17,7 +17,8 @@ import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
 import org.meritbook.criteria.AcceptanceProfiles;
-import org.meritbook.criteria.Verdict;
+import org.meritbook.criteria.ProfileBands;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.error.InputException;
@@ -301,7 +302,8 @@ class AccuracyAnalysisTest {
         String text = notebook("").replace("title: Test study\n", "title: Test study\ncriteria: recovery-ppm\n");
         Study study = StudyParser.parse(text, Path.of("study.md"));
         DataBlock block = known();
-        SectionResult s = new AccuracyAnalysis().run(study.cells().get(0), new AnalysisContext(study, ref -> block));
+        SectionResult s = new AccuracyAnalysis().run(study.cells().get(0), new AnalysisContext(study, ref -> block,
+                ProfileBands.of(AcceptanceProfiles.of(study))));
         SectionResult judged = AcceptanceProfiles.of(study).judge(s);
         // Two rules (≥ 80 %, ≤ 110 %) on levels 10, 50, 100 and overall: eight verdicts, all passing.
         assertEquals(8, judged.verdicts().size(), judged.verdicts().toString());

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.criteria.BuiltInProfiles;
-import org.meritbook.criteria.Verdict;
+import org.meritbook.analysis.Verdict;
 import org.meritbook.pipeline.StudyRunner;
 
 /**

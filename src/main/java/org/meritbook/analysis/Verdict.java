@@ -1,4 +1,4 @@
-package org.meritbook.criteria;
+package org.meritbook.analysis;
 
 import java.util.Objects;
 

@@ -1,4 +1,4 @@
-package org.meritbook.revision;
+package org.meritbook.pipeline;
 
 import java.util.List;
 

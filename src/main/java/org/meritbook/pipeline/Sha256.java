@@ -1,4 +1,4 @@
-package org.meritbook.revision;
+package org.meritbook.pipeline;
 
 import java.io.IOException;
 import java.io.InputStream;
