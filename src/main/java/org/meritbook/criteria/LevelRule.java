@@ -39,11 +39,14 @@ public record LevelRule(AnalysisKind kind, String characteristic, String quantit
 
     @Override
     public String text() {
-        String bound = magnitude ? " within ±" : " ≤ ";
-        String text = symbol + bound + Limits.text(limit) + " at each level";
+        String unit = quantity.endsWith("_percent") ? " %" : "";
+        String text = symbol + (magnitude ? " within " : " ") + bound(limit) + unit + " at each level";
         return lowestLimit == limit ? text
-                : text + " (" + bound.strip() + " " + Limits.text(lowestLimit)
-                        + " at the LLOQ, the level with the lowest nominal value)";
+                : text + " (" + bound(lowestLimit) + unit + " at the LLOQ, the level with the lowest nominal value)";
+    }
+
+    private String bound(double l) {
+        return (magnitude ? "±" : "≤ ") + Limits.text(l);
     }
 
     @Override
@@ -81,11 +84,24 @@ public record LevelRule(AnalysisKind kind, String characteristic, String quantit
         double v = q.value();
         double judged = magnitude ? Math.abs(v) : v;
         boolean pass = comparison.passes(judged, applied, false);
-        // the size is compared with the limit; the sign is printed as computed
-        String value = (magnitude && v < 0 ? "−" : "") + comparison.text(judged, applied);
         String unit = q.unit() == null || q.unit().isEmpty() ? "" : " " + q.unit();
         return new Verdict(what, q.name(), text(), pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL,
-                symbol + " = " + value + unit + ", limit " + (magnitude ? "±" : "≤ ") + Limits.text(applied) + unit
+                symbol + " = " + printed(v, judged, applied, comparison, unit) + ", limit " + bound(applied) + unit
                         + note);
+    }
+
+    /**
+     * The value as compared, with its unit. The size is compared with the limit and the sign printed
+     * as computed; rounded to the limit, rounding half away from zero treats both signs alike, so the
+     * signed value is rounded and printed with the computed one beside it.
+     */
+    private String printed(double v, double judged, double applied, Comparison comparison, String unit) {
+        if (comparison == Comparison.ROUNDED_TO_LIMIT) {
+            String text = comparison.text(v, applied);
+            int beside = text.indexOf(" (rounded from ");
+            return beside < 0 ? text + unit : text.substring(0, beside) + unit + text.substring(beside, text.length() - 1)
+                    + unit + ")";
+        }
+        return (magnitude && v < 0 ? "−" : "") + comparison.text(judged, applied) + unit;
     }
 }
