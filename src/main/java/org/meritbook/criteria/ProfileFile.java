@@ -33,6 +33,14 @@ import org.yaml.snakeyaml.error.YAMLException;
  *     within: 15
  *     lowest-level-within: 20
  *     fraction: 0.75
+ *     minimum-levels: 6
+ *   - kind: accuracy               # per level, the LLOQ set apart (LevelRule)
+ *     quantity: error_percent
+ *     within: 15                   # |value|; or at-most: with lowest-level-at-most:
+ *     lowest-level-within: 20
+ *   - kind: detection-limit        # the limit is another quantity of the section (BoundRule)
+ *     quantity: loq
+ *     not-above: reporting_limit   # or not-below:
  * </pre>
  */
 final class ProfileFile {
