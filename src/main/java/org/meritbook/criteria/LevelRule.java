@@ -40,9 +40,9 @@ public record LevelRule(AnalysisKind kind, String characteristic, String quantit
     @Override
     public String text() {
         String unit = quantity.endsWith("_percent") ? " %" : "";
-        String text = symbol + (magnitude ? " within " : " ") + bound(limit) + unit + " at each level";
-        return lowestLimit == limit ? text
-                : text + " (" + bound(lowestLimit) + unit + " at the LLOQ, the level with the lowest nominal value)";
+        String text = symbol + (magnitude ? " within " : " ") + bound(limit) + unit;
+        return lowestLimit == limit ? text + " at each level"
+                : text + " (" + bound(lowestLimit) + unit + " at the LLOQ, the lowest level)";
     }
 
     private String bound(double l) {

@@ -96,8 +96,7 @@ class M10ProfileTest {
         assertEquals("QC samples (L-1)", v.get(2).characteristic());
         assertEquals("QC deviation = −20.1 %, limit ±20 %", v.get(1).reason());
         assertEquals("QC deviation = 15.1 %, limit ±15 %", v.get(4).reason());
-        assertEquals("QC deviation within ±15 % at each level (±20 % at the LLOQ, the level with the lowest "
-                + "nominal value)", v.get(0).rule());
+        assertEquals("QC deviation within ±15 % (±20 % at the LLOQ, the lowest level)", v.get(0).rule());
     }
 
     @Test
