@@ -53,6 +53,74 @@ public final class BuiltInProfiles {
                                 11, "RSD_I (%)", null, "AOAC Official Methods of Analysis, Appendix F (2016), expected "
                                         + "RSD_R at 10 ppm (from memory), an upper bound for RSD_I; a default to confirm "
                                         + "locally")), BUILT_IN_COMPARISON));
+        all.put("drug-substance-assay", drugSubstanceAssay());
+        all.put("bioanalysis-m10", bioanalysisM10());
+        all.put("trace-environmental", traceEnvironmental());
         return all;
+    }
+
+    /** An assay of a drug substance, in the manner of ICH Q2(R2), whose text sets no numeric limit itself. */
+    private static AcceptanceProfile drugSubstanceAssay() {
+        String q2 = "ICH Q2(R2) asks for accuracy and repeatability data for an assay but sets no numeric limit; ";
+        String recovery = q2 + "a mean recovery of 98.0-102.0 % is common practice for drug-substance assays, no source; "
+                + "a default to confirm locally";
+        return new AcceptanceProfile("drug-substance-assay",
+                "Assay of a drug substance (ICH Q2(R2) characteristics; limits of common practice).", "built in", List.of(
+                        new QuantityRule(AnalysisKind.ACCURACY, "Accuracy", "recovery_percent", true, 98.0,
+                                "mean recovery (%)", null, recovery),
+                        new QuantityRule(AnalysisKind.ACCURACY, "Accuracy", "recovery_percent", false, 102.0,
+                                "mean recovery (%)", null, recovery),
+                        new QuantityRule(AnalysisKind.PRECISION, "Repeatability", "cv_percent", false, 2.0, "RSD (%)",
+                                null, q2 + "an RSD of at most 2 % over the repeated determinations is common practice "
+                                        + "for drug-substance assays, no source; a default to confirm locally"),
+                        new QuantityRule(AnalysisKind.CALIBRATION, "Linearity", "r_squared", true, 0.998, "r²", null,
+                                q2 + "r² ≥ 0.998 (often written r ≥ 0.999) is common practice for assays, no source; "
+                                        + "a default to confirm locally")),
+                BUILT_IN_COMPARISON);
+    }
+
+    /**
+     * Bioanalysis after ICH M10: calibration standards, QC samples, and the accuracy and precision of
+     * each QC level, ±15 % (20 % at the LLOQ, the level with the lowest nominal value of the section).
+     */
+    private static AcceptanceProfile bioanalysisM10() {
+        String m10 = "ICH M10 (2022), sections on calibration curve and accuracy and precision (from memory); "
+                + "a default to confirm locally";
+        return new AcceptanceProfile("bioanalysis-m10",
+                "Bioanalytical method validation after ICH M10: standards, QCs, accuracy and precision per level.",
+                "built in", List.of(
+                        new DeviationRule("Calibration standards", 15, 20, 0.75, 6, m10),
+                        new LevelRule(AnalysisKind.UNKNOWNS, "QC samples", "qc_deviation_percent", true, 15, 20,
+                                "QC deviation", m10),
+                        new LevelRule(AnalysisKind.ACCURACY, "Accuracy", "error_percent", true, 15, 20, "mean error",
+                                m10),
+                        new LevelRule(AnalysisKind.PRECISION, "Precision, within run", "repeatability_cv_percent", false,
+                                15, 20, "within-run CV", m10),
+                        new LevelRule(AnalysisKind.PRECISION, "Precision, between runs", "intermediate_cv_percent", false,
+                                15, 20, "between-run CV", m10),
+                        new LevelRule(AnalysisKind.PRECISION, "Precision, all results", "cv_percent", false, 15, 20,
+                                "CV", m10)),
+                BUILT_IN_COMPARISON);
+    }
+
+    /** Trace analysis in environmental samples: the recovery and RSD windows such methods publish. */
+    private static AcceptanceProfile traceEnvironmental() {
+        String epa = "US EPA drinking-water methods, initial demonstration of capability (e.g. Method 537.1: mean "
+                + "recovery within ±30 % of the true value, RSD ≤ 20 %; from memory), common practice for trace "
+                + "environmental methods; a default to confirm locally";
+        return new AcceptanceProfile("trace-environmental",
+                "Trace analysis of environmental samples: recovery 70-130 %, RSD ≤ 20 %, LOQ at or below the reporting "
+                        + "limit.", "built in", List.of(
+                        new QuantityRule(AnalysisKind.ACCURACY, "Recovery", "recovery_percent", true, 70,
+                                "mean recovery (%)", null, epa),
+                        new QuantityRule(AnalysisKind.ACCURACY, "Recovery", "recovery_percent", false, 130,
+                                "mean recovery (%)", null, epa),
+                        new QuantityRule(AnalysisKind.PRECISION, "Precision", "cv_percent", false, 20, "RSD (%)", null,
+                                epa),
+                        new BoundRule(AnalysisKind.DETECTION_LIMIT, "Quantitation limit", "loq", false,
+                                "reporting_limit", "LOQ", "reporting limit", "common practice: a result is reported "
+                                        + "only down to a level the method quantifies, no source; a default to confirm "
+                                        + "locally")),
+                BUILT_IN_COMPARISON);
     }
 }

@@ -33,12 +33,23 @@ import org.yaml.snakeyaml.error.YAMLException;
  *     within: 15
  *     lowest-level-within: 20
  *     fraction: 0.75
+ *     minimum-levels: 6
+ *   - kind: accuracy               # per level, the LLOQ set apart (LevelRule)
+ *     quantity: error_percent
+ *     within: 15                   # |value|; or at-most: with lowest-level-at-most:
+ *     lowest-level-within: 20
+ *   - kind: detection-limit        # the limit is another quantity of the section (BoundRule)
+ *     quantity: loq
+ *     not-above: reporting_limit   # or not-below:
  * </pre>
  */
 final class ProfileFile {
     private static final Set<String> TOP = Set.of("name", "description", "compare", "rules");
     private static final Set<String> RULE = Set.of("kind", "quantity", "at-least", "at-most", "within",
-            "lowest-level-within", "fraction", "characteristic", "source", "model");
+            "lowest-level-within", "lowest-level-at-most", "fraction", "minimum-levels", "not-above", "not-below",
+            "characteristic", "source", "model");
+    /** The keys that give a rule its limit; a rule has exactly one. */
+    private static final List<String> LIMITS = List.of("at-least", "at-most", "within", "not-above", "not-below");
 
     private ProfileFile() {
     }
@@ -96,21 +107,87 @@ final class ProfileFile {
             double within = number(r, "within", where, which);
             double lowest = r.containsKey("lowest-level-within") ? number(r, "lowest-level-within", where, which) : within;
             double fraction = r.containsKey("fraction") ? number(r, "fraction", where, which) : 1.0;
-            return new DeviationRule(characteristic, within, lowest, fraction, source);
+            return new DeviationRule(characteristic, within, lowest, fraction, levels(r, where, which), source);
         }
-        boolean atLeast = r.containsKey("at-least");
-        if (atLeast == r.containsKey("at-most")) {
-            throw bad(where, which + ": exactly one of 'at-least:' or 'at-most:'",
-                    atLeast ? "both" : "neither");
+        for (String only : List.of("fraction", "minimum-levels")) {
+            if (r.containsKey(only)) {
+                throw bad(where, which + ": '" + only + ":' only in a rule on deviation_percent", "'" + only
+                        + ":' on " + q);
+            }
         }
-        double limit = number(r, atLeast ? "at-least" : "at-most", where, which);
+        List<String> given = LIMITS.stream().filter(r::containsKey).toList();
+        if (given.size() != 1) {
+            throw bad(where, which + ": exactly one of 'at-least:', 'at-most:', 'within:', 'not-above:' or "
+                    + "'not-below:'", given.isEmpty() ? "none" : String.join(", ", given));
+        }
+        String limitKey = given.get(0);
+        pairedOnly(r, "lowest-level-within", "within", limitKey, where, which);
+        pairedOnly(r, "lowest-level-at-most", "at-most", limitKey, where, which);
         String model = r.get("model") == null ? null : String.valueOf(r.get("model"));
+        boolean levels = limitKey.equals("within") || r.containsKey("lowest-level-at-most");
+        if (model != null && (levels || limitKey.startsWith("not-"))) {
+            throw bad(where, which + ": 'model:' only in a rule with 'at-least:' or 'at-most:' alone", "'model: "
+                    + model + "'");
+        }
+        if (limitKey.startsWith("not-")) {
+            return new BoundRule(kind, characteristic, q, limitKey.equals("not-below"),
+                    bound(r, limitKey, kind, where, which), q, String.valueOf(r.get(limitKey)), source);
+        }
+        if (levels) {
+            if (q.contains(":")) {
+                throw bad(where, which + ": a family name without ':<level>' for a rule per level", "'" + q + "'");
+            }
+            boolean within = limitKey.equals("within");
+            double limit = number(r, limitKey, where, which);
+            String lowestKey = within ? "lowest-level-within" : "lowest-level-at-most";
+            double lowest = r.containsKey(lowestKey) ? number(r, lowestKey, where, which) : limit;
+            return new LevelRule(kind, characteristic, q, within, limit, lowest, q, source);
+        }
+        boolean atLeast = limitKey.equals("at-least");
+        double limit = number(r, limitKey, where, which);
         List<String> models = AnalysisKind.choicesOf("model");
         if (model != null && (kind != AnalysisKind.CALIBRATION || !models.contains(model))) {
             throw bad(where, which + ": 'model:' one of " + String.join(", ", models) + " (calibration rules only)",
                     "'" + model + "'" + Suggestion.hint(model, models));
         }
         return new QuantityRule(kind, characteristic, q, atLeast, limit, q, model, source);
+    }
+
+    /** {@code minimum-levels:}, a whole number, 0 when absent. */
+    private static int levels(Map<?, ?> r, String where, String which) {
+        if (!r.containsKey("minimum-levels")) {
+            return 0;
+        }
+        double n = number(r, "minimum-levels", where, which);
+        if (n != Math.rint(n) || n > Integer.MAX_VALUE) {
+            throw bad(where, which + ": a whole number for 'minimum-levels'", "'" + r.get("minimum-levels") + "'");
+        }
+        return (int) n;
+    }
+
+    /** A key that qualifies one limit key ({@code lowest-level-within:} qualifies {@code within:}). */
+    private static void pairedOnly(Map<?, ?> r, String key, String with, String limitKey, String where, String which) {
+        if (r.containsKey(key) && !limitKey.equals(with)) {
+            throw bad(where, which + ": '" + key + ":' only beside '" + with + ":'", "'" + key + ":' beside '"
+                    + limitKey + ":'");
+        }
+    }
+
+    /**
+     * The name of the quantity a {@code not-above:} or {@code not-below:} rule compares with: one the
+     * kind reports, refused with "did you mean" otherwise, as a misspelt name would leave the rule
+     * not evaluable for ever.
+     */
+    private static String bound(Map<?, ?> r, String key, AnalysisKind kind, String where, String which) {
+        Object v = r.get(key);
+        String name = v instanceof String text ? text.strip() : null;
+        if (name == null || !kind.reportedNames().contains(name)) {
+            throw bad(where, which + ": for '" + key + "' the name of another quantity a " + kind.keyword()
+                    + " cell reports (" + String.join(", ", kind.reportedNames()) + "); a number goes after '"
+                    + (key.equals("not-above") ? "at-most" : "at-least") + ":'",
+                    "'" + v + "'" + (name == null ? "" : Suggestion.hint(name, kind.reportedNames())));
+        }
+        return name;
     }
 
     private static Comparison comparison(Object written, String where) {

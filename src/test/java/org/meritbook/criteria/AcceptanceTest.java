@@ -184,7 +184,8 @@ class AcceptanceTest {
         var study = StudyParser.parse("---\ntitle: t\ncriteria: trace-metals\n---\n", dir.resolve("s.md"));
         InputException e = assertThrows(InputException.class, () -> AcceptanceProfiles.of(study));
         assertTrue(e.getMessage().startsWith("s.md line 3: expected a built-in acceptance profile "
-                + "(linearity-basic, bioanalytical-calibration, recovery-ppm, food-precision-10-mg-kg) or a .yaml profile file"
+                + "(linearity-basic, bioanalytical-calibration, recovery-ppm, food-precision-10-mg-kg, drug-substance-assay, "
+                + "bioanalysis-m10, trace-environmental) or a .yaml profile file"
                 + " but found 'trace-metals'."),
                 e.getMessage());
     }

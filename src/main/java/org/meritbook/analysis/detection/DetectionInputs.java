@@ -102,6 +102,11 @@ final class DetectionInputs {
         return Optional.ofNullable(line);
     }
 
+    /** The referenced calibration's section, if the cell names one. */
+    Optional<SectionResult> calibrationSectionIfAny() {
+        return Optional.ofNullable(calibrationSection);
+    }
+
     Optional<MeasuredSet> blanks() {
         return blanks;
     }

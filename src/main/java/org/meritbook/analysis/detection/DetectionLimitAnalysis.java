@@ -39,6 +39,9 @@ public final class DetectionLimitAnalysis implements Analysis {
             }
         }
         headline(section, in.options().methods().get(0), rows);
+        String first = in.options().methods().get(0);
+        LimitBounds.record(in, rows.stream().filter(r -> r.method().equals(first)).findFirst().map(LimitRow::unit)
+                .orElse(null));
         DetectionFigures.addTo(in);
         return section.build(table(rows));
     }
