@@ -201,6 +201,53 @@ class InternalStandardRatioTest {
         assertEquals("study.md line 19", e.problems().get(0).where());
     }
 
+    /** A ratio calibration, then one cell of another kind that uses it (its body after the fence). */
+    private InputException refusedAfterRatioCalibration(String kind, String body, org.meritbook.analysis.Analysis analysis)
+            throws IOException {
+        workbook(boxed(IS_AREA), SAMPLES);
+        Path notebook = dir.resolve("study.md");
+        Files.writeString(notebook, """
+                ---
+                title: Internal standard
+                sources:
+                  lab: is.xlsx
+                ---
+
+                ```calibration
+                id: cal
+                data: lab!Calibration!A1:D11
+                x: Conc
+                y: Area
+                internal-standard: IS area
+                ```
+
+                ```%s
+                calibration: cal
+                %s```
+                """.formatted(kind, body));
+        Study study = StudyParser.parse(notebook);
+        try (WorkbookReader reader = new WorkbookReader()) {
+            AnalysisContext context = new AnalysisContext(study,
+                    ref -> reader.read(study.sources().get(ref.source()).path(), ref));
+            SectionResult calibration = new CalibrationAnalysis().run(study.cells().get(0), context);
+            return assertThrows(InputException.class, () -> analysis.run(study.cells().get(1), context.with(calibration)));
+        }
+    }
+
+    @Test
+    void plainSignalsAreNotReadBackThroughARatioCalibrationByOtherKinds() throws IOException {
+        InputException accuracy = refusedAfterRatioCalibration("accuracy",
+                "data: lab!Samples!A1:C4\nmeasured: Area\nknown: IS area\n",
+                new org.meritbook.analysis.accuracy.AccuracyAnalysis());
+        assertEquals(ErrorKey.BAD_OPTION_VALUE, accuracy.key());
+        assertEquals("study.md line 16", accuracy.problems().get(0).where());
+        InputException limits = refusedAfterRatioCalibration("detection-limit",
+                "methods: [blank]\nblanks:\n  data: lab!Samples!A1:C4\n  column: Area\n",
+                new org.meritbook.analysis.detection.DetectionLimitAnalysis());
+        assertEquals(ErrorKey.BAD_OPTION_VALUE, limits.key());
+        assertEquals("study.md line 18", limits.problems().get(0).where());
+    }
+
     @Test
     void aBadSampleInternalStandardIsLocated() {
         Object[][] samples = {{"S1", 7350.0, 9920.0}, {"S1", 7610.0, ""}, {"S2", 18200.0, -5.0}};
