@@ -49,6 +49,39 @@ class LevelVariancesTest {
         assertEquals(X.length, sum, 1e-12, "scaled to average 1 like every weighting");
     }
 
+    // The properties LineFitPropertiesTest checks for the other weightings, on replicated data: the normal
+    // equations Σw·e = 0 and Σw·x·e = 0, Σz² = df, and invariance to a constant factor on the raw weights
+    // (Draper & Smith, Applied Regression Analysis, ch. 1 and 9).
+    @Test
+    void theWeightedFitKeepsTheLeastSquaresProperties() {
+        for (LineModel model : LineModel.values()) {
+            LineFit fit = LeastSquares.fitLine(X, Y, Weighting.INVERSE_VARIANCE, model);
+            double[] w = fit.weights();
+            double[] e = fit.residuals();
+            double sumWe = 0;
+            double sumWxe = 0;
+            double sumZ2 = 0;
+            for (int i = 0; i < X.length; i++) {
+                sumWe += w[i] * e[i];
+                sumWxe += w[i] * X[i] * e[i];
+                sumZ2 += fit.standardizedResiduals()[i] * fit.standardizedResiduals()[i];
+            }
+            if (model == LineModel.WITH_INTERCEPT) {
+                assertEquals(0, sumWe, 1e-12);
+            }
+            assertEquals(0, sumWxe, 1e-11);
+            assertEquals(fit.degreesOfFreedom(), sumZ2, 1e-10);
+            double[] raw = Weighting.INVERSE_VARIANCE.rawWeights(X, Y);
+            for (int i = 0; i < raw.length; i++) {
+                raw[i] *= 1e6;
+            }
+            LineFit scaled = LeastSquares.fit(X, Y, raw, Weighting.INVERSE_VARIANCE, model);
+            assertEquals(fit.slope(), scaled.slope(), 1e-12 * Math.abs(fit.slope()));
+            assertEquals(fit.residualSd(), scaled.residualSd(), 1e-12 * fit.residualSd());
+            assertEquals(fit.slopeSe(), scaled.slopeSe(), 1e-12 * fit.slopeSe());
+        }
+    }
+
     @Test
     void aLevelWithoutReplicatesOrWithoutScatterGivesNoWeight() {
         double[] x = {1, 1, 2, 5, 5};
