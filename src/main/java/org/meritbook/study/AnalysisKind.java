@@ -12,7 +12,8 @@ import java.util.Optional;
 public enum AnalysisKind {
     CALIBRATION("calibration",
             List.of("data", "x", "y"),
-            List.of("weighting", "model", "exclude", "id", "role", "censored", "formulas", "hidden", "merged"),
+            List.of("weighting", "model", "internal-standard", "exclude", "id", "role", "censored", "formulas", "hidden",
+                    "merged"),
             List.of("n", "slope", "intercept", "slope_se", "intercept_se", "intercept_t", "intercept_p", "r",
                     "r_squared", "residual_sd", "quadratic_coef", "quadratic_coef_se", "lack_of_fit_f", "lack_of_fit_p",
                     "mandel_f", "mandel_p", "shapiro_w", "shapiro_p", "back_calculated", "deviation_percent",
@@ -44,8 +45,8 @@ public enum AnalysisKind {
             List.of("range_low", "range_high")),
     UNKNOWNS("unknowns",
             List.of("calibration", "data", "y", "sample"),
-            List.of("replicates", "mass", "volume", "dilution", "known", "result-unit", "limits", "exclude", "id", "role",
-                    "censored", "formulas", "hidden", "merged"),
+            List.of("replicates", "mass", "volume", "dilution", "known", "result-unit", "limits", "internal-standard",
+                    "exclude", "id", "role", "censored", "formulas", "hidden", "merged"),
             List.of("x0", "x0_se", "x0_ci_low", "x0_ci_high", "content", "content_se", "qc_deviation_percent"));
 
     private final String keyword;

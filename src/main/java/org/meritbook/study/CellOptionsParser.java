@@ -89,7 +89,8 @@ final class CellOptionsParser {
         if (name.equals(OptionRules.METHODS)) {
             return checkMethods(value);
         }
-        if (kind == AnalysisKind.CALIBRATION && name.equals("y") && !value.isScalar()) {
+        // Replicate response columns, and their internal standards side by side in the same order.
+        if (kind == AnalysisKind.CALIBRATION && (name.equals("y") || name.equals("internal-standard")) && !value.isScalar()) {
             return checkColumnList(name, value);
         }
         OptionRules.DataSet set = OptionRules.DATA_SETS.get(name);

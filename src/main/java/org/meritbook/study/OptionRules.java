@@ -17,8 +17,8 @@ final class OptionRules {
 
     private static Map<String, List<String>> choices() {
         Map<String, List<String>> all = new java.util.HashMap<>(Map.of(
-                // 1/x² and 1/y² are accepted as typed with a superscript.
-                "weighting", List.of("none", "1/x", "1/x^2", "1/y", "1/y^2", "auto", "1/x²", "1/y²"),
+                // 1/x², 1/y² and 1/s² are accepted as typed with a superscript; 1/s^2: the replicate SD of each level.
+                "weighting", List.of("none", "1/x", "1/x^2", "1/y", "1/y^2", "1/s^2", "auto", "1/x²", "1/y²", "1/s²"),
                 "model", List.of("linear", "quadratic", "linear-through-origin"),
                 "censored", List.of("reject", "drop"),
                 "sigma", List.of("blank", "residual", "intercept"),

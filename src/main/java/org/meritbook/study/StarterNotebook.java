@@ -112,7 +112,7 @@ public final class StarterNotebook {
                 + "data: " + b.reference() + "\n"
                 + "x: " + x.get().name() + "\n"
                 + "y: " + y.get().name() + "\n"
-                + "weighting: none     # none | 1/x | 1/x^2 | 1/y | 1/y^2 | auto\n"
+                + "weighting: none     # none | 1/x | 1/x^2 | 1/y | 1/y^2 | 1/s^2 | auto\n"
                 + "model: linear       # linear | linear-through-origin | quadratic\n"
                 + "# exclude:\n#   - cell: Sheet!C17\n#     reason: <why>\n"
                 + "```\n");

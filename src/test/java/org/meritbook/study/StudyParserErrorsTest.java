@@ -50,8 +50,8 @@ class StudyParserErrorsTest {
                 ```
                 """);
         assertProblem(ErrorKey.UNKNOWN_OPTION, "study.md line 11", p);
-        assertEquals("study.md line 11: expected an option of a calibration cell (data, x, y, weighting, model, exclude,"
-                + " id, role, censored, formulas, hidden, merged) but found 'wieghting'. Correct the option name"
+        assertEquals("study.md line 11: expected an option of a calibration cell (data, x, y, weighting, model,"
+                + " internal-standard, exclude, id, role, censored, formulas, hidden, merged) but found 'wieghting'. Correct the option name"
                 + " (did you mean 'weighting'?) or remove the line.", p.message());
     }
 
@@ -172,7 +172,7 @@ class StudyParserErrorsTest {
         assertEquals(List.of(ErrorKey.BAD_OPTION_VALUE), found.stream().map(Problem::key).distinct().toList());
         assertEquals(List.of("study.md line 11", "study.md line 12", "study.md line 13", "study.md line 17",
                 "study.md line 17", "study.md line 18"), found.stream().map(Problem::where).toList());
-        assertEquals("study.md line 11: expected weighting one of none, 1/x, 1/x^2, 1/y, 1/y^2, auto but found"
+        assertEquals("study.md line 11: expected weighting one of none, 1/x, 1/x^2, 1/y, 1/y^2, 1/s^2, auto but found"
                 + " '1/x3'. Choose one of the listed values (did you mean '1/x'?).", found.get(0).message());
         assertEquals("study.md line 12: expected model one of linear, quadratic, linear-through-origin but found"
                 + " 'cubic'. Choose one of the listed values.", found.get(1).message());

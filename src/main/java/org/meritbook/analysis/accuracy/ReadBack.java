@@ -29,6 +29,14 @@ record ReadBack(CalibrationLine line, SectionResult calibration) {
                     "a calibration with a non-zero slope to read signals back through",
                     "the slope of '" + line.cellId() + "' is 0", "Check the calibration cell and its data.");
         }
+        if (line.ratio()) {
+            // Plain signals read back through a line fitted to ratios would be on another scale.
+            throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(cell.lineOf("calibration")),
+                    "a calibration on plain responses to read the measured signals back through",
+                    "'" + line.cellId() + "' calibrates the ratio to its internal standard ('" + line.internalStandard()
+                            + "')", "Give the measured values as concentrations, or read the samples back in an "
+                            + "unknowns cell with internal-standard:.");
+        }
         return new ReadBack(line, context.earlierSection(cell, "calibration"));
     }
 

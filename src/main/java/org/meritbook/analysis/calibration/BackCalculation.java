@@ -42,7 +42,7 @@ final class BackCalculation {
                 continue;
             }
             List<StepInput> in = new ArrayList<>();
-            in.add(StepInput.number("y", p.y(), data.yUnit(), yAddress));
+            in.add(StepInput.number("y", p.y(), data.yUnit(), ResponseRatios.source(section, p)));
             in.addAll(inversion.coefficients());
             String backId = section.quantity(QuantityDraft.of("back_calculated:" + p.label(),
                     "Back-calculated concentration, " + yAddress + suffix, inversion.formula(), in, back,

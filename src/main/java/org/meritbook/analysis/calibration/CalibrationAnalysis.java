@@ -9,6 +9,7 @@ import java.util.Optional;
 import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.Attempt;
+import org.meritbook.analysis.InternalStandard;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.error.ErrorKey;
@@ -44,10 +45,20 @@ public final class CalibrationAnalysis implements Analysis {
         SectionBuilder section = new SectionBuilder(cell);
         Weighting weighting = chooseWeighting(options, data, section);
         section.setting("Model", options.model().description(), options.model().keyword());
-        section.setting("Weighting", weighting.notation() + (options.weighting().isAuto() ? " (chosen by auto)" : ""));
+        section.setting("Weighting", weighting.notation() + (options.weighting().isAuto() ? " (chosen by auto)"
+                : weighting == Weighting.INVERSE_VARIANCE ? " (inverse variance: s the SD of the replicate responses "
+                + "of each point's concentration level)" : ""));
         section.setting("Weight scaling", PointsStep.scaling(weighting));
         section.setting("Shapiro–Wilk test on", "the standardized residuals eᵢ·√wᵢ / s(y/x) of the points in the fit");
+        if (data.ratio()) {
+            section.setting("Response", "ratio to the internal standard, y = A / A_IS: '" + data.yColumn().header()
+                    + "' / '" + data.isColumns().get(0).header() + "' in each row" + (data.replicateColumns()
+                    ? " (internal-standard columns " + String.join(", ", data.isColumns().stream().map(c -> c.letter())
+                    .toList()) + " beside response columns " + String.join(", ", data.yColumns().stream()
+                    .map(c -> c.letter()).toList()) + ")" : ""), InternalStandard.OPTION);
+        }
         section.setting("Confidence level", "95 %");
+        ResponseRatios.record(section, data);
         double[] x = data.usedX();
         double[] y = data.usedY();
         CalibrationCurve curve;
@@ -74,7 +85,8 @@ public final class CalibrationAnalysis implements Analysis {
             AnovaTrail.record(section, RegressionAnova.of(fit), fit.model() == LineModel.WITH_INTERCEPT, data.yUnit(),
                     section.stepId("n"));
             recordResiduals(section, data, fit);
-            section.export(new CalibrationLine(cell.id(), fit, data.xUnit(), data.yUnit(), min(x), max(x)));
+            section.export(new CalibrationLine(cell.id(), fit, data.xUnit(), data.yUnit(), min(x), max(x),
+                    data.ratio() ? data.isColumns().get(0).header() : null));
         }
         BackCalculation.record(section, data, curve, inversion);
         flagResiduals(section, data, curve);
@@ -130,7 +142,9 @@ public final class CalibrationAnalysis implements Analysis {
                     "Include standards at more concentration levels, or use a straight-line model.");
         }
         Weighting fixed = options.weighting().fixed();
-        if (fixed != null) {
+        if (fixed == Weighting.INVERSE_VARIANCE) {
+            ReplicateWeights.check(data, context.where(cell.lineOf("weighting")));
+        } else if (fixed != null) {
             int bad = fixed.firstNonPositiveBasis(x, data.usedY());
             if (bad >= 0) {
                 CalibrationPoint p = data.used().get(bad);
@@ -160,6 +174,9 @@ public final class CalibrationAnalysis implements Analysis {
         double[] y = data.usedY();
         Map<Weighting, Double> sums = new LinkedHashMap<>();
         for (Weighting w : Weighting.values()) {
+            if (w == Weighting.INVERSE_VARIANCE) {
+                continue; // weights estimated from a few replicates are a choice to state, not to be picked by fit
+            }
             if (w.firstNonPositiveBasis(x, y) >= 0) {
                 section.warning("Weighting " + w.notation() + " was not tried by auto: a "
                         + ("x".equals(w.basis()) ? "concentration" : "response") + " is zero or negative.");

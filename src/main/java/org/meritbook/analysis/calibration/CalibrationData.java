@@ -6,6 +6,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.InternalStandard;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.error.Problem;
@@ -21,15 +22,30 @@ import org.meritbook.workbook.NumericColumn;
  * The calibration standards of one cell: every row of the block, with exclusions applied (a point
  * is excluded when its x or y cell is), numbers checked, and units taken from the headers. With
  * several response columns ({@code y: [B, C, D]}, replicates side by side, one row per level)
- * each response cell is a point of its own, keeping its own cell address.
+ * each response cell is a point of its own, keeping its own cell address. With
+ * {@code internal-standard:} each point's response is the ratio of its response cell to the
+ * internal-standard cell of its row (one internal-standard column per response column).
  *
- * @param yColumns the response columns, one or more
+ * @param yColumns  the response columns, one or more
+ * @param isColumns the internal-standard columns, one per response column, or none
  */
-record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, List<CalibrationPoint> points) {
+record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, List<CalibrationPoint> points,
+                       List<Column> isColumns) {
 
     CalibrationData {
         yColumns = List.copyOf(yColumns);
         points = List.copyOf(points);
+        isColumns = List.copyOf(isColumns);
+    }
+
+    /** Whether the response is the ratio to an internal standard. */
+    boolean ratio() {
+        return !isColumns.isEmpty();
+    }
+
+    /** What the response is called on axes and in the equation: "Peak area" or "Peak area / IS area". */
+    String responseName() {
+        return ratio() ? yColumn().name() + " / " + isColumns.get(0).name() : yColumn().name();
     }
 
     /** The first response column: its name and unit stand for all of them. */
@@ -45,8 +61,9 @@ record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, L
         return xColumn.unit();
     }
 
+    /** The response's unit: the response column's, or the ratio's ({@link InternalStandard#unit}). */
     String yUnit() {
-        return yColumn().unit();
+        return ratio() ? InternalStandard.unit(yColumn().unit(), isColumns.get(0).unit()) : yColumn().unit();
     }
 
     List<CalibrationPoint> used() {
@@ -68,11 +85,17 @@ record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, L
         for (String y : options.ys()) {
             yColumns.add(column(block, y, cell.lineOf("y"), context));
         }
+        List<Column> isColumns = new ArrayList<>();
+        for (String is : options.internalStandards()) {
+            isColumns.add(column(block, is, cell.lineOf(InternalStandard.OPTION), context));
+        }
         List<Column> all = new ArrayList<>(List.of(xColumn));
         all.addAll(yColumns);
-        Map<CellRef, String> reasons = exclusionReasons(cell, block, all, context);
+        List<Column> excludable = new ArrayList<>(all);
+        excludable.addAll(isColumns);
+        Map<CellRef, String> reasons = exclusionReasons(cell, block, excludable, context);
         if (options.dropCensored()) {
-            all.forEach(c -> addCensored(c, reasons));
+            all.forEach(c -> addCensored(c, reasons)); // a censored internal standard gives no ratio: always an error
         }
         int rows = block.rowCount();
         // A point is out when its x or its own y cell is; an x cell's reason takes every response of its row.
@@ -81,6 +104,9 @@ record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, L
             for (int i = 0; i < rows; i++) {
                 String rx = reasons.get(xColumn.values().get(i).ref());
                 String ry = reasons.get(yColumns.get(k).values().get(i).ref());
+                if (ry == null && !isColumns.isEmpty()) {
+                    ry = reasons.get(isColumns.get(k).values().get(i).ref());
+                }
                 pointReason[k][i] = rx != null ? rx : ry != null ? ry : block.leftOut().get(i); // the reader's, e.g. hidden: leave-out
             }
         }
@@ -97,6 +123,16 @@ record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, L
         double[][] ys = new double[yColumns.size()][];
         for (int k = 0; k < yColumns.size(); k++) {
             ys[k] = numbers(block.file(), yColumns.get(k), pointReason[k], problems);
+            if (!isColumns.isEmpty()) {
+                List<CellValue> usedIs = new ArrayList<>();
+                for (int i = 0; i < rows; i++) {
+                    if (pointReason[k][i] == null) {
+                        usedIs.add(isColumns.get(k).values().get(i));
+                    }
+                }
+                problems.addAll(InternalStandard.problems(block.file(), isColumns.get(k), usedIs,
+                        context.where(cell.lineOf(InternalStandard.OPTION))));
+            }
         }
         if (!problems.isEmpty()) {
             throw new InputException(problems);
@@ -109,10 +145,16 @@ record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, L
                 // Excluded points keep their values when numeric, so the table and figures can show them.
                 double x = xc.isNumber() ? xc.number() : xs[i];
                 double y = yc.isNumber() ? yc.number() : ys[k][i];
-                points.add(new CalibrationPoint(yc.ref().a1(), i, xc, yc, x, y, pointReason[k][i]));
+                CellValue is = isColumns.isEmpty() ? null : isColumns.get(k).values().get(i);
+                if (is != null) {
+                    // An excluded point keeps its ratio when both cells allow one, else NaN (not shown as a number).
+                    y = InternalStandard.problem(block.file(), isColumns.get(k), is, "").isEmpty() ? y / is.number()
+                            : Double.NaN;
+                }
+                points.add(new CalibrationPoint(yc.ref().a1(), i, xc, yc, x, y, pointReason[k][i], is));
             }
         }
-        return new CalibrationData(block, xColumn, yColumns, points);
+        return new CalibrationData(block, xColumn, yColumns, points, isColumns);
     }
 
     /** One column's numbers, NaN where its cell is left out; bad cells are added to {@code problems}. */

@@ -34,7 +34,7 @@ final class CalibrationFigures {
     static void addTo(SectionBuilder section, String id, CalibrationData data, CalibrationCurve fit,
                       Optional<DeviationBand> band) {
         String xTitle = titled(data.xColumn().name(), data.xUnit());
-        String yTitle = titled(data.yColumn().name(), data.yUnit());
+        String yTitle = titled(data.responseName(), data.yUnit());
         section.figure(fitFigure(id, data, fit, xTitle, yTitle));
         section.figure(residualFigure(id, data, fit, xTitle));
         section.figure(deviationFigure(id, data, fit, xTitle, band));

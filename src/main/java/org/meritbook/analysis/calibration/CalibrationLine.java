@@ -17,12 +17,24 @@ import org.meritbook.stats.regression.LineFit;
  * @param yUnit     response unit, or null
  * @param xLow      lowest concentration in the fit
  * @param xHigh     highest concentration in the fit
+ * @param internalStandard the header of the internal-standard column when the response is the ratio
+ *                  A / A_IS (a cell reading back through this line must give its samples' ratio too), else null
  */
-public record CalibrationLine(String cellId, LineFit fit, String xUnit, String yUnit, double xLow, double xHigh)
-        implements Exported {
+public record CalibrationLine(String cellId, LineFit fit, String xUnit, String yUnit, double xLow, double xHigh,
+                              String internalStandard) implements Exported {
     public CalibrationLine {
         Objects.requireNonNull(cellId, "cellId");
         Objects.requireNonNull(fit, "fit");
+    }
+
+    /** A line whose response is the plain response (no internal standard). */
+    public CalibrationLine(String cellId, LineFit fit, String xUnit, String yUnit, double xLow, double xHigh) {
+        this(cellId, fit, xUnit, yUnit, xLow, xHigh, null);
+    }
+
+    /** Whether the response is a ratio to an internal standard. */
+    public boolean ratio() {
+        return internalStandard != null;
     }
 
     /** What a later cell's message calls the result it needs. */

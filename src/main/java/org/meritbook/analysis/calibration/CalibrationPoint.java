@@ -12,8 +12,10 @@ import org.meritbook.workbook.CellValue;
  * @param x               nominal concentration, NaN when excluded and not numeric
  * @param y               response, NaN when excluded and not numeric
  * @param exclusionReason why the point is left out of the fit, or null when used
+ * @param isCell          the internal standard's response cell when y is the ratio yCell / isCell, else null
  */
-record CalibrationPoint(String label, int row, CellValue xCell, CellValue yCell, double x, double y, String exclusionReason) {
+record CalibrationPoint(String label, int row, CellValue xCell, CellValue yCell, double x, double y, String exclusionReason,
+                        CellValue isCell) {
     boolean used() {
         return exclusionReason == null;
     }

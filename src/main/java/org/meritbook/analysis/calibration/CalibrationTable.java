@@ -49,7 +49,7 @@ final class CalibrationTable {
     private static DataTable perPoint(CalibrationData data, Predicate<String> hasQuantity) {
         String xUnit = data.xUnit();
         List<String> headers = List.of(data.xColumn().header(), "Response column",
-                "Response" + (data.yUnit() == null ? "" : " (" + data.yUnit() + ")"),
+                "Response" + (data.yColumn().unit() == null ? "" : " (" + data.yColumn().unit() + ")"), // the cell as read
                 "Back-calculated" + (xUnit == null ? "" : " (" + xUnit + ")"), "Deviation (%)");
         List<DataTable.Row> rows = new ArrayList<>();
         for (CalibrationPoint p : data.points()) {

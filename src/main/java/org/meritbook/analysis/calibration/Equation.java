@@ -34,7 +34,7 @@ final class Equation {
     }
 
     private static String text(CalibrationData data, LineModel model, String a, String b) {
-        String y = titled(data.yColumn().name(), data.yUnit());
+        String y = titled(data.responseName(), data.yUnit());
         String x = titled(data.xColumn().name(), data.xUnit());
         if (model == LineModel.THROUGH_ORIGIN) {
             return y + " = " + b + " · " + x;

@@ -18,15 +18,18 @@ final class PointsStep {
     /** Records quantity {@code n}; returns its step id, which later steps cite for "the points". */
     static String record(SectionBuilder section, CalibrationData data, Weighting weighting, double[] weights, int n) {
         List<StepInput> inputs = new ArrayList<>();
+        boolean replicates = weighting == Weighting.INVERSE_VARIANCE;
+        List<String> levelSd = replicates ? ReplicateWeights.record(section, data) : List.of();
         int k = 0;
         for (CalibrationPoint p : data.points()) {
             if (p.used()) {
                 k++;
                 inputs.add(StepInput.number("x" + k, p.x(), data.xUnit(), p.xCell().ref().address()));
-                inputs.add(StepInput.number("y" + k, p.y(), data.yUnit(), p.yCell().ref().address()));
+                inputs.add(StepInput.number("y" + k, p.y(), data.yUnit(), ResponseRatios.source(section, p)));
                 if (weighting != Weighting.NONE) {
-                    inputs.add(StepInput.number("w" + k, weights[k - 1], null,
-                            weighting.notation() + ", normalised to mean 1"));
+                    inputs.add(StepInput.number("w" + k, weights[k - 1], null, replicates
+                            ? "1/s² of " + levelSd.get(k - 1) + ", normalised to mean 1"
+                            : weighting.notation() + ", normalised to mean 1"));
                 }
             } else {
                 inputs.add(StepInput.text("excluded " + p.yCell().ref().address(), p.exclusionReason(),
@@ -39,7 +42,9 @@ final class PointsStep {
         }
         String id = section.quantity(QuantityDraft.of("n", "Number of calibration points in the fit",
                 "n = points in the range not excluded", inputs, n, null));
-        if (weighting != Weighting.NONE) {
+        if (replicates) {
+            recordReplicateScale(section, data, id);
+        } else if (weighting != Weighting.NONE) {
             recordScale(section, data, weighting, id);
         }
         return id;
@@ -64,6 +69,20 @@ final class PointsStep {
                 "w′ᵢ = 1/" + symbol + ";  w̄′ = Σw′ᵢ / n;  wᵢ = w′ᵢ / w̄′, so Σwᵢ = n",
                 List.of(StepInput.text(weighting.basis() + ", n", "the points listed in " + points, points)),
                 mean, unit, null);
+    }
+
+    /** As {@link #recordScale}, for weights 1/s² of each point's level (unit: 1 over the response squared). */
+    private static void recordReplicateScale(SectionBuilder section, CalibrationData data, String points) {
+        double[] raw = Weighting.INVERSE_VARIANCE.rawWeights(data.usedX(), data.usedY());
+        double mean = 0;
+        for (double v : raw) {
+            mean += v;
+        }
+        mean /= raw.length;
+        section.step("weight_scale", "Mean raw weight, the divisor that scales the weights to average 1",
+                "w′ᵢ = 1/sᵢ², sᵢ the replicate SD of xᵢ's level;  w̄′ = Σw′ᵢ / n;  wᵢ = w′ᵢ / w̄′, so Σwᵢ = n",
+                List.of(StepInput.text("s, n", "the level SDs and the points listed in " + points, points)),
+                mean, Units.inverseSquare(data.yUnit()), null);
     }
 
     /** The settings line that says how the weights are scaled. */

@@ -18,6 +18,11 @@ final class Units {
         return unit == null ? null : "(" + unit + ")²";
     }
 
+    /** The unit of a weight 1/s² on the response scale: "1/(mAU·s)²"; null when the response is unitless. */
+    static String inverseSquare(String unit) {
+        return unit == null ? null : "1/(" + unit + ")²";
+    }
+
     /** The unit of the quadratic coefficient: response per concentration squared. */
     static String perSquare(String numerator, String denominator) {
         return ratio(numerator, squared(denominator));

@@ -67,6 +67,15 @@ final class DetectionInputs {
         if (cell.option("calibration").isPresent()) {
             line = context.earlier(cell, "calibration", CalibrationLine.class, CalibrationLine.DESCRIPTION);
             calibrationSection = context.earlierSection(cell, "calibration");
+            if (line.ratio() && blanks.isPresent() && !blanksAreConcentrations()) {
+                // Plain blank signals divided by a slope in ratio units would give a number of no meaning.
+                throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(cell.lineOf("blanks")),
+                        "blanks on the response scale of calibration '" + line.cellId() + "'",
+                        "blank signals, while '" + line.cellId() + "' calibrates the ratio to its internal standard ('"
+                                + line.internalStandard() + "')",
+                        "Give the blanks as results in concentration units (units: concentration), or calibrate "
+                                + "without the internal standard.");
+            }
         } else {
             line = null;
             calibrationSection = null;

@@ -9,6 +9,7 @@ import java.util.Optional;
 import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.DataTable;
+import org.meritbook.analysis.InternalStandard;
 import org.meritbook.analysis.MeasuredRows;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionBuilder;
@@ -22,6 +23,7 @@ import org.meritbook.stats.Interval;
 import org.meritbook.stats.UnusableDataException;
 import org.meritbook.stats.regression.InversePrediction;
 import org.meritbook.stats.regression.LineModel;
+import org.meritbook.stats.regression.Weighting;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.trail.StepInput;
 import org.meritbook.workbook.CellValue;
@@ -45,6 +47,7 @@ public final class UnknownsAnalysis implements Analysis {
         UnknownsOptions options = UnknownsOptions.of(cell, context);
         MeasuredRows rows = MeasuredRows.read(cell, context, "data", options.requests());
         MeasuredRows.requireAllClaimed(cell, context, List.of(rows));
+        checkInternalStandard(cell, context, options, rows, line);
         Units units = units(cell, context, options, rows, line);
         Optional<Quantity> loq = options.limits() == null ? Optional.empty()
                 : Optional.of(loq(cell, context, units, line));
@@ -63,6 +66,12 @@ public final class UnknownsAnalysis implements Analysis {
                     + (options.dilution() == null ? "1" : options.dilution().describe())
                     + " (taken as exact: s and the interval scale by the same factor)");
         }
+        if (line.ratio()) {
+            section.setting("Response", "ratio to the internal standard, y = A / A_IS: '"
+                    + rows.columns().get(UnknownsOptions.Y).header() + "' / '"
+                    + rows.columns().get(options.internalStandardIndex()).header() + "' in each row, as in '"
+                    + line.cellId() + "' ('" + line.internalStandard() + "')", InternalStandard.OPTION);
+        }
         section.setting("Confidence level", "95 %");
 
         Map<String, Group> groups = groups(rows, options, context, cell);
@@ -70,7 +79,7 @@ public final class UnknownsAnalysis implements Analysis {
         Map<String, String> notes = new LinkedHashMap<>();
         for (Group g : groups.values()) {
             g.rows().forEach(r -> groupOfRow.put(r.index(), g));
-            notes.put(g.label(), readBack(section, g, line, calibration, units, loq, options));
+            notes.put(g.label(), readBack(section, g, line, calibration, units, loq, options, rows.columns()));
         }
         return section.build(table(rows, groupOfRow, notes, section, units));
     }
@@ -131,12 +140,24 @@ public final class UnknownsAnalysis implements Analysis {
 
     /** Records one sample's steps and quantities; returns the table's note for it ("" when none). */
     private static String readBack(SectionBuilder section, Group g, CalibrationLine line, SectionResult calibration,
-                                   Units units, Optional<Quantity> loq, UnknownsOptions options) {
+                                   Units units, Optional<Quantity> loq, UnknownsOptions options, List<Column> columns) {
         String id = g.label();
-        double[] y = g.rows().stream().mapToDouble(r -> r.number(UnknownsOptions.Y)).toArray();
+        double[] y = new double[g.rows().size()];
+        List<String> sources = new ArrayList<>(g.sources());
+        for (int i = 0; i < y.length; i++) {
+            MeasuredRows.Row r = g.rows().get(i);
+            y[i] = r.number(UnknownsOptions.Y);
+            if (options.internalStandard() != null) {
+                int is = options.internalStandardIndex();
+                CellValue analyte = r.cell(UnknownsOptions.Y);
+                sources.set(i, InternalStandard.record(section, analyte.ref().a1(), analyte,
+                        columns.get(UnknownsOptions.Y).unit(), r.cell(is), columns.get(is).unit()));
+                y[i] = analyte.number() / r.cell(is).number();
+            }
+        }
         List<StepInput> readings = new ArrayList<>();
         for (int i = 0; i < y.length; i++) {
-            readings.add(StepInput.number("y" + (i + 1), y[i], line.yUnit(), g.sources().get(i)));
+            readings.add(StepInput.number("y" + (i + 1), y[i], line.yUnit(), sources.get(i)));
         }
         InversePrediction ip;
         try {
@@ -162,8 +183,11 @@ public final class UnknownsAnalysis implements Analysis {
                 SectionBuilder.fromEarlier("b", slope),
                 StepInput.number("m", y.length, null, "readings of " + id),
                 StepInput.number("n", line.fit().n(), null, "standards in '" + line.cellId() + "'"),
-                StepInput.number("w₀", ip.weightAtX0(), null, "weight at x₀ (" + line.fit().weighting().notation()
-                        + ", weights scaled to average 1)"));
+                StepInput.number("w₀", ip.weightAtX0(), null, line.fit().weighting() == Weighting.INVERSE_VARIANCE
+                        ? "weight at x₀: 1/s(x₀)², s(x₀) interpolated linearly between the replicate SDs of the two "
+                        + "levels of '" + line.cellId() + "' around x₀ (the end level's SD beyond them), scaled as the "
+                        + "calibration's weights (average 1)"
+                        : "weight at x₀ (" + line.fit().weighting().notation() + ", weights scaled to average 1)"));
         String seFormula = line.fit().model() == LineModel.WITH_INTERCEPT
                 ? "s(x₀) = (s(y/x)/|b|)·√(1/(w₀·m) + 1/Σw + (ȳ₀ − ȳw)²/(b²·Σwᵢ(xᵢ − x̄w)²))"
                 : "s(x₀) = (s(y/x)/|b|)·√(1/(w₀·m) + ȳ₀²/(b²·Σwᵢxᵢ²))";
@@ -230,6 +254,37 @@ public final class UnknownsAnalysis implements Analysis {
             }
         }
         return String.join("; ", notes);
+    }
+
+    /**
+     * A calibration on ratios reads back only ratios, and a ratio only through such a calibration: either
+     * mismatch is refused, never repaired silently. Every used internal-standard cell must hold a positive number.
+     */
+    private static void checkInternalStandard(AnalysisCell cell, AnalysisContext context, UnknownsOptions options,
+                                              MeasuredRows rows, CalibrationLine line) {
+        if (line.ratio() && options.internalStandard() == null) {
+            throw new InputException(ErrorKey.MISSING_OPTION, context.where(cell.lineOf("calibration")),
+                    "'" + InternalStandard.OPTION + ":' naming the samples' internal-standard column, since calibration '"
+                            + line.cellId() + "' uses the ratio to its internal standard ('" + line.internalStandard() + "')",
+                    "no '" + InternalStandard.OPTION + ":'",
+                    "Add '" + InternalStandard.OPTION + ": <column>' so the samples are read back as the same ratio.");
+        }
+        if (!line.ratio() && options.internalStandard() != null) {
+            throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(options.internalStandardLine()),
+                    "a calibration whose response is the ratio to an internal standard",
+                    "calibration '" + line.cellId() + "' fits the responses as read",
+                    "Remove '" + InternalStandard.OPTION + ":' here, or add it to the calibration cell as well.");
+        }
+        if (options.internalStandard() == null) {
+            return;
+        }
+        int is = options.internalStandardIndex();
+        List<CellValue> cells = rows.used().stream().map(r -> r.cell(is)).toList();
+        List<org.meritbook.error.Problem> problems = InternalStandard.problems(rows.block().file(),
+                rows.columns().get(is), cells, context.where(options.internalStandardLine()));
+        if (!problems.isEmpty()) {
+            throw new InputException(problems);
+        }
     }
 
     private static DataTable table(MeasuredRows rows, Map<Integer, Group> groupOfRow, Map<String, String> notes,

@@ -3,6 +3,7 @@ package org.meritbook.analysis.unknowns;
 import java.util.ArrayList;
 import java.util.List;
 import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.InternalStandard;
 import org.meritbook.analysis.MeasuredRows;
 import org.meritbook.analysis.MeasuredRows.Request;
 import org.meritbook.error.ErrorKey;
@@ -35,6 +36,9 @@ final class UnknownsOptions {
     private int massIndex = -1;
     private int dilutionIndex = -1;
     private int knownIndex = -1;
+    private int internalStandardIndex = -1;
+    private final String internalStandard;
+    private final int internalStandardLine;
 
     private UnknownsOptions(AnalysisCell cell, AnalysisContext context) {
         this.cell = cell;
@@ -45,6 +49,8 @@ final class UnknownsOptions {
         this.known = cell.option("known").map(v -> v.text()).orElse(null);
         this.resultUnit = cell.option("result-unit").map(v -> v.text().strip()).orElse(null);
         this.limits = cell.option("limits").map(v -> v.text()).orElse(null);
+        this.internalStandard = cell.option(InternalStandard.OPTION).map(v -> v.text()).orElse(null);
+        this.internalStandardLine = cell.lineOf(InternalStandard.OPTION);
         if ((volume == null) != (mass == null)) {
             String missing = volume == null ? "volume" : "mass";
             throw new InputException(ErrorKey.MISSING_OPTION, context.where(cell.lineOf(volume == null ? "mass" : "volume")),
@@ -69,6 +75,11 @@ final class UnknownsOptions {
         if (known != null) {
             knownIndex = requests.size();
             requests.add(Request.label("known", known)); // blank for samples, a number for QCs
+        }
+        if (internalStandard != null) {
+            internalStandardIndex = requests.size();
+            // Read as a label and checked by InternalStandard: a censored internal standard is never dropped.
+            requests.add(Request.label(InternalStandard.OPTION, internalStandard));
         }
     }
 
@@ -122,6 +133,19 @@ final class UnknownsOptions {
 
     String limits() {
         return limits;
+    }
+
+    /** The internal-standard column as written, or null when the response is used as read. */
+    String internalStandard() {
+        return internalStandard;
+    }
+
+    int internalStandardIndex() {
+        return internalStandardIndex;
+    }
+
+    int internalStandardLine() {
+        return internalStandardLine;
     }
 
     private int index(int slot) {

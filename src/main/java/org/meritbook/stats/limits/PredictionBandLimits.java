@@ -191,6 +191,9 @@ public record PredictionBandLimits(double alpha, double beta, int replicates, in
             if (fit.weighting() == Weighting.NONE) {
                 return 1.0;
             }
+            if (fit.weighting() == Weighting.INVERSE_VARIANCE) {
+                return fit.weightAt(x); // the replicate SD, interpolated, held at the lowest level's below it
+            }
             double basis = "x".equals(fit.weighting().basis()) ? x : fit.predict(x);
             return basis > 0 ? fit.weightAt(x) : null;
         }

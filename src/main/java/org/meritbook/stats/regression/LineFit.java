@@ -214,7 +214,8 @@ public record LineFit(LineModel model, Weighting weighting, int n, int degreesOf
     /**
      * The normalised weight this fit's weighting gives a new point at x0, on the same scale as
      * {@link #weights()} (raw weight divided by the mean raw weight of the calibration points).
-     * For y-based weighting the basis is the predicted response a + b·x0. 1 when unweighted.
+     * For y-based weighting the basis is the predicted response a + b·x0; for 1/s² the replicate SD
+     * interpolated at x0 ({@link LevelVariances#sdAt}). 1 when unweighted.
      *
      * @throws IllegalArgumentException when the basis at x0 (x0 or the predicted response) is not positive
      */
@@ -222,8 +223,7 @@ public record LineFit(LineModel model, Weighting weighting, int n, int degreesOf
         if (weighting == Weighting.NONE) {
             return 1;
         }
-        double basis = "x".equals(weighting.basis()) ? x0 : predict(x0);
-        double raw = weighting.rawWeights(new double[] {basis}, new double[] {basis})[0];
+        double raw = weighting.rawWeightAt(x0, predict(x0), x, y);
         double[] calibrationRaw = weighting.rawWeights(x, y);
         double meanRaw = 0;
         for (double v : calibrationRaw) {

@@ -260,8 +260,7 @@ public record QuadraticFit(Weighting weighting, int n, int degreesOfFreedom,
         if (weighting == Weighting.NONE) {
             return 1;
         }
-        double basis = "x".equals(weighting.basis()) ? x0 : predict(x0);
-        double raw = weighting.rawWeights(new double[] {basis}, new double[] {basis})[0];
+        double raw = weighting.rawWeightAt(x0, predict(x0), x, y);
         double meanRaw = 0;
         for (double v : weighting.rawWeights(x, y)) {
             meanRaw += v;

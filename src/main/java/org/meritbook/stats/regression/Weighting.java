@@ -17,8 +17,12 @@ import org.meritbook.stats.UnusableDataException;
  * lines; Draper &amp; Smith, <i>Applied Regression Analysis</i>, chapter on weighted least
  * squares.
  *
- * <p>Precondition of every non-trivial weighting: its basis (x or y) is strictly positive
+ * <p>Precondition of every power weighting: its basis (x or y) is strictly positive
  * at every point, since a power of zero or of a negative value gives no meaningful weight.
+ *
+ * <p>{@link #INVERSE_VARIANCE} ({@code 1/s^2}) is the estimated inverse variance: each point's weight is
+ * 1/s² of the replicate responses of its level (the points with the same x), see {@link LevelVariances};
+ * its precondition is at least two replicates with a positive SD at every level.
  */
 public enum Weighting {
     /** Ordinary (unweighted) least squares: every weight is 1. */
@@ -30,7 +34,9 @@ public enum Weighting {
     /** Weight 1/y (observed response). */
     INVERSE_Y("1/y", "y", 1),
     /** Weight 1/y² (observed response). */
-    INVERSE_Y2("1/y^2", "y", 2);
+    INVERSE_Y2("1/y^2", "y", 2),
+    /** Weight 1/s², s the replicate SD of the point's level (basis {@code "s"}). */
+    INVERSE_VARIANCE("1/s^2", "s", 2);
 
     private final String notation;
     private final String basis;
@@ -66,7 +72,10 @@ public enum Weighting {
         return Optional.empty();
     }
 
-    /** The variable the weight is a power of: {@code "x"}, {@code "y"}, or null for {@link #NONE}. */
+    /**
+     * The variable the weight is a power of: {@code "x"}, {@code "y"}, {@code "s"} (the replicate SD of
+     * the level, {@link #INVERSE_VARIANCE}), or null for {@link #NONE}.
+     */
     public String basis() {
         return basis;
     }
@@ -84,6 +93,10 @@ public enum Weighting {
      * @throws IllegalArgumentException when x and y differ in length
      */
     public int firstNonPositiveBasis(double[] x, double[] y) {
+        if (this == INVERSE_VARIANCE) {
+            basisValues(x, y);
+            return LevelVariances.of(x, y).firstUnusablePoint();
+        }
         double[] values = basisValues(x, y);
         if (values == null) {
             return -1;
@@ -103,6 +116,10 @@ public enum Weighting {
      *                                  strictly positive, or a weight is not finite
      */
     public double[] rawWeights(double[] x, double[] y) {
+        if (this == INVERSE_VARIANCE) {
+            basisValues(x, y);
+            return LevelVariances.of(x, y).rawWeights();
+        }
         double[] values = basisValues(x, y);
         double[] weights = new double[x.length];
         for (int i = 0; i < weights.length; i++) {
@@ -124,6 +141,25 @@ public enum Weighting {
             }
         }
         return weights;
+    }
+
+    /**
+     * The raw weight a new point at x0 gets under this weighting, on the scale of
+     * {@link #rawWeights} for the calibration points (x, y): 1/x0ᵏ, 1/ŷ0ᵏ with ŷ0 the predicted
+     * response at x0, or 1/s(x0)² with s(x0) from {@link LevelVariances#sdAt}; 1 when unweighted.
+     *
+     * @throws IllegalArgumentException when the weighting gives no weight there (a basis not positive)
+     */
+    public double rawWeightAt(double x0, double predicted, double[] x, double[] y) {
+        if (this == NONE) {
+            return 1;
+        }
+        if (this == INVERSE_VARIANCE) {
+            double s = LevelVariances.of(x, y).sdAt(x0);
+            return 1 / (s * s);
+        }
+        double basis = "x".equals(this.basis) ? x0 : predicted;
+        return rawWeights(new double[] {basis}, new double[] {basis})[0];
     }
 
     private double[] basisValues(double[] x, double[] y) {

@@ -25,7 +25,8 @@ class LineFitPropertiesTest {
     // (Draper & Smith, Applied Regression Analysis, ch. 9); the SEs and s are unchanged because
     // the weights are normalised to average 1 (common practice, no source).
     @ParameterizedTest
-    @EnumSource(Weighting.class)
+    // 1/s^2 needs replicated levels, which these data lack: LevelVariancesTest checks it on replicates.
+    @EnumSource(value = Weighting.class, mode = EnumSource.Mode.EXCLUDE, names = "INVERSE_VARIANCE")
     void scalingTheWeightsChangesNothing(Weighting weighting) {
         for (LineModel model : LineModel.values()) {
             LineFit reference = fit(weighting, model);
@@ -67,7 +68,8 @@ class LineFitPropertiesTest {
 
     // Source: the normal equations Σw·e = 0 (with intercept) and Σw·x·e = 0 (Draper & Smith, ch. 1, 9).
     @ParameterizedTest
-    @EnumSource(Weighting.class)
+    // 1/s^2 needs replicated levels, which these data lack: LevelVariancesTest checks it on replicates.
+    @EnumSource(value = Weighting.class, mode = EnumSource.Mode.EXCLUDE, names = "INVERSE_VARIANCE")
     void weightedResidualsSatisfyTheNormalEquations(Weighting weighting) {
         for (LineModel model : LineModel.values()) {
             LineFit fit = fit(weighting, model);
@@ -90,7 +92,8 @@ class LineFitPropertiesTest {
 
     // Source: definitions: Σ(e·√w/s)² = Σw·e²/s² = df, and y = fitted + residual (common practice, no source).
     @ParameterizedTest
-    @EnumSource(Weighting.class)
+    // 1/s^2 needs replicated levels, which these data lack: LevelVariancesTest checks it on replicates.
+    @EnumSource(value = Weighting.class, mode = EnumSource.Mode.EXCLUDE, names = "INVERSE_VARIANCE")
     void standardizedResidualsSquareToTheDegreesOfFreedom(Weighting weighting) {
         LineFit fit = fit(weighting, LineModel.WITH_INTERCEPT);
         double sum = 0;
@@ -127,7 +130,8 @@ class LineFitPropertiesTest {
     // Source: Var(a + b·x0) = s²(1/Σw + (x0 − x̄w)²/Sxx) is least at x0 = x̄w, where it is s²/Σw
     // (Draper & Smith, ch. 1, 9).
     @ParameterizedTest
-    @EnumSource(Weighting.class)
+    // 1/s^2 needs replicated levels, which these data lack: LevelVariancesTest checks it on replicates.
+    @EnumSource(value = Weighting.class, mode = EnumSource.Mode.EXCLUDE, names = "INVERSE_VARIANCE")
     void confidenceBandIsNarrowestAtTheWeightedMean(Weighting weighting) {
         LineFit fit = fit(weighting, LineModel.WITH_INTERCEPT);
         double centre = fit.weightedMeanX();
@@ -140,7 +144,8 @@ class LineFitPropertiesTest {
 
     // Source: a new observation adds its own variance s²/w0 to that of the mean response (Draper & Smith, ch. 1).
     @ParameterizedTest
-    @EnumSource(Weighting.class)
+    // 1/s^2 needs replicated levels, which these data lack: LevelVariancesTest checks it on replicates.
+    @EnumSource(value = Weighting.class, mode = EnumSource.Mode.EXCLUDE, names = "INVERSE_VARIANCE")
     void predictionBandIsWiderThanConfidenceBand(Weighting weighting) {
         for (LineModel model : LineModel.values()) {
             LineFit fit = fit(weighting, model);
