@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.Locale;
 import org.junit.jupiter.api.Test;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.stats.Interval;
 
@@ -12,7 +13,11 @@ class DisplayFormatterTest {
     private final DisplayFormatter f = new DisplayFormatter();
 
     private DisplayFormatter.Formatted q(String name, double v, String unit, Interval ci) {
-        return f.quantity(new Quantity(name, name, v, unit, "s." + name, ci, true));
+        return q(NumberKind.ofUnit(unit), name, v, unit, ci);
+    }
+
+    private DisplayFormatter.Formatted q(NumberKind kind, String name, double v, String unit, Interval ci) {
+        return f.quantity(new Quantity(name, name, v, unit, "s." + name, ci, true, kind));
     }
 
     @Test
@@ -38,17 +43,17 @@ class DisplayFormatterTest {
 
     @Test
     void correlationShowsFourDecimalsButNeverRoundsUpToOne() {
-        assertEquals("0.9987", q("r_squared", 0.99874, null, null).value());
-        assertEquals("0.99999", q("r_squared", 0.999993, null, null).value());
-        assertEquals("0.999996", q("r", 0.9999962, null, null).value());
-        assertEquals("1.0000", q("r", 1.0, null, null).value());
+        assertEquals("0.9987", q(NumberKind.CORRELATION, "r_squared", 0.99874, null, null).value());
+        assertEquals("0.99999", q(NumberKind.CORRELATION, "r_squared", 0.999993, null, null).value());
+        assertEquals("0.999996", q(NumberKind.CORRELATION, "r", 0.9999962, null, null).value());
+        assertEquals("1.0000", q(NumberKind.CORRELATION, "r", 1.0, null, null).value());
     }
 
     @Test
     void pValuesCountsPercentagesAndTheDefault() {
-        assertEquals("0.012", q("lack_of_fit_p", 0.01234, null, null).value());
-        assertEquals("< 0.001", q("shapiro_p", 0.00012, null, null).value());
-        assertEquals("20", q("n", 20, null, null).value());
+        assertEquals("0.012", q(NumberKind.P_VALUE, "lack_of_fit_p", 0.01234, null, null).value());
+        assertEquals("< 0.001", q(NumberKind.P_VALUE, "shapiro_p", 0.00012, null, null).value());
+        assertEquals("20", q(NumberKind.COUNT, "n", 20, null, null).value());
         assertEquals("99.2 %", q("recovery_percent:low", 99.21, "%", null).withUnit());
         assertEquals("0.043 %", q("cv_percent", 0.0432, "%", null).withUnit());
         assertEquals("3.303 AU", q("residual_sd", 3.30281, "AU", null).withUnit());

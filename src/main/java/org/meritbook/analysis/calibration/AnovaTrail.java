@@ -2,6 +2,7 @@ package org.meritbook.analysis.calibration;
 
 import java.util.List;
 import java.util.Optional;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.regression.LackOfFit;
@@ -45,10 +46,10 @@ final class AnovaTrail {
                 "MS_res = SS_res / df_res = s²(y/x)", List.of(section.ref("SS_res", resSs), section.ref("df_res", resDf)),
                 a.msResidual(), ss));
         String f = section.quantity(QuantityDraft.of("anova_regression_f", "ANOVA: F statistic of the regression",
-                "F = MS_reg / MS_res", List.of(section.ref("MS_reg", regMs), section.ref("MS_res", resMs)), a.f(), null));
+                "F = MS_reg / MS_res", List.of(section.ref("MS_reg", regMs), section.ref("MS_res", resMs)), a.f(), null).as(NumberKind.STATISTIC));
         section.quantity(QuantityDraft.of("anova_regression_p", "ANOVA: p-value of the regression",
                 "p = P(F(df_reg, df_res) > F)", List.of(section.ref("F", f), section.ref("df_reg", regDf),
-                        section.ref("df_res", resDf)), a.p(), null));
+                        section.ref("df_res", resDf)), a.p(), null).as(NumberKind.P_VALUE));
         if (a.lackOfFit().isPresent()) {
             LackOfFit l = a.lackOfFit().get();
             String lofDf = count(section, "anova_lack_of_fit_df", "ANOVA: lack-of-fit degrees of freedom",
@@ -76,6 +77,7 @@ final class AnovaTrail {
 
     private static String count(SectionBuilder section, String name, String label, String formula, int value,
                                 String points) {
-        return section.quantity(QuantityDraft.of(name, label, formula, List.of(LineTrail.from("n", points)), value, null));
+        return section.quantity(QuantityDraft.of(name, label, formula, List.of(LineTrail.from("n", points)), value, null)
+                .as(NumberKind.COUNT));
     }
 }

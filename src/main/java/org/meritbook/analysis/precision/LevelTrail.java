@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.meritbook.analysis.MeasuredRows;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.UnusableDataException;
@@ -93,7 +94,7 @@ final class LevelTrail {
                 "Horwitz, Kamps & Boyer (1980); Horwitz & Albert (2006)");
         section.quantity(QuantityDraft.of("horwitz_ratio" + suffix, "Horwitz ratio (HorRat)" + of(),
                 "HorRat = RSD / PRSD_R", List.of(section.ref(found.startsWith("intermediate") ? "RSD_I" : "%CV",
-                        section.stepId(found)), section.ref("PRSD_R", predicted)), h.ratio(), null)
+                        section.stepId(found)), section.ref("PRSD_R", predicted)), h.ratio(), null).as(NumberKind.RATIO)
                 .withMethod("HorRat on " + (found.startsWith("intermediate") ? "the intermediate-precision RSD"
                         : "the RSD of all results") + "; Horwitz & Albert, J. AOAC Int. 89 (2006)"));
     }
@@ -129,7 +130,7 @@ final class LevelTrail {
     private String summary(SampleSummary s, List<StepInput> groupMeans) {
         String n = section.quantity(QuantityDraft.of("n" + suffix, "Number of results" + of(), "n = number of results used",
                 List.of(StepInput.text("results", s.n() + " used rows" + (data.levelled() ? " of level " + level.label() : "")
-                        + " (excluded rows not counted)", data.rows().where())), s.n(), null));
+                        + " (excluded rows not counted)", data.rows().where())), s.n(), null).as(NumberKind.COUNT));
         List<StepInput> meanInputs = new ArrayList<>();
         String formula;
         if (groupMeans.isEmpty()) {
@@ -198,11 +199,11 @@ final class LevelTrail {
                 anova.msWithin(), sq, null);
         String f = section.quantity(QuantityDraft.of("anova_f" + suffix, "ANOVA F (" + groupName + ")" + of(),
                 "F = MS_between / MS_within", List.of(section.ref("MS_between", msB), section.ref("MS_within", msW)),
-                anova.f(), null));
+                anova.f(), null).as(NumberKind.STATISTIC));
         section.quantity(QuantityDraft.of("anova_p" + suffix, "ANOVA p (" + groupName + " effect)" + of(),
                 "p = P(F(k − 1, N − k) ≥ F)", List.of(section.ref("F", f),
                         StepInput.number("k − 1", anova.dfBetween(), null, ssB),
-                        StepInput.number("N − k", anova.dfWithin(), null, ssW)), anova.p(), null));
+                        StepInput.number("N − k", anova.dfWithin(), null, ssW)), anova.p(), null).as(NumberKind.P_VALUE));
         components(VarianceComponents.of(anova), msB, msW, groupName);
         cochran(labels, groupName);
         grubbsOnMeans(anova, labels, groupName);
@@ -283,7 +284,7 @@ final class LevelTrail {
                 List.of(StepInput.number("x", g.suspect(), unit, address), section.ref("x̄", section.stepId("mean" + suffix)),
                         section.ref("s", sd), StepInput.number("G crit (5 %)", g.critical5(), null, "α = 0.05"),
                         StepInput.number("G crit (1 %)", g.critical1(), null, "α = 0.01")),
-                g.statistic(), null).withMethod("Grubbs (1969), single two-sided; ISO 5725-2 §7.3.4"));
+                g.statistic(), null).as(NumberKind.STATISTIC).withMethod("Grubbs (1969), single two-sided; ISO 5725-2 §7.3.4"));
         flag(g.judgement(), String.format(Locale.ROOT, "Grubbs' test flags result %s (%s) as a %s: G = %.3f against "
                 + "%.3f (5 %%) and %.3f (1 %%) (step %s).", address, suspect.cell(0).raw(), noun(g.judgement()),
                 g.statistic(), g.critical5(), g.critical1(), id));
@@ -313,7 +314,7 @@ final class LevelTrail {
                 List.of(section.ref("x̄(" + suspect + ")", section.stepId("group_mean" + suffix + "/" + suspect)),
                         StepInput.number("G crit (5 %)", g.critical5(), null, "α = 0.05, k = " + labels.size()),
                         StepInput.number("G crit (1 %)", g.critical1(), null, "α = 0.01, k = " + labels.size())),
-                g.statistic(), null).withMethod("Grubbs (1969) on cell means; ISO 5725-2 §7.3.4"));
+                g.statistic(), null).as(NumberKind.STATISTIC).withMethod("Grubbs (1969) on cell means; ISO 5725-2 §7.3.4"));
         flag(g.judgement(), String.format(Locale.ROOT, "Grubbs' test on the %s means flags %s %s as a %s: G = %.3f "
                 + "against %.3f (5 %%) and %.3f (1 %%) (step %s).", groupName, groupName, suspect, noun(g.judgement()),
                 g.statistic(), g.critical5(), g.critical1(), id));
@@ -345,7 +346,7 @@ final class LevelTrail {
                         StepInput.number("C crit (5 %)", c.critical5(), null, "α = 0.05, n = " + c.groupSize()
                                 + (c.sizeRule() == CochranTest.GroupSizeRule.EQUAL ? "" : " (the most frequent size)")),
                         StepInput.number("C crit (1 %)", c.critical1(), null, "α = 0.01")),
-                c.statistic(), null).withMethod("Cochran's test; ISO 5725-2 §7.3.3"));
+                c.statistic(), null).as(NumberKind.STATISTIC).withMethod("Cochran's test; ISO 5725-2 §7.3.3"));
         flag(c.judgement(), String.format(Locale.ROOT, "Cochran's test flags the variance of %s %s as a %s: C = %.3f "
                 + "against %.3f (5 %%) and %.3f (1 %%) (step %s).", groupName, suspect, noun(c.judgement()),
                 c.statistic(), c.critical5(), c.critical1(), id));
