@@ -90,10 +90,10 @@ public final class SectionBuilder {
         return this;
     }
 
-    /** The value of a step already recorded. */
-    public double value(String stepId) {
-        return steps.stream().filter(s -> s.id().equals(stepId)).findFirst()
-                .orElseThrow(() -> new IllegalStateException("no step " + stepId + " recorded yet")).value();
+    /** A table placed before the tables added so far (a summary of what the per-level tables detail). */
+    public SectionBuilder tableFirst(ResultTable table) {
+        tables.add(0, table);
+        return this;
     }
 
     /** A typed result later cells may use. */

@@ -149,7 +149,8 @@ final class SectionViewBuilder {
         }
         for (int j = 0; j < t.columns().size(); j++) {
             ResultTable.Column c = t.columns().get(j);
-            columns.add(new ResultColumn(c.name(), c.unit() == null ? "" : "(" + c.unit() + ")", numeric[j]));
+                        String unit = c.unit() == null ? "" : c.unit().startsWith("(") ? c.unit() : "(" + c.unit() + ")";
+            columns.add(new ResultColumn(c.name(), unit, numeric[j]));
         }
         List<List<ResultCell>> rows = new ArrayList<>();
         for (List<ResultTable.Cell> row : t.rows()) {
