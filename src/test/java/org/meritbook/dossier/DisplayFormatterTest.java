@@ -86,4 +86,30 @@ class DisplayFormatterTest {
             Locale.setDefault(saved);
         }
     }
+
+    @Test
+    void theKindNotTheNameChoosesTheRule() {
+        // The same names as above with other kinds: the rule follows the kind the analysis gave.
+        assertEquals("20.00", q(NumberKind.MEASURE, "n", 20, null, null).value());
+        assertEquals("3", q(NumberKind.COUNT, "x", 3.0, null, null).value());
+        assertEquals("0.012", q(NumberKind.P_VALUE, "x", 0.01234, null, null).value());
+        assertEquals("0.9987", q(NumberKind.CORRELATION, "x", 0.99874, null, null).value());
+        assertEquals("0.01234", q(NumberKind.MEASURE, "lack_of_fit_p", 0.01234, null, null).value());
+        assertEquals("0.1579", q(NumberKind.STATISTIC, "anova_f", 0.15789473684210606, null, null).value());
+        assertEquals("0.6500", q(NumberKind.RATIO, "horwitz_ratio", 0.65, null, null).value());
+        assertEquals("99.2 %", q(NumberKind.PERCENT, "x", 99.21, "%", null).withUnit());
+        // an interval sets the decimals of a measure, not of a count
+        Interval ci = new Interval(17.5, 22.5, 0.95);
+        assertEquals("20.0 ± 2.5", q(NumberKind.MEASURE, "x", 20, null, ci).withUnit());
+        assertEquals("20", q(NumberKind.COUNT, "x", 20, null, ci).withUnit());
+    }
+
+    @Test
+    void aTableShowsAnIntervalByItsLimitsRoundedAsItsValue() {
+        Quantity sd = new Quantity("sd", "SD", 0.01094, "mg/L", "s.sd", new Interval(0.00683, 0.02684, 0.95), true,
+                NumberKind.MEASURE);
+        assertEquals("0.007 to 0.027", f.limits(sd));
+        assertEquals("", f.limits(new Quantity("sd", "SD", 0.01094, "mg/L", "s.sd", null, true, NumberKind.MEASURE)));
+        assertEquals("0.1579", f.number(0.15789473684210606, null, null, NumberKind.STATISTIC).value());
+    }
 }

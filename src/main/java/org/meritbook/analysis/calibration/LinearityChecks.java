@@ -76,7 +76,8 @@ final class LinearityChecks {
                         StepInput.number("SS_PE", t.ssPureError(), null, "computed"),
                         StepInput.number("df_LoF", t.lackOfFitDf(), null, "levels − parameters"),
                         StepInput.number("df_PE", t.pureErrorDf(), null, "n − levels")),
-                t.f(), null).as(NumberKind.STATISTIC).withMethod("lack-of-fit test with pure error; Draper & Smith, Applied Regression Analysis, §2.1"));
+                t.f(), null).as(NumberKind.STATISTIC)
+                .withMethod("lack-of-fit test with pure error; Draper & Smith, Applied Regression Analysis, §2.1"));
         section.quantity(QuantityDraft.of("lack_of_fit_p", "Lack-of-fit p-value", "p = P(F(df_LoF, df_PE) > F)",
                 List.of(section.ref("F", f)), t.p(), null).as(NumberKind.P_VALUE).inSummary());
         if (t.p() < ALPHA) {

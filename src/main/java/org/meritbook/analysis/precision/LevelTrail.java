@@ -71,7 +71,7 @@ final class LevelTrail {
         if (!outliers.isEmpty()) {
             section.table(new ResultTable("Outlier tests" + of(), List.of(ResultTable.Column.of("Test"),
                     ResultTable.Column.of("Suspect"), ResultTable.Column.of("Statistic"),
-                    ResultTable.Column.of("Critical value 5 %"), ResultTable.Column.of("Critical value 1 %"),
+                    ResultTable.Column.of("Critical value 5\u00a0%"), ResultTable.Column.of("Critical value 1\u00a0%"),
                     ResultTable.Column.of("Result")), outliers,
                     "A straggler lies between the 5 % and 1 % critical values, an outlier above the 1 % value "
                             + "(ISO 5725-2 §7.3.2); flagged, never removed."));
@@ -251,7 +251,7 @@ final class LevelTrail {
         outliers.add(List.of(ResultTable.Cell.text(test), ResultTable.Cell.text(suspect),
                 ResultTable.Cell.quantity(statisticName), ResultTable.Cell.inputOf(stepId, critical5, NumberKind.STATISTIC),
                 ResultTable.Cell.inputOf(stepId, critical1, NumberKind.STATISTIC),
-                ResultTable.Cell.text(judgement == OutlierClass.CONSISTENT ? "not flagged"
+                ResultTable.Cell.text(judgement == OutlierClass.CONSISTENT ? "not\u00a0flagged"
                         : judgement.name().toLowerCase(Locale.ROOT))));
     }
 

@@ -88,7 +88,7 @@ class PrecisionTablesTest {
             double c5 = value(s, row.get(3));
             double c1 = value(s, row.get(4));
             assertTrue(c5 < c1, "the 1 % critical value is the larger");
-            String flagged = stat > c1 ? "outlier" : stat > c5 ? "straggler" : "not flagged";
+            String flagged = stat > c1 ? "outlier" : stat > c5 ? "straggler" : "not\u00a0flagged";
             assertEquals(flagged, row.get(5).text(), row.get(0).text());
         }
         // Grubbs on the nine results: the farthest from 10.1 is 10.5 or 9.7 (both 0.4 away); G = 0.4 / s.
