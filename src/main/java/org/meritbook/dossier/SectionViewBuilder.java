@@ -165,22 +165,22 @@ final class SectionViewBuilder {
     }
 
     private ResultCell resultCell(SectionResult r, ResultTable.Cell c) {
-        switch (c.show()) {
-            case TEXT:
-                return new ResultCell(c.text(), false, "", "");
-            case QUANTITY:
-            case INTERVAL: {
+        return switch (c.show()) {
+            case TEXT -> new ResultCell(c.text(), false, "", "");
+            case QUANTITY -> {
                 Quantity q = r.quantity(c.ref()).orElseThrow();
-                DisplayFormatter.Formatted f = format.quantity(q);
-                String text = c.show() == ResultTable.Show.QUANTITY ? f.value() : format.limits(q);
-                return linked(text, q.stepId());
+                yield linked(format.quantity(q).value(), q.stepId());
             }
-            default: {
+            case INTERVAL -> {
+                Quantity q = r.quantity(c.ref()).orElseThrow();
+                yield linked(format.limits(q), q.stepId());
+            }
+            case STEP -> {
                 Step step = r.steps().stream().filter(s -> s.id().equals(c.ref())).findFirst().orElseThrow();
                 double v = c.ownValue() ? c.value() : step.value();
-                return linked(format.number(v, null, null, c.kind()).value(), step.id());
+                yield linked(format.number(v, null, null, c.kind()).value(), step.id());
             }
-        }
+        };
     }
 
     private ResultCell linked(String text, String stepId) {
