@@ -21,6 +21,7 @@ public final class SectionBuilder {
     private final List<Verdict> verdicts = new ArrayList<>();
     private final List<String> warnings = new ArrayList<>();
     private final List<Exported> exports = new ArrayList<>();
+    private final List<ResultTable> tables = new ArrayList<>();
 
     public SectionBuilder(AnalysisCell cell) {
         this.cell = cell;
@@ -52,7 +53,7 @@ public final class SectionBuilder {
     /** A reported quantity together with the step that computed it. */
     public String quantity(QuantityDraft q) {
         String id = step(q.name(), q.label(), q.formula(), q.inputs(), q.value(), q.unit(), q.method());
-        quantities.add(new Quantity(q.name(), q.label(), q.value(), q.unit(), id, q.interval(), q.summary()));
+        quantities.add(new Quantity(q.name(), q.label(), q.value(), q.unit(), id, q.interval(), q.summary(), q.kind()));
         return id;
     }
 
@@ -82,6 +83,18 @@ public final class SectionBuilder {
         return this;
     }
 
+    /** A table shown after the data table; its cells name quantities and steps already recorded. */
+    public SectionBuilder table(ResultTable table) {
+        tables.add(table);
+        return this;
+    }
+
+    /** A table placed before the tables added so far (a summary of what the per-level tables detail). */
+    public SectionBuilder tableFirst(ResultTable table) {
+        tables.add(0, table);
+        return this;
+    }
+
     /** A typed result later cells may use. */
     public SectionBuilder export(Exported result) {
         exports.add(result);
@@ -97,8 +110,8 @@ public final class SectionBuilder {
     }
 
     public SectionResult build(DataTable table) {
-        return new SectionResult(cell.id(), cell.kind(), cell.title(), settings, quantities, steps, table, figures,
-                verdicts, warnings, exports);
+        return new SectionResult(cell.id(), cell.kind(), cell.title(), settings, quantities, steps, table, tables,
+                figures, verdicts, warnings, exports);
     }
 
     /**
@@ -113,24 +126,32 @@ public final class SectionBuilder {
      * @param method   reference or null
      * @param interval confidence interval or null
      * @param summary  shown in the dossier's summary
+     * @param kind     what kind of number it is (sets its display rounding)
      */
     public record QuantityDraft(String name, String label, String formula, List<StepInput> inputs, double value,
-                                String unit, String method, Interval interval, boolean summary) {
+                                String unit, String method, Interval interval, boolean summary, NumberKind kind) {
+        /** A draft whose kind its unit tells (a percentage or a measure); say otherwise with {@link #as}. */
         public static QuantityDraft of(String name, String label, String formula, List<StepInput> inputs,
                                        double value, String unit) {
-            return new QuantityDraft(name, label, formula, inputs, value, unit, null, null, false);
+            return new QuantityDraft(name, label, formula, inputs, value, unit, null, null, false,
+                    NumberKind.ofUnit(unit));
         }
 
         public QuantityDraft withInterval(Interval ci) {
-            return new QuantityDraft(name, label, formula, inputs, value, unit, method, ci, summary);
+            return new QuantityDraft(name, label, formula, inputs, value, unit, method, ci, summary, kind);
         }
 
         public QuantityDraft inSummary() {
-            return new QuantityDraft(name, label, formula, inputs, value, unit, method, interval, true);
+            return new QuantityDraft(name, label, formula, inputs, value, unit, method, interval, true, kind);
         }
 
         public QuantityDraft withMethod(String reference) {
-            return new QuantityDraft(name, label, formula, inputs, value, unit, reference, interval, summary);
+            return new QuantityDraft(name, label, formula, inputs, value, unit, reference, interval, summary, kind);
+        }
+
+        /** The same draft as this kind of number (a count, a p-value, a test statistic…). */
+        public QuantityDraft as(NumberKind numberKind) {
+            return new QuantityDraft(name, label, formula, inputs, value, unit, method, interval, summary, numberKind);
         }
     }
 }

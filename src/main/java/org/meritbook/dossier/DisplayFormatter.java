@@ -1,9 +1,10 @@
 package org.meritbook.dossier;
 
 import java.math.BigDecimal;
-import java.math.MathContext;
 import java.math.RoundingMode;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.Quantity;
+import org.meritbook.analysis.Rounding;
 import org.meritbook.stats.Interval;
 
 /**
@@ -15,41 +16,54 @@ public final class DisplayFormatter {
     static final String MINUS = "\u2212";
     private static final int DEFAULT_SIGNIFICANT = 4;
     private static final int TRAIL_SIGNIFICANT = 6;
-    private static final int UNCERTAINTY_SIGNIFICANT = 2;
 
     /** How one quantity reads in the dossier. {@code uncertainty} is empty when there is no interval. */
     public record Formatted(String value, String unit, String withUnit, String uncertainty) {
     }
 
     public Formatted quantity(Quantity q) {
-        String base = baseName(q.name());
-        String unit = q.unit() == null ? "" : q.unit();
-        Interval ci = q.interval();
-        if (ci != null && !isCount(base) && !isCorrelation(base) && !isP(base)) {
+        return number(q.value(), q.unit(), q.interval(), q.kind());
+    }
+
+    /**
+     * A value of this kind of number, with its interval or null: the interval sets the rounding
+     * unless the kind has its own (counts, p-values, correlations).
+     */
+    public Formatted number(double v, String unitOrNull, Interval ci, NumberKind kind) {
+        String unit = unitOrNull == null ? "" : unitOrNull;
+        if (ci != null && kind.roundedByInterval()) {
             // The interval sets the rounding: half-width to two significant figures, value alike.
             int d = uncertaintyDecimals(ci);
-            String value = fixed(q.value(), d);
+            String value = fixed(v, d);
             String limits = level(ci) + " CI " + fixed(ci.low(), d) + " to " + fixed(ci.high(), d) + withSpace(unit);
-            String withUnit = symmetric(q.value(), ci)
+            String withUnit = symmetric(v, ci)
                     ? value + " ± " + fixed((ci.high() - ci.low()) / 2, d) + withSpace(unit)
                     : value + withSpace(unit);
             return new Formatted(value, unit, withUnit, limits);
         }
-        String value;
-        if (isCount(base)) {
-            value = fixed(q.value(), 0);
-        } else if (isCorrelation(base)) {
-            value = correlation(q.value());
-        } else if (isP(base)) {
-            value = pValue(q.value());
-        } else if (unit.equals("%")) {
-            value = fixed(q.value(), Math.max(1, decimalsFor(q.value(), 2)));
-        } else {
-            value = significant(q.value(), DEFAULT_SIGNIFICANT);
-        }
+        String value = switch (kind) {
+            case COUNT -> fixed(v, 0);
+            case CORRELATION -> correlation(v);
+            case P_VALUE -> pValue(v);
+            case PERCENT -> fixed(v, Math.max(1, decimalsFor(v, 2)));
+            case MEASURE, STATISTIC, RATIO -> significant(v, DEFAULT_SIGNIFICANT);
+        };
         String uncertainty = ci == null ? "" : level(ci) + " CI " + significant(ci.low(), DEFAULT_SIGNIFICANT)
                 + " to " + significant(ci.high(), DEFAULT_SIGNIFICANT);
         return new Formatted(value, unit, value + withSpace(unit), uncertainty);
+    }
+
+    /** A quantity's confidence interval by its limits, without unit or level ("0.007 to 0.027"), or empty. */
+    public String limits(Quantity q) {
+        Interval ci = q.interval();
+        if (ci == null) {
+            return "";
+        }
+        if (q.kind().roundedByInterval()) {
+            int d = uncertaintyDecimals(ci);
+            return fixed(ci.low(), d) + " to " + fixed(ci.high(), d);
+        }
+        return significant(ci.low(), DEFAULT_SIGNIFICANT) + " to " + significant(ci.high(), DEFAULT_SIGNIFICANT);
     }
 
     /**
@@ -78,23 +92,6 @@ public final class DisplayFormatter {
 
     static String withSpace(String unit) {
         return unit == null || unit.isEmpty() ? "" : " " + unit;
-    }
-
-    private static String baseName(String name) {
-        int colon = name.indexOf(':');
-        return colon < 0 ? name : name.substring(0, colon);
-    }
-
-    private static boolean isCount(String base) {
-        return base.equals("n") || base.endsWith("_count") || base.endsWith("_df");
-    }
-
-    private static boolean isP(String base) {
-        return base.equals("p") || base.endsWith("_p");
-    }
-
-    private static boolean isCorrelation(String base) {
-        return base.equals("r") || base.equals("r_squared") || base.equals("adjusted_r_squared");
     }
 
     /** Four decimals; more (up to eight) when four would show a value below 1 as 1.0000. */
@@ -127,21 +124,12 @@ public final class DisplayFormatter {
 
     /** Decimal places that give the interval's half-width two significant figures (GUM practice). */
     static int uncertaintyDecimals(Interval ci) {
-        double half = (ci.high() - ci.low()) / 2;
-        if (half <= 0) {
-            return DEFAULT_SIGNIFICANT;
-        }
-        return Math.min(12, decimalsFor(half, UNCERTAINTY_SIGNIFICANT));
+        return Rounding.intervalDecimals(ci).orElse(DEFAULT_SIGNIFICANT);
     }
 
     /** Decimal places for {@code sig} significant figures; negative means rounding to tens, hundreds… */
     static int decimalsFor(double v, int sig) {
-        if (v == 0) {
-            return sig - 1;
-        }
-        BigDecimal rounded = new BigDecimal(Math.abs(v)).round(new MathContext(sig, RoundingMode.HALF_UP));
-        int exponent = rounded.precision() - rounded.scale() - 1;
-        return sig - 1 - exponent;
+        return Rounding.decimalsFor(v, sig);
     }
 
     /**
@@ -157,16 +145,11 @@ public final class DisplayFormatter {
     }
 
     static String fixed(double v, int decimals) {
-        BigDecimal b = new BigDecimal(v).setScale(decimals, RoundingMode.HALF_UP);
-        if (decimals < 0) {
-            b = b.setScale(0, RoundingMode.UNNECESSARY);
-        }
-        String s = b.abs().toPlainString();
-        return b.signum() < 0 ? MINUS + s : s;
+        return Rounding.plain(Rounding.toDecimals(v, decimals));
     }
 
     static String scientific(double v, int sig) {
-        BigDecimal b = new BigDecimal(v).round(new MathContext(sig, RoundingMode.HALF_UP));
+        BigDecimal b = Rounding.toSignificant(v, sig);
         int exponent = b.precision() - b.scale() - 1;
         BigDecimal mantissa = b.movePointLeft(exponent).setScale(sig - 1, RoundingMode.HALF_UP);
         String m = mantissa.abs().toPlainString();

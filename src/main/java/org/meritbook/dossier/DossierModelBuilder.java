@@ -80,7 +80,7 @@ final class DossierModelBuilder {
             SectionResult r = byId.get(cell.id());
             SectionView view = r == null
                     ? new SectionView(number, anchor, cell.id(), cell.kind().keyword(), cell.title(), before, after,
-                    List.of(), SectionView.TableView.none(), List.of(),
+                    List.of(), SectionView.TableView.none(), List.of(), List.of(),
                     List.of(), List.of(), List.of("This analysis produced no result."), false)
                     : sectionBuilder.build(number, anchor, r, before, after, results.supporting(r));
             sections.add(view);

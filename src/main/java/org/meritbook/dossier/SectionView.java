@@ -14,6 +14,7 @@ import java.util.List;
  * @param narrativeAfter  narrative following the cell before the next heading (may be empty)
  * @param settings        statistical choices in force
  * @param table           the data table; {@code present} false when the analysis has none
+ * @param tables          further tables after it (ANOVA, per-level summaries, outlier tests)
  * @param figures         figures in order
  * @param results         results other than those already shown in the table
  * @param verdicts        acceptance verdicts
@@ -22,10 +23,11 @@ import java.util.List;
  */
 public record SectionView(String number, String anchor, String id, String kind, String title, Markup narrativeBefore,
                           Markup narrativeAfter, List<SettingRow> settings, TableView table,
-                          List<FigureView> figures, List<ResultRow> results, List<VerdictRow> verdicts,
+                          List<ResultTableView> tables, List<FigureView> figures, List<ResultRow> results, List<VerdictRow> verdicts,
                           List<String> warnings, boolean available) {
     public SectionView {
         settings = List.copyOf(settings);
+        tables = List.copyOf(tables);
         figures = List.copyOf(figures);
         results = List.copyOf(results);
         verdicts = List.copyOf(verdicts);
@@ -95,6 +97,41 @@ public record SectionView(String number, String anchor, String id, String kind, 
      */
     public record CellView(String text, String address, boolean computed, boolean showAddress, String tooltip,
                            String stepAnchor) {
+    }
+
+    /**
+     * A table of results, numbered after the data table.
+     *
+     * @param anchor  link target
+     * @param caption e.g. "Table 4.2 One-way ANOVA by day"
+     * @param columns the headers with their units
+     * @param rows    the rows
+     * @param note    a line below the table, or empty
+     * @param wide    true when the table has many columns (a smaller font keeps it within the page)
+     */
+    public record ResultTableView(String anchor, String caption, List<ResultColumn> columns,
+                                  List<List<ResultCell>> rows, String note, boolean wide) {
+        public ResultTableView {
+            columns = List.copyOf(columns);
+            rows = rows.stream().map(List::copyOf).toList();
+        }
+    }
+
+    /**
+     * @param name    the header
+     * @param unit    the unit in parentheses, e.g. "(mg/L)", or empty
+     * @param numeric true when the column holds numbers (aligned right)
+     */
+    public record ResultColumn(String name, String unit, boolean numeric) {
+    }
+
+    /**
+     * @param text       the formatted value or the text
+     * @param numeric    true for a number
+     * @param tooltip    the trail step of a number, or empty
+     * @param stepAnchor link to that step, or empty
+     */
+    public record ResultCell(String text, boolean numeric, String tooltip, String stepAnchor) {
     }
 
     public record Exclusion(String mark, String row, String reason) {

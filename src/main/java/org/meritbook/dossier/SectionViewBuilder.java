@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Set;
 import org.meritbook.analysis.DataTable;
 import org.meritbook.analysis.Quantity;
+import org.meritbook.analysis.ResultTable;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
 import org.meritbook.analysis.TableCell;
@@ -14,18 +15,24 @@ import org.meritbook.dossier.SectionView.CellView;
 import org.meritbook.dossier.SectionView.ColumnView;
 import org.meritbook.dossier.SectionView.Exclusion;
 import org.meritbook.dossier.SectionView.FigureView;
+import org.meritbook.dossier.SectionView.ResultCell;
+import org.meritbook.dossier.SectionView.ResultColumn;
 import org.meritbook.dossier.SectionView.ResultRow;
+import org.meritbook.dossier.SectionView.ResultTableView;
 import org.meritbook.dossier.SectionView.SettingRow;
 import org.meritbook.dossier.SectionView.TableRow;
 import org.meritbook.dossier.SectionView.TableView;
 import org.meritbook.dossier.SectionView.VerdictRow;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.figures.SvgChartRenderer;
+import org.meritbook.trail.Step;
 
 /** Builds one {@link SectionView} from a section result: table, figures, results, verdicts, warnings. */
 final class SectionViewBuilder {
     /** A column name up to this long stays on one line in the header; a longer one wraps at its spaces. */
     private static final int SHORT_HEADER = 16;
+    /** A result table with more columns than this is set in a smaller font to keep within A4. */
+    private static final int WIDE_TABLE = 6;
     private final DisplayFormatter format;
     private final SvgChartRenderer charts;
     private final TrailViewBuilder trail;
@@ -44,6 +51,11 @@ final class SectionViewBuilder {
     SectionView build(String number, String anchor, SectionResult r, Markup before, Markup after, boolean supporting) {
         Set<String> inTable = new HashSet<>();
         TableView table = table(number, r, inTable);
+        List<ResultTableView> tables = new ArrayList<>();
+        for (ResultTable t : r.tables()) {
+            int n = tables.size() + (table.present() ? 2 : 1);
+            tables.add(resultTable(number, anchor + "-table-" + n, n, r, t));
+        }
         List<FigureView> figures = new ArrayList<>();
         int f = 0;
         for (FigureSpec spec : r.figures()) {
@@ -70,7 +82,7 @@ final class SectionViewBuilder {
             settings.add(new SettingRow(s.label(), s.value()));
         }
         return new SectionView(number, anchor, r.id(), r.kind().keyword(), title(r), before, after, settings, table,
-                figures, results, verdicts, r.warnings(), true);
+                tables, figures, results, verdicts, r.warnings(), true);
     }
 
     static String title(SectionResult r) {
@@ -124,6 +136,56 @@ final class SectionViewBuilder {
         }
         caption.append(exclusions.isEmpty() ? "." : ". Rows marked E are excluded from the statistics.");
         return new TableView(true, caption.toString(), t.headers(), columns, grid.compact(), labels, rows, exclusions);
+    }
+
+    /** A table of results: every number formatted by its kind (a quantity as itself) and linked to its step. */
+    private ResultTableView resultTable(String number, String anchor, int n, SectionResult r, ResultTable t) {
+        List<ResultColumn> columns = new ArrayList<>();
+        boolean[] numeric = new boolean[t.columns().size()];
+        for (List<ResultTable.Cell> row : t.rows()) {
+            for (int j = 0; j < row.size(); j++) {
+                numeric[j] |= row.get(j).show() != ResultTable.Show.TEXT;
+            }
+        }
+        for (int j = 0; j < t.columns().size(); j++) {
+            ResultTable.Column c = t.columns().get(j);
+                        String unit = c.unit() == null ? "" : c.unit().startsWith("(") ? c.unit() : "(" + c.unit() + ")";
+            columns.add(new ResultColumn(c.name(), unit, numeric[j]));
+        }
+        List<List<ResultCell>> rows = new ArrayList<>();
+        for (List<ResultTable.Cell> row : t.rows()) {
+            List<ResultCell> cells = new ArrayList<>();
+            for (ResultTable.Cell c : row) {
+                cells.add(resultCell(r, c));
+            }
+            rows.add(cells);
+        }
+        return new ResultTableView(anchor, "Table " + number + "." + n + " " + t.title(), columns, rows, t.note(),
+                columns.size() > WIDE_TABLE);
+    }
+
+    private ResultCell resultCell(SectionResult r, ResultTable.Cell c) {
+        return switch (c.show()) {
+            case TEXT -> new ResultCell(c.text(), false, "", "");
+            case QUANTITY -> {
+                Quantity q = r.quantity(c.ref()).orElseThrow();
+                yield linked(format.quantity(q).value(), q.stepId());
+            }
+            case INTERVAL -> {
+                Quantity q = r.quantity(c.ref()).orElseThrow();
+                yield linked(format.limits(q), q.stepId());
+            }
+            case STEP -> {
+                Step step = r.steps().stream().filter(s -> s.id().equals(c.ref())).findFirst().orElseThrow();
+                double v = c.ownValue() ? c.value() : step.value();
+                yield linked(format.number(v, null, null, c.kind()).value(), step.id());
+            }
+        };
+    }
+
+    private ResultCell linked(String text, String stepId) {
+        TrailViewBuilder.StepRef ref = trail.ref(stepId);
+        return new ResultCell(text, true, ref.number().isEmpty() ? "" : "trail step " + ref.number(), ref.anchor());
     }
 
     private CellView cell(SectionResult r, TableCell c, boolean showAddress, Set<String> inTable) {

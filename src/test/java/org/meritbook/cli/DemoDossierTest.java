@@ -14,6 +14,7 @@ import java.util.List;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.dossier.DisplayFormatter;
 import org.meritbook.dossier.PdfAssertions;
@@ -82,7 +83,7 @@ class DemoDossierTest {
                         q.get("unit").isNull() ? null : q.get("unit").asText(), q.get("step").asText(),
                         ci == null ? null : new Interval(ci.get("low").asDouble(), ci.get("high").asDouble(),
                                 ci.get("level").asDouble()),
-                        false);
+                        false, kindOf(name, q.get("unit").isNull() ? null : q.get("unit").asText()));
                 String shown = formatter.quantity(quantity).withUnit();
                 checked++;
                 if (!text.contains(shown)) {
@@ -96,5 +97,17 @@ class DemoDossierTest {
         assertTrue(text.contains("Calibration!D23") && text.contains("Air bubble in the sample loop"),
                 "the exclusion with its cell and reason");
         assertTrue(text.contains("support, and do not replace"), "the caution");
+    }
+
+    /** results.json does not carry a number's kind: the kinds the analyses give these names (docs/dossier.md). */
+    private static NumberKind kindOf(String name, String unit) {
+        String base = name.contains(":") ? name.substring(0, name.indexOf(':')) : name;
+        if (base.equals("n") || base.endsWith("_df")) {
+            return NumberKind.COUNT;
+        }
+        if (base.equals("r") || base.equals("r_squared")) {
+            return NumberKind.CORRELATION;
+        }
+        return base.endsWith("_p") ? NumberKind.P_VALUE : NumberKind.ofUnit(unit);
     }
 }

@@ -14,6 +14,7 @@ import java.util.List;
 import java.util.Map;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.meritbook.analysis.DataTable;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
@@ -160,7 +161,7 @@ public final class DossierFixtures {
             }
         }
         xy.add(StepInput.text("weighting", "none", "notebook line 24"));
-        q.add(new Quantity("n", "Number of points used", m, null, "calibration.n", null, false));
+        q.add(new Quantity("n", "Number of points used", m, null, "calibration.n", null, false, NumberKind.COUNT));
         steps.add(new Step("calibration.n", "Number of points used", "n = count of points not excluded",
                 List.of(StepInput.number("points read", n, null, "Calibration!A4:C25"),
                         StepInput.number("excluded", 1, null, "notebook line 26")), m, null, null));
@@ -180,13 +181,13 @@ public final class DossierFixtures {
                 List.of(StepInput.number("s(y/x)", s, yUnit, "calibration.residual_sd"),
                         StepInput.number("Σ(x−x̄)²", sxx, "(mg/L)²", "calibration.slope")), seB, yUnit + " per mg/L",
                 null));
-        q.add(new Quantity("r", "Correlation coefficient r", r, null, "calibration.r", null, false));
+        q.add(new Quantity("r", "Correlation coefficient r", r, null, "calibration.r", null, false, NumberKind.CORRELATION));
         steps.add(new Step("calibration.r", "Correlation coefficient r", "r = Σ(x−x̄)(y−ȳ) / √(Σ(x−x̄)²·Σ(y−ȳ)²)",
                 List.of(StepInput.number("Σ(x−x̄)(y−ȳ)", sxy, null, "calibration.slope"),
                         StepInput.number("Σ(x−x̄)²", sxx, null, "calibration.slope"),
                         StepInput.number("Σ(y−ȳ)²", syy, null, "calibration.slope")), r, null, null));
         q.add(new Quantity("r_squared", "Coefficient of determination r²", r * r, null, "calibration.r_squared",
-                null, true));
+                null, true, NumberKind.CORRELATION));
         steps.add(new Step("calibration.r_squared", "Coefficient of determination r²", "r² = r·r",
                 List.of(StepInput.number("r", r, null, "calibration.r")), r * r, null, null));
         q.add(new Quantity("residual_sd", "Residual standard deviation s(y/x)", s, yUnit, "calibration.residual_sd",

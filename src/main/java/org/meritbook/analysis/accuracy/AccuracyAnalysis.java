@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Objects;
 import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.ResultTable;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.study.AnalysisCell;
@@ -27,6 +28,8 @@ public final class AccuracyAnalysis implements Analysis {
     static final double TARGET = 100.0;
     /** The mean recovery's name: the figure draws the profile's limits on it. */
     static final String RECOVERY = "recovery_percent";
+    /** What a table shows for a value the level's data cannot give. */
+    private static final String NOT_EVALUABLE = "—";
 
     @Override
     public SectionResult run(AnalysisCell cell, AnalysisContext context) {
@@ -49,9 +52,35 @@ public final class AccuracyAnalysis implements Analysis {
             LevelSummary.record(section, ":" + level, "level " + level, recoveries.used(data.usedAt(level)));
         }
         LevelSummary.record(section, "", "all levels", recoveries.used(data.used()));
+        levelTable(section, data.levels());
         AccuracyFigures.addTo(section, cell.id(), data, recoveries,
                 context.bands().on(AnalysisKind.ACCURACY, null, RECOVERY));
         return section.build(AccuracyTable.of(data, recoveries, readBack, section::hasQuantity));
+    }
+
+    /** One row per level and one for all levels, every value a quantity the level summaries recorded. */
+    private static void levelTable(SectionBuilder section, List<String> levels) {
+        List<List<ResultTable.Cell>> rows = new ArrayList<>();
+        for (String level : levels) {
+            rows.add(levelRow(section, level, ":" + level));
+        }
+        rows.add(levelRow(section, "All levels", ""));
+        String none = NOT_EVALUABLE;
+        boolean dashes = rows.stream().flatMap(List::stream).anyMatch(c -> none.equals(c.text()));
+        section.table(new ResultTable("Recovery by level", List.of(ResultTable.Column.of("Level"),
+                ResultTable.Column.of("n"), new ResultTable.Column("Mean recovery", "%"), new ResultTable.Column("SD", "%"),
+                new ResultTable.Column("95 % CI of the mean", "%"), new ResultTable.Column("Mean error", "%")), rows,
+                dashes ? none + " not evaluable: one result, or all recoveries equal (see the warnings)." : ""));
+    }
+
+    private static List<ResultTable.Cell> levelRow(SectionBuilder section, String label, String suffix) {
+        ResultTable.Cell none = ResultTable.Cell.text(NOT_EVALUABLE);
+        return List.of(ResultTable.Cell.text(label), ResultTable.Cell.quantity("n" + suffix),
+                ResultTable.Cell.quantity("recovery_percent" + suffix),
+                section.hasQuantity("recovery_sd" + suffix) ? ResultTable.Cell.quantity("recovery_sd" + suffix) : none,
+                section.hasQuantity("recovery_ci_low" + suffix) ? ResultTable.Cell.interval("recovery_percent" + suffix)
+                        : none,
+                ResultTable.Cell.quantity("error_percent" + suffix));
     }
 
     /** A recovery is a ratio of like quantities: say so when the columns state different units. */

@@ -3,6 +3,7 @@ package org.meritbook.analysis.accuracy;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.Interval;
@@ -34,7 +35,7 @@ final class LevelSummary {
         }
         int n = r.length;
         String nId = section.quantity(QuantityDraft.of("n" + suffix, "Number of results (" + what + ")", "n", rows, n,
-                null));
+                null).as(NumberKind.COUNT));
         if (n == 1) {
             String mean = section.quantity(QuantityDraft.of("recovery_percent" + suffix, "Recovery (" + what + ")",
                     "mean(R) = R (one result)", rows, r[0], "%").inSummary());
@@ -76,7 +77,7 @@ final class LevelSummary {
                         section.ref("n", nId)), test.t(), null, T_TEST);
         section.quantity(QuantityDraft.of("bias_p" + suffix,
                 "p of the t test: mean recovery differs from 100 % (" + what + ")",
-                "p = P(|T(n − 1)| ≥ |t|)", List.of(section.ref("t", tStat), section.ref("n", nId)), test.p(), null)
+                "p = P(|T(n − 1)| ≥ |t|)", List.of(section.ref("t", tStat), section.ref("n", nId)), test.p(), null).as(NumberKind.P_VALUE)
                 .withMethod(T_TEST));
         if (test.p() < 1 - AccuracyAnalysis.LEVEL) {
             section.warning(String.format(Locale.ROOT, "Recovery, %s: the mean recovery differs significantly "

@@ -1,7 +1,10 @@
 package org.meritbook.analysis.calibration;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.meritbook.analysis.NumberKind;
+import org.meritbook.analysis.ResultTable;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.regression.LackOfFit;
@@ -9,9 +12,9 @@ import org.meritbook.stats.regression.RegressionAnova;
 import org.meritbook.trail.StepInput;
 
 /**
- * The regression ANOVA table as quantities (a section has one data table, so the rows are trail
- * steps): regression, residual, lack of fit and pure error where levels are replicated, total; df,
- * SS, MS, F, p. Sums of squares are on the fit's weights, which average 1.
+ * The regression ANOVA table: regression, residual, lack of fit and pure error where levels are
+ * replicated, total; df, SS, MS, F, p, each a quantity with its trail step, and the section's table
+ * of them. Sums of squares are on the fit's weights, which average 1.
  */
 final class AnovaTrail {
     private static final String METHOD = "regression ANOVA; Draper & Smith, Applied Regression Analysis, §1.3, §2.1, ch. 9";
@@ -45,10 +48,10 @@ final class AnovaTrail {
                 "MS_res = SS_res / df_res = s²(y/x)", List.of(section.ref("SS_res", resSs), section.ref("df_res", resDf)),
                 a.msResidual(), ss));
         String f = section.quantity(QuantityDraft.of("anova_regression_f", "ANOVA: F statistic of the regression",
-                "F = MS_reg / MS_res", List.of(section.ref("MS_reg", regMs), section.ref("MS_res", resMs)), a.f(), null));
+                "F = MS_reg / MS_res", List.of(section.ref("MS_reg", regMs), section.ref("MS_res", resMs)), a.f(), null).as(NumberKind.STATISTIC));
         section.quantity(QuantityDraft.of("anova_regression_p", "ANOVA: p-value of the regression",
                 "p = P(F(df_reg, df_res) > F)", List.of(section.ref("F", f), section.ref("df_reg", regDf),
-                        section.ref("df_res", resDf)), a.p(), null));
+                        section.ref("df_res", resDf)), a.p(), null).as(NumberKind.P_VALUE));
         if (a.lackOfFit().isPresent()) {
             LackOfFit l = a.lackOfFit().get();
             String lofDf = count(section, "anova_lack_of_fit_df", "ANOVA: lack-of-fit degrees of freedom",
@@ -72,10 +75,43 @@ final class AnovaTrail {
         section.quantity(QuantityDraft.of("anova_total_ss", "ANOVA: total sum of squares",
                 centred ? "SS_tot = Σwᵢ(yᵢ − ȳw)² = SS_reg + SS_res" : "SS_tot = Σwᵢyᵢ² = SS_reg + SS_res",
                 List.of(LineTrail.from("y, w", points)), a.ssTotal(), ss));
+        table(section, a.lackOfFit().isPresent(), ss);
+    }
+
+    /** The table of the quantities above; lack of fit and pure error split the residual when levels are replicated. */
+    private static void table(SectionBuilder section, boolean split, String ss) {
+        List<List<ResultTable.Cell>> rows = new ArrayList<>();
+        rows.add(row(section, "Regression", "regression", "anova_regression"));
+        rows.add(row(section, "Residual", "residual", null));
+        if (split) {
+            rows.add(row(section, "Lack of fit", "lack_of_fit", "lack_of_fit"));
+            rows.add(row(section, "Pure error", "pure_error", null));
+        }
+        rows.add(List.of(ResultTable.Cell.text("Total"), ResultTable.Cell.quantity("anova_total_ss"),
+                ResultTable.Cell.quantity("anova_total_df"), ResultTable.Cell.empty(), ResultTable.Cell.empty(),
+                ResultTable.Cell.empty()));
+        section.table(new ResultTable("Regression ANOVA", List.of(
+                ResultTable.Column.of("Source"), new ResultTable.Column("SS", ss), ResultTable.Column.of("df"),
+                new ResultTable.Column("MS", ss), ResultTable.Column.of("F"), ResultTable.Column.of("p")), rows,
+                (split ? "Lack of fit and pure error split the residual (levels are replicated). " : "")
+                        + "Sums of squares are on the fit's weights, scaled to average 1 (all 1 without weighting)."));
+    }
+
+    /**
+     * A row of anova_&lt;part&gt;_ss, _df and _ms and, when {@code test} is given and was evaluable,
+     * &lt;test&gt;_f and &lt;test&gt;_p.
+     */
+    private static List<ResultTable.Cell> row(SectionBuilder section, String source, String part, String test) {
+        boolean tested = test != null && section.hasQuantity(test + "_f");
+        return List.of(ResultTable.Cell.text(source), ResultTable.Cell.quantity("anova_" + part + "_ss"),
+                ResultTable.Cell.quantity("anova_" + part + "_df"), ResultTable.Cell.quantity("anova_" + part + "_ms"),
+                tested ? ResultTable.Cell.quantity(test + "_f") : ResultTable.Cell.empty(),
+                tested ? ResultTable.Cell.quantity(test + "_p") : ResultTable.Cell.empty());
     }
 
     private static String count(SectionBuilder section, String name, String label, String formula, int value,
                                 String points) {
-        return section.quantity(QuantityDraft.of(name, label, formula, List.of(LineTrail.from("n", points)), value, null));
+        return section.quantity(QuantityDraft.of(name, label, formula, List.of(LineTrail.from("n", points)), value, null)
+                .as(NumberKind.COUNT));
     }
 }

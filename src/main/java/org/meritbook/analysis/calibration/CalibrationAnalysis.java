@@ -10,6 +10,7 @@ import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.Attempt;
 import org.meritbook.analysis.InternalStandard;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.error.ErrorKey;
@@ -231,12 +232,12 @@ public final class CalibrationAnalysis implements Analysis {
             String label = used.get(i).label();
             String zId = section.quantity(SectionBuilder.QuantityDraft.of("standardized_residual:" + label,
                     "Standardized residual of " + label, "zᵢ = eᵢ·√wᵢ / s(y/x)",
-                    List.of(LineTrail.from("x, y, w", points), section.ref("s(y/x)", s)), z[i], null));
+                    List.of(LineTrail.from("x, y, w", points), section.ref("s(y/x)", s)), z[i], null).as(NumberKind.STATISTIC));
             if (Double.isFinite(r[i])) {
                 section.quantity(SectionBuilder.QuantityDraft.of("studentized_residual:" + label,
                         "Studentized residual of " + label, "rᵢ = zᵢ / √(1 − hᵢᵢ), hᵢᵢ = wᵢ(1/Σw + (xᵢ − x̄w)²/Sxx)",
                         List.of(section.ref("z", zId), StepInput.number("hᵢᵢ", h[i], null, "leverage, weighted")),
-                        r[i], null).withMethod("internally studentized residual; Draper & Smith, ch. 8"));
+                        r[i], null).as(NumberKind.STATISTIC).withMethod("internally studentized residual; Draper & Smith, ch. 8"));
             }
         }
     }

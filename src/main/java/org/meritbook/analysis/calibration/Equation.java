@@ -1,8 +1,8 @@
 package org.meritbook.analysis.calibration;
 
 import java.math.BigDecimal;
-import java.math.MathContext;
-import java.math.RoundingMode;
+import java.util.OptionalInt;
+import org.meritbook.analysis.Rounding;
 import org.meritbook.stats.Interval;
 import org.meritbook.stats.regression.LineFit;
 import org.meritbook.stats.regression.LineModel;
@@ -10,13 +10,13 @@ import org.meritbook.stats.regression.LineModel;
 /**
  * The calibration equation written out with the column names and units, e.g. "Peak area (mAU·s) =
  * 0.396 + 41.55 · Nominal (mg/L)". For the settings each coefficient is rounded as the dossier rounds a
- * quantity with an interval (the half-width to two significant figures, the value to the same
- * decimals, half up); the trail step carries every digit of the double.
+ * quantity with an interval ({@link Rounding}: the half-width to two significant figures, the value to the
+ * same decimals, half up); the trail step carries every digit of the double.
  */
 final class Equation {
     private static final String MINUS = "\u2212";
-    /** Significant figures of the half-width that set the rounding (as the dossier's formatter). */
-    private static final int HALF_WIDTH_SIGNIFICANT = 2;
+    /** Significant figures of a coefficient whose interval has no width. */
+    private static final int FALLBACK_SIGNIFICANT = 4;
 
     private Equation() {
     }
@@ -46,22 +46,13 @@ final class Equation {
     }
 
     private static String round(double value, Interval ci) {
-        double half = (ci.high() - ci.low()) / 2;
-        if (!(half > 0)) {
-            return plain(new BigDecimal(value).round(new MathContext(4, RoundingMode.HALF_UP)));
-        }
-        BigDecimal h = new BigDecimal(half).round(new MathContext(HALF_WIDTH_SIGNIFICANT, RoundingMode.HALF_UP));
-        int decimals = Math.min(12, HALF_WIDTH_SIGNIFICANT - 1 - (h.precision() - h.scale() - 1));
-        BigDecimal v = new BigDecimal(value).setScale(decimals, RoundingMode.HALF_UP);
-        if (decimals < 0) {
-            v = v.setScale(0, RoundingMode.UNNECESSARY);
-        }
-        return plain(v);
+        OptionalInt decimals = Rounding.intervalDecimals(ci);
+        return plain(decimals.isPresent() ? Rounding.toDecimals(value, decimals.getAsInt())
+                : Rounding.toSignificant(value, FALLBACK_SIGNIFICANT));
     }
 
     private static String plain(BigDecimal b) {
-        String s = b.abs().toPlainString();
-        return b.signum() < 0 ? MINUS + s : s;
+        return Rounding.plain(b);
     }
 
     private static String titled(String name, String unit) {

@@ -1,6 +1,7 @@
 package org.meritbook.analysis.calibration;
 
 import java.util.List;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.distributions.StudentT;
@@ -84,12 +85,12 @@ final class LineTrail {
             interceptTest(intercept, interceptSe);
             section.quantity(QuantityDraft.of("r", "Correlation coefficient r",
                     "r = Σwᵢ(xᵢ − x̄w)(yᵢ − ȳw) / √(Sxx · Σwᵢ(yᵢ − ȳw)²)",
-                    List.of(from("x, y, w", points), section.ref("Sxx", sxx)), fit.r(), null));
+                    List.of(from("x, y, w", points), section.ref("Sxx", sxx)), fit.r(), null).as(NumberKind.CORRELATION));
         }
         section.quantity(QuantityDraft.of("r_squared",
                 origin ? "Coefficient of determination r² (uncentred, through origin)" : "Coefficient of determination r²",
                 origin ? "r² = Σwᵢŷᵢ² / Σwᵢyᵢ²" : "r² = r·r",
-                List.of(from("x, y, w", points), section.ref("b", slope)), fit.rSquared(), null).inSummary());
+                List.of(from("x, y, w", points), section.ref("b", slope)), fit.rSquared(), null).as(NumberKind.CORRELATION).inSummary());
         section.step("equation", "Calibration equation, every digit (the value shown is the slope b): " + Equation.full(data, fit),
                 origin ? "y = b·x" : "y = a + b·x",
                 origin ? List.of(section.ref("b", slope)) : List.of(section.ref("a", intercept), section.ref("b", slope)),
@@ -111,10 +112,10 @@ final class LineTrail {
         }
         double t = fit.intercept() / fit.interceptSe();
         String tId = section.quantity(QuantityDraft.of("intercept_t", "t statistic of the intercept against 0",
-                "t = a / s(a)", List.of(section.ref("a", intercept), section.ref("s(a)", interceptSe)), t, null));
+                "t = a / s(a)", List.of(section.ref("a", intercept), section.ref("s(a)", interceptSe)), t, null).as(NumberKind.STATISTIC));
         double p = new StudentT(fit.degreesOfFreedom()).twoSidedP(t);
         section.quantity(QuantityDraft.of("intercept_p", "Intercept p-value (two-sided, against 0)",
-                "p = 2·P(T(n − 2) > |t|)", List.of(section.ref("t", tId)), p, null)
+                "p = 2·P(T(n − 2) > |t|)", List.of(section.ref("t", tId)), p, null).as(NumberKind.P_VALUE)
                 .withMethod("t test of the intercept; Miller & Miller, Statistics and Chemometrics for Analytical "
                         + "Chemistry, ch. 5 (from memory)"));
         if (p < LinearityChecks.ALPHA) {

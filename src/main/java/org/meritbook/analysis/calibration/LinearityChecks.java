@@ -3,6 +3,7 @@ package org.meritbook.analysis.calibration;
 import java.util.List;
 import java.util.Optional;
 import org.meritbook.analysis.Attempt;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.regression.LackOfFit;
@@ -75,9 +76,10 @@ final class LinearityChecks {
                         StepInput.number("SS_PE", t.ssPureError(), null, "computed"),
                         StepInput.number("df_LoF", t.lackOfFitDf(), null, "levels − parameters"),
                         StepInput.number("df_PE", t.pureErrorDf(), null, "n − levels")),
-                t.f(), null).withMethod("lack-of-fit test with pure error; Draper & Smith, Applied Regression Analysis, §2.1"));
+                t.f(), null).as(NumberKind.STATISTIC)
+                .withMethod("lack-of-fit test with pure error; Draper & Smith, Applied Regression Analysis, §2.1"));
         section.quantity(QuantityDraft.of("lack_of_fit_p", "Lack-of-fit p-value", "p = P(F(df_LoF, df_PE) > F)",
-                List.of(section.ref("F", f)), t.p(), null).inSummary());
+                List.of(section.ref("F", f)), t.p(), null).as(NumberKind.P_VALUE).inSummary());
         if (t.p() < ALPHA) {
             section.warning(String.format(java.util.Locale.ROOT,
                     "Significant lack of fit (p = %.3g < %.2f): the model does not describe the level means within "
@@ -108,9 +110,9 @@ final class LinearityChecks {
                         StepInput.number("SS_res,quadratic", t.ssResidualQuadratic(), null, "quadratic fit, same weights"),
                         StepInput.number("s(y/x),quadratic", t.residualSdQuadratic(), data.yUnit(), "quadratic fit"),
                         StepInput.number("df", t.df2(), null, "n − 3")),
-                t.f(), null).withMethod("Mandel's fitting test (ISO 8466-1)"));
+                t.f(), null).as(NumberKind.STATISTIC).withMethod("Mandel's fitting test (ISO 8466-1)"));
         section.quantity(QuantityDraft.of("mandel_p", "Mandel's test p-value", "p = P(F(1, n − 3) > F)",
-                List.of(section.ref("F", f)), t.p(), null).inSummary());
+                List.of(section.ref("F", f)), t.p(), null).as(NumberKind.P_VALUE).inSummary());
         if (line != null && t.p() < ALPHA) {
             section.warning(String.format(java.util.Locale.ROOT,
                     "Mandel's test: the quadratic model fits significantly better than the straight line (p = %.3g < %.2f);"
@@ -136,10 +138,10 @@ final class LinearityChecks {
         ShapiroWilk t = test.get();
         String w = section.quantity(QuantityDraft.of("shapiro_w", "Shapiro–Wilk W of the standardized residuals",
                 "W = (Σaᵢ·z₍ᵢ₎)² / Σ(zᵢ − z̄)², z = standardized residuals, a from Royston's approximation",
-                List.of(StepInput.text("z", "standardized residuals of the fit", points)), t.w(), null)
+                List.of(StepInput.text("z", "standardized residuals of the fit", points)), t.w(), null).as(NumberKind.STATISTIC)
                 .withMethod("Shapiro–Wilk test, Royston's algorithm (AS R94, 1995)"));
         section.quantity(QuantityDraft.of("shapiro_p", "Shapiro–Wilk p-value", "p from Royston's normalising transformation of W",
-                List.of(section.ref("W", w)), t.p(), null));
+                List.of(section.ref("W", w)), t.p(), null).as(NumberKind.P_VALUE));
         if (t.p() < ALPHA) {
             section.warning(String.format(java.util.Locale.ROOT,
                     "The residuals depart from normality (Shapiro–Wilk p = %.3g < %.2f): intervals and tests that assume "

@@ -2,6 +2,7 @@ package org.meritbook.analysis.calibration;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.regression.Weighting;
@@ -41,7 +42,7 @@ final class PointsStep {
             inputs.add(StepInput.text("reading " + block, decision, data.block().file().getFileName().toString()));
         }
         String id = section.quantity(QuantityDraft.of("n", "Number of calibration points in the fit",
-                "n = points in the range not excluded", inputs, n, null));
+                "n = points in the range not excluded", inputs, n, null).as(NumberKind.COUNT));
         if (replicates) {
             recordReplicateScale(section, data, id);
         } else if (weighting != Weighting.NONE) {

@@ -1,6 +1,7 @@
 package org.meritbook.analysis.calibration;
 
 import java.util.List;
+import org.meritbook.analysis.NumberKind;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.regression.QuadraticFit;
@@ -53,7 +54,7 @@ final class QuadraticTrail {
                 List.of(section.ref("s(y/x)", s), fromPoints.get(0)), fit.quadraticSe(), Units.perSquare(yUnit, xUnit)));
         section.quantity(QuantityDraft.of("r_squared", "Coefficient of determination r²",
                 "r² = 1 − Σwᵢ(yᵢ − ŷᵢ)² / Σwᵢ(yᵢ − ȳw)²", List.of(fromPoints.get(0), section.ref("s(y/x)", s)),
-                fit.rSquared(), null).inSummary());
+                fit.rSquared(), null).as(NumberKind.CORRELATION).inSummary());
         return new BackCalculation.Inversion("x̂ = the root of a + b·x + c·x² = y within the calibrated span",
                 List.of(section.ref("a", a), section.ref("b", b), section.ref("c", c)));
     }

@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.meritbook.analysis.MeasuredRows;
+import org.meritbook.analysis.NumberKind;
+import org.meritbook.analysis.ResultTable;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionBuilder.QuantityDraft;
 import org.meritbook.stats.UnusableDataException;
@@ -36,6 +38,8 @@ final class LevelTrail {
 
     /** The {@code horwitz:} unit of the results as a mass fraction, or null when no Horwitz ratio is asked for. */
     private final String horwitzUnit;
+    /** The rows of this level's outlier table, in the order the tests ran. */
+    private final List<List<ResultTable.Cell>> outliers = new ArrayList<>();
 
     LevelTrail(SectionBuilder section, PrecisionData data, PrecisionData.Level level, String horwitzUnit) {
         this.section = section;
@@ -63,6 +67,14 @@ final class LevelTrail {
         }
         if (horwitzUnit != null) {
             horwitz(summary.mean());
+        }
+        if (!outliers.isEmpty()) {
+            section.table(new ResultTable("Outlier tests" + of(), List.of(ResultTable.Column.of("Test"),
+                    ResultTable.Column.of("Suspect"), ResultTable.Column.of("Statistic"),
+                    ResultTable.Column.of("Critical value 5\u00a0%"), ResultTable.Column.of("Critical value 1\u00a0%"),
+                    ResultTable.Column.of("Result")), outliers,
+                    "A straggler lies between the 5 % and 1 % critical values, an outlier above the 1 % value "
+                            + "(ISO 5725-2 §7.3.2); flagged, never removed."));
         }
     }
 
@@ -93,7 +105,7 @@ final class LevelTrail {
                 "Horwitz, Kamps & Boyer (1980); Horwitz & Albert (2006)");
         section.quantity(QuantityDraft.of("horwitz_ratio" + suffix, "Horwitz ratio (HorRat)" + of(),
                 "HorRat = RSD / PRSD_R", List.of(section.ref(found.startsWith("intermediate") ? "RSD_I" : "%CV",
-                        section.stepId(found)), section.ref("PRSD_R", predicted)), h.ratio(), null)
+                        section.stepId(found)), section.ref("PRSD_R", predicted)), h.ratio(), null).as(NumberKind.RATIO)
                 .withMethod("HorRat on " + (found.startsWith("intermediate") ? "the intermediate-precision RSD"
                         : "the RSD of all results") + "; Horwitz & Albert, J. AOAC Int. 89 (2006)"));
     }
@@ -129,7 +141,7 @@ final class LevelTrail {
     private String summary(SampleSummary s, List<StepInput> groupMeans) {
         String n = section.quantity(QuantityDraft.of("n" + suffix, "Number of results" + of(), "n = number of results used",
                 List.of(StepInput.text("results", s.n() + " used rows" + (data.levelled() ? " of level " + level.label() : "")
-                        + " (excluded rows not counted)", data.rows().where())), s.n(), null));
+                        + " (excluded rows not counted)", data.rows().where())), s.n(), null).as(NumberKind.COUNT));
         List<StepInput> meanInputs = new ArrayList<>();
         String formula;
         if (groupMeans.isEmpty()) {
@@ -198,14 +210,49 @@ final class LevelTrail {
                 anova.msWithin(), sq, null);
         String f = section.quantity(QuantityDraft.of("anova_f" + suffix, "ANOVA F (" + groupName + ")" + of(),
                 "F = MS_between / MS_within", List.of(section.ref("MS_between", msB), section.ref("MS_within", msW)),
-                anova.f(), null));
+                anova.f(), null).as(NumberKind.STATISTIC));
         section.quantity(QuantityDraft.of("anova_p" + suffix, "ANOVA p (" + groupName + " effect)" + of(),
                 "p = P(F(k − 1, N − k) ≥ F)", List.of(section.ref("F", f),
                         StepInput.number("k − 1", anova.dfBetween(), null, ssB),
-                        StepInput.number("N − k", anova.dfWithin(), null, ssW)), anova.p(), null));
+                        StepInput.number("N − k", anova.dfWithin(), null, ssW)), anova.p(), null).as(NumberKind.P_VALUE));
+        anovaTable(anova, groupName, ssB, ssW, msB, msW, sq);
         components(VarianceComponents.of(anova), msB, msW, groupName);
         cochran(labels, groupName);
         grubbsOnMeans(anova, labels, groupName);
+    }
+
+    /** The one-way ANOVA table, every value a step or quantity of this level (the total's SS a step of its own). */
+    private void anovaTable(OneWayAnova anova, String groupName, String ssB, String ssW, String msB, String msW,
+                            String sq) {
+        int dfTotal = anova.dfBetween() + anova.dfWithin();
+        String ssT = section.step("ss_total" + suffix, "Total sum of squares" + of(),
+                "SS_total = Σᵢ Σⱼ (xᵢⱼ − x̄)² = SS_between + SS_within, df = N − 1 = " + dfTotal,
+                List.of(section.ref("SS_between", ssB), section.ref("SS_within", ssW)), anova.ssTotal(), sq, ISO_5725);
+        NumberKind measure = NumberKind.MEASURE;
+        List<List<ResultTable.Cell>> rows = List.of(
+                List.of(ResultTable.Cell.text("Between " + groupName + "s"), ResultTable.Cell.step(ssB, measure),
+                        ResultTable.Cell.inputOf(msB, anova.dfBetween(), NumberKind.COUNT),
+                        ResultTable.Cell.step(msB, measure), ResultTable.Cell.quantity("anova_f" + suffix),
+                        ResultTable.Cell.quantity("anova_p" + suffix)),
+                List.of(ResultTable.Cell.text("Within " + groupName + "s"), ResultTable.Cell.step(ssW, measure),
+                        ResultTable.Cell.inputOf(msW, anova.dfWithin(), NumberKind.COUNT),
+                        ResultTable.Cell.step(msW, measure), ResultTable.Cell.empty(), ResultTable.Cell.empty()),
+                List.of(ResultTable.Cell.text("Total"), ResultTable.Cell.step(ssT, measure),
+                        ResultTable.Cell.inputOf(ssT, dfTotal, NumberKind.COUNT), ResultTable.Cell.empty(),
+                        ResultTable.Cell.empty(), ResultTable.Cell.empty()));
+        section.table(new ResultTable("One-way ANOVA by " + groupName + of(), List.of(ResultTable.Column.of("Source"),
+                new ResultTable.Column("SS", sq), ResultTable.Column.of("df"), new ResultTable.Column("MS", sq),
+                ResultTable.Column.of("F"), ResultTable.Column.of("p")), rows));
+    }
+
+    /** One row of the outlier table. */
+    private void outlierRow(String test, String suspect, String statisticName, String stepId, double critical5,
+                            double critical1, OutlierClass judgement) {
+        outliers.add(List.of(ResultTable.Cell.text(test), ResultTable.Cell.text(suspect),
+                ResultTable.Cell.quantity(statisticName), ResultTable.Cell.inputOf(stepId, critical5, NumberKind.STATISTIC),
+                ResultTable.Cell.inputOf(stepId, critical1, NumberKind.STATISTIC),
+                ResultTable.Cell.text(judgement == OutlierClass.CONSISTENT ? "not\u00a0flagged"
+                        : judgement.name().toLowerCase(Locale.ROOT))));
     }
 
     private void components(VarianceComponents vc, String msB, String msW, String groupName) {
@@ -283,7 +330,9 @@ final class LevelTrail {
                 List.of(StepInput.number("x", g.suspect(), unit, address), section.ref("x̄", section.stepId("mean" + suffix)),
                         section.ref("s", sd), StepInput.number("G crit (5 %)", g.critical5(), null, "α = 0.05"),
                         StepInput.number("G crit (1 %)", g.critical1(), null, "α = 0.01")),
-                g.statistic(), null).withMethod("Grubbs (1969), single two-sided; ISO 5725-2 §7.3.4"));
+                g.statistic(), null).as(NumberKind.STATISTIC).withMethod("Grubbs (1969), single two-sided; ISO 5725-2 §7.3.4"));
+        outlierRow("Grubbs, results", address + " (" + suspect.cell(0).raw() + ")", "grubbs_g" + suffix, id,
+                g.critical5(), g.critical1(), g.judgement());
         flag(g.judgement(), String.format(Locale.ROOT, "Grubbs' test flags result %s (%s) as a %s: G = %.3f against "
                 + "%.3f (5 %%) and %.3f (1 %%) (step %s).", address, suspect.cell(0).raw(), noun(g.judgement()),
                 g.statistic(), g.critical5(), g.critical1(), id));
@@ -313,7 +362,9 @@ final class LevelTrail {
                 List.of(section.ref("x̄(" + suspect + ")", section.stepId("group_mean" + suffix + "/" + suspect)),
                         StepInput.number("G crit (5 %)", g.critical5(), null, "α = 0.05, k = " + labels.size()),
                         StepInput.number("G crit (1 %)", g.critical1(), null, "α = 0.01, k = " + labels.size())),
-                g.statistic(), null).withMethod("Grubbs (1969) on cell means; ISO 5725-2 §7.3.4"));
+                g.statistic(), null).as(NumberKind.STATISTIC).withMethod("Grubbs (1969) on cell means; ISO 5725-2 §7.3.4"));
+        outlierRow("Grubbs, " + groupName + " means", groupName + " " + suspect, "grubbs_means_g" + suffix, id,
+                g.critical5(), g.critical1(), g.judgement());
         flag(g.judgement(), String.format(Locale.ROOT, "Grubbs' test on the %s means flags %s %s as a %s: G = %.3f "
                 + "against %.3f (5 %%) and %.3f (1 %%) (step %s).", groupName, groupName, suspect, noun(g.judgement()),
                 g.statistic(), g.critical5(), g.critical1(), id));
@@ -345,7 +396,9 @@ final class LevelTrail {
                         StepInput.number("C crit (5 %)", c.critical5(), null, "α = 0.05, n = " + c.groupSize()
                                 + (c.sizeRule() == CochranTest.GroupSizeRule.EQUAL ? "" : " (the most frequent size)")),
                         StepInput.number("C crit (1 %)", c.critical1(), null, "α = 0.01")),
-                c.statistic(), null).withMethod("Cochran's test; ISO 5725-2 §7.3.3"));
+                c.statistic(), null).as(NumberKind.STATISTIC).withMethod("Cochran's test; ISO 5725-2 §7.3.3"));
+        outlierRow("Cochran, " + groupName + " variances", groupName + " " + suspect, "cochran_c" + suffix, id,
+                c.critical5(), c.critical1(), c.judgement());
         flag(c.judgement(), String.format(Locale.ROOT, "Cochran's test flags the variance of %s %s as a %s: C = %.3f "
                 + "against %.3f (5 %%) and %.3f (1 %%) (step %s).", groupName, suspect, noun(c.judgement()),
                 c.statistic(), c.critical5(), c.critical1(), id));

@@ -1,7 +1,10 @@
 package org.meritbook.analysis.precision;
 
+import java.util.ArrayList;
+import java.util.List;
 import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.ResultTable;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.error.ErrorKey;
@@ -53,7 +56,34 @@ public final class PrecisionAnalysis implements Analysis {
         for (PrecisionData.Level level : data.levels()) {
             new LevelTrail(section, data, level, horwitz).record();
         }
+        if (data.levelled()) {
+            levelTable(section, data);
+        }
         PrecisionFigures.addTo(section, cell.id(), data);
         return section.build(PrecisionTable.of(data));
+    }
+
+    /** One row per level: n, mean, SD, %CV and the SD's interval, as the level's quantities give them. */
+    private static void levelTable(SectionBuilder section, PrecisionData data) {
+        List<List<ResultTable.Cell>> rows = new ArrayList<>();
+        for (PrecisionData.Level level : data.levels()) {
+            String l = ":" + level.label();
+            if (!section.hasQuantity("sd" + l)) {
+                continue; // fewer than 2 results: the level's warning says so
+            }
+            rows.add(List.of(ResultTable.Cell.text(level.label()), ResultTable.Cell.quantity("n" + l),
+                    ResultTable.Cell.quantity("mean" + l), ResultTable.Cell.quantity("sd" + l),
+                    section.hasQuantity("cv_percent" + l) ? ResultTable.Cell.quantity("cv_percent" + l)
+                            : ResultTable.Cell.text("not evaluable"),
+                    ResultTable.Cell.interval("sd" + l)));
+        }
+        if (rows.isEmpty()) {
+            return;
+        }
+        String unit = data.unit();
+        section.tableFirst(new ResultTable("Summary by level", List.of(ResultTable.Column.of("Level"),
+                ResultTable.Column.of("n"), new ResultTable.Column("Mean", unit), new ResultTable.Column("SD", unit),
+                new ResultTable.Column("%CV", "%"), new ResultTable.Column("95 % CI of the SD", unit)), rows,
+                "The SD's interval is the chi-square interval with n − 1 degrees of freedom."));
     }
 }

@@ -13,6 +13,7 @@ import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.Quantity;
+import org.meritbook.analysis.ResultTable;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
@@ -386,5 +387,32 @@ class AccuracyAnalysisTest {
     void aCalibrationBelowTheCellIsAnError() {
         InputException e = assertThrows(InputException.class, () -> run("calibration: later\n", known()));
         assertEquals(ErrorKey.UNKNOWN_REFERENCE, e.key());
+    }
+
+    @Test
+    void theRecoveryByLevelTableGivesEachLevelsSummaryFromItsQuantities() {
+        SectionResult s = run("", known());
+        ResultTable t = s.tables().stream().filter(x -> x.title().equals("Recovery by level")).findFirst()
+                .orElseThrow(() -> new AssertionError("no recovery table"));
+        assertEquals(List.of("Level", "n", "Mean recovery", "SD", "95 % CI of the mean", "Mean error"),
+                t.columns().stream().map(ResultTable.Column::name).toList());
+        java.util.Map<String, List<ResultTable.Cell>> rows = new java.util.HashMap<>();
+        t.rows().forEach(r -> rows.put(r.get(0).text(), r));
+        assertEquals(Set.of("10", "50", "100", "All levels"), rows.keySet());
+        // R 4.2.2, as in recoveryAgainstKnownValuesMatchesR (src/test/resources/accuracy/known-recovery.R)
+        List<ResultTable.Cell> ten = rows.get("10");
+        assertEquals(4, q(s, ten.get(1).ref()));
+        assertEquals(100.5, q(s, ten.get(2).ref()), 1e-12);
+        assertEquals(3.1091263510296, q(s, ten.get(3).ref()), 1e-12);
+        assertEquals(ResultTable.Show.INTERVAL, ten.get(4).show());
+        assertEquals(95.5526861657528, s.quantity(ten.get(4).ref()).orElseThrow().interval().low(), 1e-10);
+        assertEquals(0.5, q(s, ten.get(5).ref()), 1e-12);
+        List<ResultTable.Cell> all = rows.get("All levels");
+        assertEquals(8, q(s, all.get(1).ref()));
+        assertEquals(100.1375, q(s, all.get(2).ref()), 1e-12);
+        // one result at 100: its SD and interval are not evaluable, shown as a dash
+        assertEquals("—", rows.get("100").get(3).text());
+        assertEquals("—", rows.get("100").get(4).text());
+        assertEquals(101.5, q(s, rows.get("100").get(2).ref()), 1e-12);
     }
 }

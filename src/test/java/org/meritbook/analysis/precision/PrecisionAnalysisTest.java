@@ -45,10 +45,10 @@ import org.meritbook.workbook.DataBlock;
  */
 class PrecisionAnalysisTest {
     private static final Path FILE = Path.of("runs.xlsx");
-    private static final String[] GROUPS = {"A", "A", "A", "B", "B", "C", "C", "C", "C"};
-    private static final String[] VALUES = {"10.1", "10.5", "9.7", "10.2", "9.8", "10.4", "9.9", "10.0", "10.3"};
+    static final String[] GROUPS = {"A", "A", "A", "B", "B", "C", "C", "C", "C"};
+    static final String[] VALUES = {"10.1", "10.5", "9.7", "10.2", "9.8", "10.4", "9.9", "10.0", "10.3"};
 
-    private static String notebook(String options) {
+    static String notebook(String options) {
         return """
                 ---
                 title: Test study
@@ -66,7 +66,7 @@ class PrecisionAnalysisTest {
     }
 
     /** Columns Run (A), Result in mg/kg (B), Level (C); header in row 1, data from row 2. */
-    private static DataBlock block(String[] groups, String[] values, String[] levels) {
+    static DataBlock block(String[] groups, String[] values, String[] levels) {
         List<CellValue> g = new ArrayList<>();
         List<CellValue> v = new ArrayList<>();
         List<CellValue> l = new ArrayList<>();
@@ -80,7 +80,7 @@ class PrecisionAnalysisTest {
                         new Column("Level", "Level", null, "C", l)), List.of());
     }
 
-    private static DataBlock block(String[] groups, String[] values) {
+    static DataBlock block(String[] groups, String[] values) {
         String[] levels = new String[values.length];
         java.util.Arrays.fill(levels, "L1");
         return block(groups, values, levels);
