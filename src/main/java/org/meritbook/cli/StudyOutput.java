@@ -1,30 +1,17 @@
 package org.meritbook.cli;
 
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Collectors;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.criteria.Verdict;
 import org.meritbook.dossier.DisplayFormatter;
-import org.meritbook.dossier.DossierRenderer;
-import org.meritbook.dossier.DossierWriter;
-import org.meritbook.dossier.RenderedDossier;
+import org.meritbook.issuing.RevisionIssue;
 import org.meritbook.pipeline.StudyFolder;
 import org.meritbook.pipeline.StudyResults;
-import org.meritbook.pipeline.StudyRunner;
-import org.meritbook.revision.InputFile;
-import org.meritbook.study.Study;
-import org.meritbook.study.StudyParser;
-import org.meritbook.revision.PreviousRevisions;
-import org.meritbook.revision.ResultsJson;
-import org.meritbook.revision.RevisionContext;
-import org.meritbook.trail.TrailMarkdown;
-import org.meritbook.trail.TrailSection;
 
 /** Shared by {@code run} and {@code demo}: run a notebook and write its outputs into out/&lt;study&gt;/. */
 final class StudyOutput {
@@ -38,26 +25,15 @@ final class StudyOutput {
      * runs of one study at the same time cannot both issue the same revision.
      */
     static int runAndWrite(Path notebook, OutputOptions options, PrintWriter out) {
-        Study study = StudyParser.parse(notebook);
-        study.frontMatter().requireFilledIn(); // issuing a dossier: nothing left to fill in
-        StudyResults results = StudyRunner.withBuiltInAnalyses().run(study);
-        String stem = baseName(notebook);
-        StudyFolder folder = new StudyFolder(options.out.resolve(stem));
-        StudyFolder.Published published;
-        List<String> cleaned;
-        try (StudyFolder.Lock lock = folder.lock(() -> {
-            out.println("meritbook: waiting for another run that is publishing into " + folder.path());
-            out.flush();
-        })) {
-            cleaned = lock.cleanUp();
-            RevisionContext revisions = PreviousRevisions.find(folder.path(), stem, results);
-            byte[] json = ResultsJson.toBytes(results, revisions);
-            RenderedDossier dossier = new DossierRenderer(Optional.ofNullable(options.templates))
-                    .render(results, json, revisions);
-            Map<String, byte[]> files = DossierWriter.outputSet(DossierWriter.baseName(results.study()), dossier, json,
-                    trail(results).getBytes(StandardCharsets.UTF_8));
-            published = lock.publish(results.study().frontMatter().revision(), files, options.force);
-        }
+        Path folder = options.out.resolve(baseName(notebook));
+        RevisionIssue.Issued issued = RevisionIssue.issue(notebook, options.out, Optional.ofNullable(options.templates),
+                options.force, () -> {
+                    out.println("meritbook: waiting for another run that is publishing into " + folder);
+                    out.flush();
+                });
+        StudyResults results = issued.results();
+        StudyFolder.Published published = issued.published();
+        List<String> cleaned = issued.cleaned();
         out.println("meritbook: " + results.study().frontMatter().title() + ", revision "
                 + results.study().frontMatter().revision());
         cleaned.forEach(c -> out.println("  cleaned up: " + c));
@@ -101,18 +77,10 @@ final class StudyOutput {
     }
 
     static String baseName(Path notebook) {
-        String name = notebook.getFileName().toString();
-        return name.endsWith(".md") ? name.substring(0, name.length() - 3) : name;
+        return RevisionIssue.baseName(notebook);
     }
 
     static String trail(StudyResults results) {
-        List<String> preamble = new java.util.ArrayList<>();
-        preamble.add("Revision " + results.study().frontMatter().revision() + ".");
-        for (InputFile f : results.inputs()) {
-            preamble.add("Input `" + f.path() + "` (" + f.alias() + "): SHA-256 " + f.sha256());
-        }
-        List<TrailSection> sections = results.sections().stream()
-                .map(s -> new TrailSection(s.id(), s.title(), s.steps())).toList();
-        return TrailMarkdown.render(results.study().frontMatter().title(), preamble, sections);
+        return RevisionIssue.trail(results);
     }
 }

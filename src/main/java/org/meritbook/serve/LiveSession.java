@@ -1,9 +1,11 @@
 package org.meritbook.serve;
 
 import java.io.IOException;
+import java.net.InetAddress;
 import java.net.URI;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
 import org.meritbook.dossier.DossierRenderer;
@@ -27,11 +29,30 @@ public final class LiveSession implements AutoCloseable {
     }
 
     /**
-     * Starts serving on 127.0.0.1:port (0 for any free port) and runs the study once.
+     * Starts serving on 127.0.0.1:port (0 for any free port) and runs the study once; "Issue revision"
+     * publishes into {@code out/} beside the notebook.
      *
      * @param finished told each completed run (for the console); called on the worker thread
      */
     public static LiveSession start(Path notebook, int port, DossierRenderer renderer, Consumer<Snapshot> finished)
+            throws IOException {
+        Path out = notebook.toAbsolutePath().normalize().getParent().resolve("out");
+        return start(notebook, new Options(null, port, out, Optional.empty()), renderer, finished);
+    }
+
+    /**
+     * Where to listen and where "Issue revision" publishes.
+     *
+     * @param bind      the address to listen on, given explicitly; null for 127.0.0.1
+     * @param port      the port (0 for any free one)
+     * @param out       the output root, as {@code meritbook run -o}
+     * @param templates a lab's dossier templates for issuing, or empty
+     */
+    public record Options(InetAddress bind, int port, Path out, Optional<Path> templates) {
+    }
+
+    /** Starts serving with {@code options} and runs the study once. */
+    public static LiveSession start(Path notebook, Options options, DossierRenderer renderer, Consumer<Snapshot> finished)
             throws IOException {
         LiveStudy[] study = new LiveStudy[1];
         FileWatcher watcher = new FileWatcher(DEBOUNCE, () -> study[0].request());
@@ -41,7 +62,7 @@ public final class LiveSession implements AutoCloseable {
             // The notebook is watched from the start, so an edit during a failed first parse is seen.
             watcher.watch(Set.of(study[0].notebook()));
             watcher.start();
-            server = LiveServer.start(port, study[0]);
+            server = LiveServer.start(options.bind(), options.port(), study[0], options.out(), options.templates());
         } catch (IOException | RuntimeException e) {
             watcher.close();
             throw e;

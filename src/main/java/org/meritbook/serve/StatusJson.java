@@ -18,6 +18,11 @@ final class StatusJson {
     }
 
     static byte[] of(Snapshot s, String notebookName) {
+        return of(s, notebookName, null);
+    }
+
+    /** @param latest the latest published revision compared with the preview, or null before a run succeeds */
+    static byte[] of(Snapshot s, String notebookName, RevisionIssuer.Latest latest) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("run", s.run());
         root.put("state", s.state().word());
@@ -59,6 +64,19 @@ final class StatusJson {
         // The run whose dossier /dossier serves: the page reloads its view when this changes.
         root.put("dossier_run", issued == null ? 0 : issued.run());
         root.put("notebook", notebookName);
+        if (latest == null || issued == null) {
+            root.putNull("issued");
+        } else {
+            ObjectNode o = root.putObject("issued");
+            if (latest.revision() == 0) {
+                o.putNull("latest");
+            } else {
+                o.put("latest", latest.revision());
+            }
+            o.put("differs", latest.differs());
+            // The notebook's revision is already published: issuing the preview needs the next one.
+            o.put("needs_new_revision", latest.differs() && latest.revision() >= issued.revision());
+        }
         try {
             return MAPPER.writeValueAsString(root).getBytes(StandardCharsets.UTF_8);
         } catch (JsonProcessingException e) {
