@@ -133,7 +133,8 @@ public final class LiveStudy implements AutoCloseable {
             List<RevisionDiff.Change> changed = previous == null ? List.of()
                     : RevisionDiffer.diff("run " + previous.run(), previous.json(), "run " + run, json).results();
             issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json,
-                    Outcome.of(results), previous == null ? 0 : previous.run(), changed, PointIndex.of(results));
+                    Outcome.of(results), previous == null ? 0 : previous.run(), changed, PointIndex.of(results),
+                    Instant.now());
         } catch (InputException e) {
             e.problems().forEach(p -> problems.add(ShownProblem.of(p)));
         } catch (Throwable e) {

@@ -63,6 +63,7 @@ final class StatusJson {
         }
         // The run whose dossier /dossier serves: the page reloads its view when this changes.
         root.put("dossier_run", issued == null ? 0 : issued.run());
+        root.put("dossier_finished_at", issued == null || issued.at() == null ? null : issued.at().toString());
         root.put("notebook", notebookName);
         if (latest == null || issued == null) {
             root.putNull("issued");
