@@ -73,7 +73,8 @@ final class LivePage {
               <form method="dialog" id="exclude-form">
                 <h2 id="exclude-title">Exclude a point</h2>
                 <p class="dialog-what" id="exclude-what"></p>
-                <label>Reason <span class="req">required</span><textarea id="exclude-reason" rows="3" aria-required="true"></textarea></label>
+                <label>Reason <span class="req">required</span>
+                  <textarea id="exclude-reason" rows="3" aria-required="true"></textarea></label>
                 <div class="pair">
                   <label>By <input id="exclude-by" autocomplete="name"></label>
                   <label>On <input id="exclude-on" type="date"></label>
@@ -89,7 +90,8 @@ final class LivePage {
               <form method="dialog" id="issue-form">
                 <h2 id="issue-title">Issue a new revision</h2>
                 <p class="dialog-what" id="issue-what"></p>
-                <label>Reason for the revision <span class="req">required</span><textarea id="issue-reason" rows="3" aria-required="true"></textarea></label>
+                <label>Reason for the revision <span class="req">required</span>
+                  <textarea id="issue-reason" rows="3" aria-required="true"></textarea></label>
                 <p class="dialog-note">The notebook's <code>revision:</code> is raised and <code>revision-reason:</code> set; the dossier,
                   results.json and trail are written as <code>meritbook run</code> writes them.</p>
                 <p class="dialog-error" id="issue-error" role="alert"></p>
@@ -165,6 +167,11 @@ final class LivePage {
             .problems a.where { color: var(--bad); cursor: pointer; }
             .problems .key { color: var(--muted); font-size: 12px; margin-left: 8px; }
             .problems .line { margin: 1px 0 0; }
+            .problems .quote { display: flex; align-items: baseline; gap: 10px; margin: 3px 0 2px; }
+            .problems .quote-n { color: var(--muted); font-family: ui-monospace, "DejaVu Sans Mono", monospace; font-size: 12px; }
+            .problems .quote code { background: #fbe9e7; padding: 1px 8px; border-left: 3px solid var(--bad);
+                                  white-space: pre; }
+            .problems a.go { color: var(--accent); font-size: 12px; }
             .problems .line span { color: var(--muted); display: inline-block; min-width: 5.5em; }
             .changes { padding: 8px 18px 10px; background: #fbfbf6; border-bottom: 1px solid var(--rule); max-height: 28vh; overflow: auto; }
             .changes h2 { margin: 0 0 4px; font-size: 12px; font-weight: 600; color: var(--muted); text-transform: uppercase;
@@ -522,6 +529,20 @@ final class LivePage {
                 }
               }
 
+              function goToCell(id) {
+                const doc = frameDoc();
+                if (!doc) { return; }
+                doc.querySelectorAll('.mb-target').forEach((n) => n.classList.remove('mb-target'));
+                for (const sec of doc.querySelectorAll('.section')) {
+                  const head = sec.querySelector('.section-id');
+                  if (head && sectionOf(head) === id) {
+                    head.classList.add('mb-target');
+                    sec.scrollIntoView({ block: 'start' });
+                    return;
+                  }
+                }
+              }
+
               // ---- the page -----------------------------------------------------------------------------
 
               function problemItem(p) {
@@ -536,6 +557,17 @@ final class LivePage {
                 }
                 head.append(where, el(document, 'span', 'key', p.key));
                 li.append(head);
+                if (p.line) {
+                  const quote = el(document, 'div', 'quote');
+                  quote.append(el(document, 'span', 'quote-n', String(p.line)), el(document, 'code', '', p.line_text));
+                  if (p.cell) {
+                    const go = el(document, 'a', 'go', 'cell ' + p.cell + ' in the dossier');
+                    go.href = '#';
+                    go.addEventListener('click', (e) => { e.preventDefault(); goToCell(p.cell); });
+                    quote.append(go);
+                  }
+                  li.append(quote);
+                }
                 for (const [label, text] of [['expected', p.expected], ['found', p.found], ['fix', p.fix]]) {
                   const line = el(document, 'div', 'line');
                   line.append(el(document, 'span', '', label), document.createTextNode(text));

@@ -229,7 +229,7 @@ public final class LiveServer implements AutoCloseable {
             case "/live.css" -> send(exchange, 200, "text/css; charset=utf-8", LivePage.CSS);
             case "/live.js" -> send(exchange, 200, "text/javascript; charset=utf-8", LivePage.SCRIPT);
             case "/status" -> send(exchange, 200, JSON, StatusJson.of(s, study.notebook().getFileName().toString(),
-                    issued == null ? null : issuer.latest(issued.json())));
+                    issued == null ? null : issuer.latest(issued.json()), s.problems().isEmpty() ? List.of() : notebookLines()));
             case "/dossier" -> {
                 exchange.getResponseHeaders().set("Content-Security-Policy", DOSSIER_POLICY);
                 if (issued == null) {
@@ -247,6 +247,15 @@ public final class LiveServer implements AutoCloseable {
                 }
             }
             default -> send(exchange, 404, "text/plain; charset=utf-8", bytes("Not found.\n"));
+        }
+    }
+
+    /** The notebook as it is now, to quote a problem's line; none when it cannot be read. */
+    private List<String> notebookLines() {
+        try {
+            return java.nio.file.Files.readAllLines(study.notebook(), StandardCharsets.UTF_8);
+        } catch (IOException | java.io.UncheckedIOException e) {
+            return List.of(); // the problem itself is still shown, only its line is not quoted
         }
     }
 

@@ -54,9 +54,17 @@ final class RevisionIssuer {
     }
 
     private Compared compared;
+    /** Guards only the comparison, so the page's status is answered while an issue is being written. */
+    private final Object comparing = new Object();
 
     /** Compares the preview's results.json with the latest published revision's. */
-    synchronized Latest latest(byte[] previewJson) {
+    Latest latest(byte[] previewJson) {
+        synchronized (comparing) {
+            return compare(previewJson);
+        }
+    }
+
+    private Latest compare(byte[] previewJson) {
         Optional<Path> json = latestResults();
         if (json.isEmpty()) {
             return new Latest(0, true);

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 import org.meritbook.revision.RevisionDiff;
 
 /**
@@ -18,18 +19,23 @@ final class StatusJson {
     }
 
     static byte[] of(Snapshot s, String notebookName) {
-        return of(s, notebookName, null);
+        return of(s, notebookName, null, List.of());
     }
 
-    /** @param latest the latest published revision compared with the preview, or null before a run succeeds */
-    static byte[] of(Snapshot s, String notebookName, RevisionIssuer.Latest latest) {
+    /**
+     * @param latest the latest published revision compared with the preview, or null before a run succeeds
+     * @param lines  the notebook's lines now, to quote a problem's line and name its cell (empty: none quoted)
+     */
+    static byte[] of(Snapshot s, String notebookName, RevisionIssuer.Latest latest, List<String> lines) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("run", s.run());
         root.put("state", s.state().word());
         ArrayNode problems = root.putArray("problems");
         for (ShownProblem p : s.problems()) {
-            problems.addObject().put("key", p.key()).put("where", p.where()).put("expected", p.expected())
+            ObjectNode o = problems.addObject().put("key", p.key()).put("where", p.where()).put("expected", p.expected())
                     .put("found", p.found()).put("fix", p.fix()).put("message", p.message());
+            NotebookLines.of(p.where(), notebookName, lines).ifPresent(place -> o.put("line", place.line())
+                    .put("line_text", place.text()).put("cell", place.cell()));
         }
         if (s.elapsedMs() < 0) {
             root.putNull("elapsed_ms");
