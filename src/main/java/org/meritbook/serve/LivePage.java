@@ -731,6 +731,8 @@ final class LivePage {
                 notice(r.message + ' The study is re-running.', false);
               });
               byId('exclude-cancel').addEventListener('click', () => byId('exclude-dialog').close());
+              byId('exclude-reason').addEventListener('input', () => set('exclude-error', ''));
+              byId('issue-reason').addEventListener('input', () => set('issue-error', ''));
 
               byId('issue-open').addEventListener('click', () => {
                 set('issue-what', byId('issue-text').textContent);

@@ -151,12 +151,16 @@ public final class LiveServer implements AutoCloseable {
                 exchange.getResponseHeaders().add("Set-Cookie", cookieName() + "=" + token
                         + "; Path=/; HttpOnly; SameSite=Strict");
             } else if (!cookieToken(exchange)) {
+                if (change) {
+                    refused.incrementAndGet();
+                }
                 send(exchange, 403, "text/plain; charset=utf-8",
                         bytes("Open the preview at the address meritbook serve printed (it carries the access token).\n"));
                 return;
             }
             if (change) {
                 if (!sameOrigin(exchange)) {
+                    refused.incrementAndGet();
                     // A page of another origin may send a POST with the cookie attached in older browsers.
                     send(exchange, 403, "text/plain; charset=utf-8", bytes("Changes are accepted only from the preview's own page.\n"));
                     return;
@@ -166,6 +170,13 @@ public final class LiveServer implements AutoCloseable {
             }
             route(exchange);
         }
+    }
+
+    private final AtomicInteger refused = new AtomicInteger();
+
+    /** Change requests refused so far for their origin or a missing token (for tests). */
+    int refusedChanges() {
+        return refused.get();
     }
 
     private static final java.util.Set<String> CHANGES = java.util.Set.of("/exclude", "/restore", "/issue");

@@ -139,6 +139,12 @@ class LiveNotebookBrowserTest {
             return null;
         });
         shot("2-trail-step");
+        // A plot point names its cell, values and residual on hover (an SVG title the browser shows).
+        String note = inDossier(b -> (String) ((JavascriptExecutor) b).executeScript("for (const t of document.querySelectorAll("
+                + "'svg .point-notes circle title')) { if (t.textContent.startsWith('Calibration!D10:')) { return t.textContent; } }"
+                + " return null;"));
+        assertTrue(note != null && note.contains("Nominal 0.1 mg/L") && note.contains("Peak area 4.44") && note.contains("residual "),
+                String.valueOf(note));
         // Following an input goes to the step it came from, in the same place.
         inDossier(b -> {
             b.findElement(By.cssSelector("#mb-pop a[data-mb-step]")).click();
@@ -214,6 +220,42 @@ class LiveNotebookBrowserTest {
         waitFor("the page says the preview is the issued revision",
                 b -> b.findElement(By.id("issue-text")).getText().contains("same as issued revision 2"));
         shot("8-issued");
+    }
+
+    @Test
+    void aPostFromAPageOfAnotherOriginIsRefusedEvenWithTheCookie() throws Exception {
+        browser.get(session.uri().toString()); // the cookie is set
+        waitFor("the page is shown", b -> !b.findElements(By.id("state")).isEmpty());
+        int port = session.server().address().getPort();
+        // Another origin on the same machine (same site, so even a SameSite=Strict cookie goes along).
+        com.sun.net.httpserver.HttpServer other = com.sun.net.httpserver.HttpServer.create(
+                new java.net.InetSocketAddress(java.net.InetAddress.getLoopbackAddress(), 0), 0);
+        byte[] page = "<!DOCTYPE html><html><head><title>elsewhere</title></head><body>elsewhere</body></html>"
+                .getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        other.createContext("/", x -> {
+            x.sendResponseHeaders(200, page.length);
+            try (var out = x.getResponseBody()) {
+                out.write(page);
+            }
+        });
+        other.start();
+        try {
+            byte[] before = Files.readAllBytes(notebook);
+            browser.get("http://127.0.0.1:" + other.getAddress().getPort() + "/");
+            Object sent = ((JavascriptExecutor) browser).executeAsyncScript("const done = arguments[arguments.length - 1];"
+                    + "fetch('http://127.0.0.1:' + arguments[0] + '/exclude', {method: 'POST', mode: 'no-cors', credentials: 'include',"
+                    + " headers: {'Content-Type': 'text/plain'}, body: JSON.stringify({run: 1, section: 'linearity',"
+                    + " address: 'Calibration!D9', reason: 'forged'})}).then(() => done('sent'), e => done('failed: ' + e));", port);
+            assertEquals("sent", sent);
+            assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(notebook)), "the notebook is unchanged");
+            try (var files = Files.list(dir)) {
+                assertFalse(files.anyMatch(p -> p.getFileName().toString().contains(".~")), "no backup: nothing was written");
+            }
+            assertEquals(1, session.server().refusedChanges(),
+                    "the request arrived and was refused (its origin, or the token if the cookie stayed behind)");
+        } finally {
+            other.stop(0);
+        }
     }
 
     private String read() {
