@@ -3,6 +3,8 @@ package org.meritbook.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.net.BindException;
+import java.net.InetAddress;
+import java.net.UnknownHostException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
@@ -11,6 +13,7 @@ import java.util.concurrent.CountDownLatch;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.publishing.PublishingSequence;
+import org.meritbook.serve.Browser;
 import org.meritbook.serve.LiveSession;
 import org.meritbook.serve.ShownProblem;
 import org.meritbook.serve.Snapshot;
@@ -19,21 +22,31 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
-/** {@code meritbook serve STUDY.md}: the live notebook on 127.0.0.1, re-run on every save; writes nothing. */
+/** {@code meritbook serve STUDY.md}: the live notebook on 127.0.0.1, re-run on every save. */
 @Command(name = "serve", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
-        description = "Preview a study notebook in the browser (127.0.0.1 only), re-running it whenever the notebook "
-                + "or a workbook it declares is saved. Writes nothing; issue the dossier with 'meritbook run'.")
+        description = "Preview a study notebook in the browser (127.0.0.1 unless --bind), re-running it whenever the "
+                + "notebook or a workbook it declares is saved. Points can be excluded or restored and a revision issued "
+                + "from the page; workbooks are never written.")
 final class ServeCommand implements Callable<Integer> {
     @Parameters(paramLabel = "STUDY.md", description = "The study notebook.")
     Path notebook;
 
     @Option(names = "--port", paramLabel = "N", defaultValue = "8765",
-            description = "Port on 127.0.0.1 (default ${DEFAULT-VALUE}; 0 picks a free one).")
+            description = "Port (default ${DEFAULT-VALUE}; 0 picks a free one).")
     int port;
+
+    @Option(names = "--bind", paramLabel = "ADDRESS",
+            description = "Listen on this address instead of 127.0.0.1 (others on the network can then reach the "
+                    + "preview with the printed address and its token).")
+    String bind;
+
+    @Option(names = "--open", description = "Open the preview in the default browser, where there is one.")
+    boolean open;
 
     @Option(names = {"-o", "--out"}, paramLabel = "DIR", defaultValue = "out",
             description = "The output folder 'run' writes into (default: ${DEFAULT-VALUE}): the preview shows the "
-                    + "revision history and the changes since the latest revision in DIR/<study>/, as run would.")
+                    + "revision history and the changes since the latest revision in DIR/<study>/, as run would, and "
+                    + "'Issue revision' publishes there.")
     Path out;
 
     @Option(names = "--templates", paramLabel = "DIR",
@@ -51,12 +64,24 @@ final class ServeCommand implements Callable<Integer> {
         }
         PrintWriter console = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        InetAddress address = null;
+        if (bind != null) {
+            try {
+                address = InetAddress.getByName(bind);
+            } catch (UnknownHostException e) {
+                throw new InputException(ErrorKey.BAD_OPTION_VALUE, "--bind " + bind, "an address of this machine",
+                        "'" + bind + "', which does not resolve", "Give an IP address such as 192.168.1.20, or leave --bind out.");
+            }
+        }
         LiveSession session;
+        Optional<Path> lab = Optional.ofNullable(templates);
         try {
-            session = LiveSession.start(notebook, port, PublishingSequence.standard(Optional.ofNullable(templates)),
-                    Optional.of(out), s -> report(s, console));
+            session = LiveSession.start(notebook, new LiveSession.Options(address, port, out),
+                    PublishingSequence.standard(lab), s -> report(s, console));
         } catch (BindException e) {
-            err.println("meritbook: port " + port + " on 127.0.0.1 is in use; choose another with --port N (0 picks a free one).");
+            err.println("meritbook: port " + port + " on " + (bind == null ? "127.0.0.1" : bind)
+                    + " is in use or not an address of this machine; choose another with --port N (0 picks a free one)"
+                    + (bind == null ? "." : " or another --bind."));
             err.flush();
             return Main.BAD_INPUT;
         }
@@ -66,8 +91,15 @@ final class ServeCommand implements Callable<Integer> {
             stopped.countDown();
         }, "meritbook-live-stop");
         Runtime.getRuntime().addShutdownHook(hook);
-        console.println("meritbook serve: " + session.uri() + " (Ctrl-C stops; nothing is written)");
+        console.println("meritbook serve: " + session.uri() + " (Ctrl-C stops; the page writes only the notebook, "
+                + "when you exclude, restore or issue)");
         console.flush();
+        if (open) {
+            Browser.open(session.uri()).ifPresent(note -> {
+                console.println("  " + note);
+                console.flush();
+            });
+        }
         stopped.await();
         return Main.DONE;
     }

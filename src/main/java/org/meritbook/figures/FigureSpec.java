@@ -28,11 +28,16 @@ public record FigureSpec(String id, String title, String xTitle, String yTitle, 
      * @param style  how to draw it
      * @param x      x values
      * @param y      y values, same length
+     * @param notes  what a reader hovering over each point is told (its cell, value, residual), one per
+     *               point, or empty for none; the drawing is the same either way
      */
-    public record Series(String name, Style style, double[] x, double[] y) {
+    public record Series(String name, Style style, double[] x, double[] y, List<String> notes) {
         public Series {
             if (x.length != y.length) {
                 throw new IllegalArgumentException("series " + name + ": x and y differ in length");
+            }
+            if (!notes.isEmpty() && notes.size() != x.length) {
+                throw new IllegalArgumentException("series " + name + ": " + notes.size() + " notes for " + x.length + " points");
             }
             int drawable = 0;
             for (int i = 0; i < x.length; i++) {
@@ -40,14 +45,24 @@ public record FigureSpec(String id, String title, String xTitle, String yTitle, 
             }
             double[] fx = new double[drawable];
             double[] fy = new double[drawable];
+            List<String> kept = new java.util.ArrayList<>();
             for (int i = 0, k = 0; i < x.length; i++) {
                 if (!Double.isInfinite(x[i]) && !Double.isInfinite(y[i])) {
                     fx[k] = x[i];
                     fy[k++] = y[i];
+                    if (!notes.isEmpty()) {
+                        kept.add(Objects.requireNonNull(notes.get(i), "note"));
+                    }
                 }
             }
             x = fx;
             y = fy;
+            notes = List.copyOf(kept);
+        }
+
+        /** A series without notes. */
+        public Series(String name, Style style, double[] x, double[] y) {
+            this(name, style, x, y, List.of());
         }
 
         @Override

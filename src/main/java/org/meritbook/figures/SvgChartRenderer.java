@@ -81,7 +81,7 @@ public final class SvgChartRenderer {
         chart.paint(plot, WIDTH, chartHeight);
         plot.setColor(Color.WHITE);
         plot.fill(new Rectangle2D.Double(0, chartHeight, WIDTH, HEIGHT - chartHeight));
-        String svg = toSvg(plot);
+        String svg = withNotes(toSvg(plot), chart, spec);
         if (!legend.isEmpty()) {
             VectorGraphics2D key = new VectorGraphics2D();
             legend.paint(key, Math.floor((WIDTH - legend.width()) / 2), chartHeight + LEGEND_MARGIN / 2.0, MARKER_SIZE);
@@ -89,6 +89,33 @@ public final class SvgChartRenderer {
             svg = svg.substring(0, close) + "<g class=\"legend\">\n" + inner(toSvg(key)) + "\n</g>\n" + svg.substring(close);
         }
         return SvgTidy.tidy(svg, prefix, title);
+    }
+
+    /**
+     * Each noted point gets an invisible circle carrying its note as an SVG {@code <title>}, which a
+     * browser shows on hover. Neither filled nor stroked, the circles draw nothing, so the PDF's page
+     * looks the same; only an interactive viewer sees them. Positions come from XChart's own axis
+     * transform of the chart just painted.
+     */
+    private static String withNotes(String svg, XYChart chart, FigureSpec spec) {
+        StringBuilder notes = new StringBuilder();
+        for (FigureSpec.Series s : spec.series()) {
+            double[] x = s.x();
+            double[] y = s.y();
+            for (int i = 0; i < s.notes().size(); i++) {
+                if (!Double.isFinite(x[i]) || !Double.isFinite(y[i])) {
+                    continue;
+                }
+                notes.append(String.format(Locale.ROOT, "<circle cx=\"%.2f\" cy=\"%.2f\" r=\"6\" fill=\"none\" stroke=\"none\" "
+                        + "pointer-events=\"all\"><title>%s</title></circle>%n", chart.getScreenXFromChart(x[i]),
+                        chart.getScreenYFromChart(y[i]), SvgTidy.escapeXml(s.notes().get(i))));
+            }
+        }
+        if (notes.length() == 0) {
+            return svg;
+        }
+        int close = svg.lastIndexOf("</svg>");
+        return svg.substring(0, close) + "<g class=\"point-notes\">\n" + notes + "</g>\n" + svg.substring(close);
     }
 
     private static void style(XYStyler st) {

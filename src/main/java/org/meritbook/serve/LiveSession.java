@@ -1,6 +1,7 @@
 package org.meritbook.serve;
 
 import java.io.IOException;
+import java.net.InetAddress;
 import java.net.URI;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -30,32 +31,45 @@ public final class LiveSession implements AutoCloseable {
     }
 
     /**
-     * Starts serving on 127.0.0.1:port (0 for any free port) and runs the study once, knowing no
-     * output folder (the preview of a first revision).
+     * Starts serving on 127.0.0.1:port (0 for any free port) and runs the study once; the preview
+     * shows the earlier revisions in {@code out/} beside the notebook, where "Issue revision" publishes.
      *
      * @param finished told each completed run (for the console); called on the worker thread
      */
     public static LiveSession start(Path notebook, int port, DossierRenderer renderer, Consumer<Snapshot> finished)
             throws IOException {
-        return start(notebook, port, new PublishingSequence(StudyRunner.withBuiltInAnalyses()::run, renderer),
-                Optional.empty(), finished);
+        Path out = notebook.toAbsolutePath().normalize().getParent().resolve("out");
+        return start(notebook, new Options(null, port, out),
+                new PublishingSequence(StudyRunner.withBuiltInAnalyses()::run, renderer), finished);
     }
 
     /**
-     * @param sequence the publishing sequence {@code run} issues with
-     * @param out      {@code run}'s output folder, whose earlier revisions the preview shows as the next run would
+     * Where to listen, and the output folder whose earlier revisions the preview shows as the next
+     * run would and into which "Issue revision" publishes.
+     *
+     * @param bind the address to listen on, given explicitly; null for 127.0.0.1
+     * @param port the port (0 for any free one)
+     * @param out  the output root, as {@code meritbook run -o}
      */
-    public static LiveSession start(Path notebook, int port, PublishingSequence sequence, Optional<Path> out,
+    public record Options(InetAddress bind, int port, Path out) {
+    }
+
+    /**
+     * Starts serving with {@code options} and runs the study once.
+     *
+     * @param sequence the publishing sequence {@code run} issues with; the preview and "Issue revision" use it
+     */
+    public static LiveSession start(Path notebook, Options options, PublishingSequence sequence,
                                     Consumer<Snapshot> finished) throws IOException {
         LiveStudy[] study = new LiveStudy[1];
         FileWatcher watcher = new FileWatcher(DEBOUNCE, () -> study[0].request());
-        study[0] = new LiveStudy(notebook, sequence, out, watcher::watch, finished);
+        study[0] = new LiveStudy(notebook, sequence, Optional.of(options.out()), watcher::watch, finished);
         LiveServer server;
         try {
             // The notebook is watched from the start, so an edit during a failed first parse is seen.
             watcher.watch(Set.of(study[0].notebook()));
             watcher.start();
-            server = LiveServer.start(port, study[0]);
+            server = LiveServer.start(options.bind(), options.port(), study[0], options.out(), sequence);
         } catch (IOException | RuntimeException e) {
             watcher.close();
             throw e;

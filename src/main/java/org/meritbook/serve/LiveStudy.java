@@ -28,8 +28,8 @@ import org.meritbook.study.StudyParser;
  * A notebook kept up to date: takes the steps of the publishing sequence {@code run} issues with
  * (parse, the study, its earlier revisions, results.json, the HTML dossier; {@link PublishingSequence})
  * on one background thread whenever {@link #request()} is called. Requests that arrive during a run
- * are folded into a single following run, so a burst of saves costs at most one extra run. Writes
- * nothing to disk.
+ * are folded into a single following run, so a burst of saves costs at most one extra run, and
+ * the overtaken run's result is discarded unseen. Writes nothing to disk.
  */
 public final class LiveStudy implements AutoCloseable {
     private final Path notebook;
@@ -75,6 +75,11 @@ public final class LiveStudy implements AutoCloseable {
         this.finished = finished;
         this.worker = new Thread(this::work, "meritbook-live-runner");
         this.worker.setDaemon(true);
+    }
+
+    /** The publishing sequence this preview takes its steps from ("Issue revision" publishes with it). */
+    PublishingSequence sequence() {
+        return sequence;
     }
 
     public Path notebook() {
@@ -150,7 +155,8 @@ public final class LiveStudy implements AutoCloseable {
             List<RevisionDiff.Change> changed = previous == null ? List.of()
                     : RevisionDiffer.diff("run " + previous.run(), previous.json(), "run " + run, json).results();
             issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json,
-                    Outcome.of(results), previous == null ? 0 : previous.run(), changed);
+                    Outcome.of(results), previous == null ? 0 : previous.run(), changed, PointIndex.of(results),
+                    Instant.now());
         } catch (InputException e) {
             e.problems().forEach(p -> problems.add(ShownProblem.of(p)));
         } catch (Throwable e) {
@@ -161,10 +167,22 @@ public final class LiveStudy implements AutoCloseable {
             e.printStackTrace(System.err);
         }
         long elapsed = TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - start);
+        if (overtaken()) {
+            // A save arrived while this run read the files: its result may already be out of date, so
+            // it is dropped and the next run (already requested) is the one shown.
+            current.set(before);
+            return;
+        }
         Snapshot.State state = problems.isEmpty() ? Snapshot.State.OK : Snapshot.State.ERROR;
         Snapshot done = new Snapshot(run, state, problems, elapsed, Instant.now(), issued);
         current.set(done);
         finished.accept(done);
+    }
+
+    private boolean overtaken() {
+        synchronized (lock) {
+            return requested && !closed;
+        }
     }
 
     /** The files a run reads: the notebook, each declared workbook, and a laboratory's profile file. */

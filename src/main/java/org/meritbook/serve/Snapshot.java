@@ -39,10 +39,13 @@ public record Snapshot(int run, State state, List<ShownProblem> problems, long e
      * @param outcome  the acceptance outcome counted from the run's results
      * @param sinceRun the earlier successful run the changes are counted from, or 0 when this is the first
      * @param changed  quantities whose value changed since that run ({@code section.name}, old, new; null for added or removed)
+     * @param points   the cells of this run the page may exclude or restore
+     * @param at       when the run's outputs were made (the page dates a kept, stale dossier by it)
      */
     public record Issued(int run, String title, int revision, byte[] html, byte[] json, Outcome outcome, int sinceRun,
-                         List<RevisionDiff.Change> changed) {
+                         List<RevisionDiff.Change> changed, PointIndex points, Instant at) {
         public Issued {
+            Objects.requireNonNull(points, "points");
             changed = List.copyOf(changed);
             Objects.requireNonNull(title, "title");
             Objects.requireNonNull(outcome, "outcome");

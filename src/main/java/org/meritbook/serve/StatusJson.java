@@ -5,6 +5,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 import org.meritbook.revision.RevisionDiff;
 
 /**
@@ -18,13 +19,23 @@ final class StatusJson {
     }
 
     static byte[] of(Snapshot s, String notebookName) {
+        return of(s, notebookName, null, List.of());
+    }
+
+    /**
+     * @param latest the latest published revision compared with the preview, or null before a run succeeds
+     * @param lines  the notebook's lines now, to quote a problem's line and name its cell (empty: none quoted)
+     */
+    static byte[] of(Snapshot s, String notebookName, RevisionIssuer.Latest latest, List<String> lines) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("run", s.run());
         root.put("state", s.state().word());
         ArrayNode problems = root.putArray("problems");
         for (ShownProblem p : s.problems()) {
-            problems.addObject().put("key", p.key()).put("where", p.where()).put("expected", p.expected())
+            ObjectNode o = problems.addObject().put("key", p.key()).put("where", p.where()).put("expected", p.expected())
                     .put("found", p.found()).put("fix", p.fix()).put("message", p.message());
+            NotebookLines.of(p.where(), notebookName, lines).ifPresent(place -> o.put("line", place.line())
+                    .put("line_text", place.text()).put("cell", place.cell()));
         }
         if (s.elapsedMs() < 0) {
             root.putNull("elapsed_ms");
@@ -58,7 +69,21 @@ final class StatusJson {
         }
         // The run whose dossier /dossier serves: the page reloads its view when this changes.
         root.put("dossier_run", issued == null ? 0 : issued.run());
+        root.put("dossier_finished_at", issued == null || issued.at() == null ? null : issued.at().toString());
         root.put("notebook", notebookName);
+        if (latest == null || issued == null) {
+            root.putNull("issued");
+        } else {
+            ObjectNode o = root.putObject("issued");
+            if (latest.revision() == 0) {
+                o.putNull("latest");
+            } else {
+                o.put("latest", latest.revision());
+            }
+            o.put("differs", latest.differs());
+            // The notebook's revision is already published: issuing the preview needs the next one.
+            o.put("needs_new_revision", latest.differs() && latest.revision() >= issued.revision());
+        }
         try {
             return MAPPER.writeValueAsString(root).getBytes(StandardCharsets.UTF_8);
         } catch (JsonProcessingException e) {

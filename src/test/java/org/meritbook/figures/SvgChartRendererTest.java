@@ -67,6 +67,37 @@ class SvgChartRendererTest {
         assertThrows(IllegalArgumentException.class, () -> renderer.render(empty));
     }
 
+    @Test
+    void notedPointsCarryTheirNoteAsAnInvisibleTitledCircleAndTheDrawingIsUnchanged() throws Exception {
+        double[] x = {0, 1, 2};
+        double[] y = {0.1, 1.9, 4.2};
+        FigureSpec plain = new FigureSpec("noted", "Noted", "x (1)", "y (1)",
+                List.of(new FigureSpec.Series("Standards", FigureSpec.Style.POINTS, x, y)));
+        FigureSpec noted = new FigureSpec("noted", "Noted", "x (1)", "y (1)", List.of(new FigureSpec.Series("Standards",
+                FigureSpec.Style.POINTS, x, y, List.of("Cal!B2: <low>", "Cal!B3: mid", "Cal!B4: high"))));
+        String without = renderer.render(plain);
+        String with = renderer.render(noted);
+        Document doc = parse(with);
+        org.w3c.dom.NodeList circles = doc.getElementsByTagName("circle");
+        assertEquals(3, circles.getLength());
+        for (int i = 0; i < 3; i++) {
+            org.w3c.dom.Element c = (org.w3c.dom.Element) circles.item(i);
+            assertEquals("none", c.getAttribute("fill"));
+            assertEquals("none", c.getAttribute("stroke"));
+        }
+        assertEquals("Cal!B2: <low>", circles.item(0).getTextContent(), "the note is text, escaped");
+        // The points rise left to right, so the circles do too (screen y grows downwards).
+        double x0 = Double.parseDouble(((org.w3c.dom.Element) circles.item(0)).getAttribute("cx"));
+        double x2 = Double.parseDouble(((org.w3c.dom.Element) circles.item(2)).getAttribute("cx"));
+        double y0 = Double.parseDouble(((org.w3c.dom.Element) circles.item(0)).getAttribute("cy"));
+        double y2 = Double.parseDouble(((org.w3c.dom.Element) circles.item(2)).getAttribute("cy"));
+        assertTrue(x2 > x0 && y2 < y0, "positions follow the data: " + x0 + "," + y0 + " " + x2 + "," + y2);
+        String stripped = with.replaceAll("(?s)<g class=\"point-notes\">.*?</g>\n", "");
+        assertEquals(without, stripped, "apart from the notes, the same drawing");
+        assertThrows(IllegalArgumentException.class, () -> new FigureSpec.Series("s", FigureSpec.Style.POINTS, x, y,
+                List.of("one note for three points")));
+    }
+
     /** Invented series names, long enough that one legend row cannot hold them all. */
     private static FigureSpec crowded() {
         double[] x = {0, 1, 2, 3};

@@ -20,7 +20,8 @@ class StatusJsonTest {
         Problem p = new Problem(ErrorKey.NOT_A_NUMBER, "runs.xlsx, Cal!B4", "a number", "'" + hostile + "'", "Enter the value.");
         Snapshot s = new Snapshot(3, Snapshot.State.ERROR, List.of(ShownProblem.of(p)), 812, Instant.parse("2026-11-20T10:15:30Z"),
                 new Snapshot.Issued(2, "Study <b>", 4, new byte[0], new byte[0], new Outcome(3, 1, 2, 5), 1,
-                        List.of(new RevisionDiff.Change("cal.slope", "1.5", "1.625"), new RevisionDiff.Change("cal.lod", null, "0.2 mg/L"))));
+                        List.of(new RevisionDiff.Change("cal.slope", "1.5", "1.625"), new RevisionDiff.Change("cal.lod", null, "0.2 mg/L")),
+                        new PointIndex(java.util.Map.of()), Instant.parse("2026-11-20T10:15:29Z")));
 
         byte[] bytes = StatusJson.of(s, "study.md");
         JsonNode status = new ObjectMapper().readTree(bytes);

@@ -58,7 +58,7 @@ final class CalibrationFigures {
             pHigh[i] = line[i] + p;
         }
         List<Series> series = new ArrayList<>();
-        series.add(new Series("Standards", Style.POINTS, data.usedX(), data.usedY()));
+        series.add(new Series("Standards", Style.POINTS, data.usedX(), data.usedY(), notes(data, fit)));
         addExcluded(series, data, false, fit);
         series.add(new Series("Fitted line", Style.LINE, grid, line));
         series.add(new Series("95 % confidence band", Style.DASHED, grid, cLow));
@@ -73,7 +73,7 @@ final class CalibrationFigures {
         double[] x = data.usedX();
         double[] span = {min(x), max(x)};
         List<Series> series = new ArrayList<>();
-        series.add(new Series("Standardized residuals", Style.POINTS, x, fit.standardizedResiduals()));
+        series.add(new Series("Standardized residuals", Style.POINTS, x, fit.standardizedResiduals(), notes(data, fit)));
         series.add(new Series("Zero", Style.REFERENCE, span, new double[] {0, 0}));
         String flag = "±" + (int) CalibrationAnalysis.RESIDUAL_FLAG + " (flagged beyond)";
         series.add(new Series(flag, Style.DOTTED, span,
@@ -141,6 +141,33 @@ final class CalibrationFigures {
         double[] down = Arrays.stream(up).map(v -> -v).toArray();
         series.add(new Series(name, Style.DOTTED, xs, up));
         series.add(new Series(name, Style.DOTTED, xs, down));
+    }
+
+    /** What hovering over a standard tells (in the live notebook): its cell, its values and its residual. */
+    private static List<String> notes(CalibrationData data, CalibrationCurve fit) {
+        List<CalibrationPoint> used = data.used();
+        double[] standardized = fit.standardizedResiduals();
+        List<String> notes = new ArrayList<>(used.size());
+        for (int i = 0; i < used.size(); i++) {
+            CalibrationPoint p = used.get(i);
+            double residual = p.y() - fit.predict(p.x());
+            notes.add(p.yCell().ref().address() + ": " + data.xColumn().name() + " " + shown(p.x()) + unit(data.xUnit()) + ", "
+                    + data.yColumn().name() + " " + shown(p.y()) + unit(data.yUnit()) + "; residual " + shown(residual)
+                    + unit(data.yUnit()) + (i < standardized.length ? " (standardized " + shown(standardized[i]) + ")" : ""));
+        }
+        return notes;
+    }
+
+    private static String shown(double v) {
+        if (!Double.isFinite(v)) {
+            return String.valueOf(v);
+        }
+        java.math.BigDecimal b = new java.math.BigDecimal(v).round(new java.math.MathContext(6)).stripTrailingZeros();
+        return b.signum() == 0 ? "0" : b.toPlainString();
+    }
+
+    private static String unit(String unit) {
+        return unit == null || unit.isBlank() ? "" : " " + unit;
     }
 
     private static void addExcluded(List<Series> series, CalibrationData data, boolean asDeviation, CalibrationCurve fit) {

@@ -1,0 +1,134 @@
+package org.meritbook.serve;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import org.meritbook.publishing.PublishingSequence;
+import org.meritbook.pipeline.StudyFolder;
+import org.meritbook.revision.RevisionDiffer;
+import org.meritbook.study.NotebookEdits;
+
+/**
+ * "Issue revision" on the live page, in one place: it compares the preview with the latest revision
+ * published in the output folder, and issues the next one — revision raised in the notebook with the
+ * reason given, then the dossier written by {@link PublishingSequence}, the sequence {@code meritbook run}
+ * uses. The page refuses while the preview has a problem; here the notebook is put back as it was
+ * when the issuing itself fails, so a failed issue leaves no raised revision behind.
+ */
+final class RevisionIssuer {
+    private static final Pattern REVISION_FOLDER = Pattern.compile("rev([0-9]{1,6})");
+
+    private final Path notebook;
+    private final Path out;
+    private final PublishingSequence sequence;
+    private final NotebookWriter writer;
+
+    RevisionIssuer(Path notebook, Path out, PublishingSequence sequence, NotebookWriter writer) {
+        this.notebook = notebook;
+        this.out = out;
+        this.sequence = sequence;
+        this.writer = writer;
+    }
+
+    /** The study's output folder, {@code OUT/<stem>}. */
+    Path folder() {
+        String name = notebook.getFileName().toString();
+        // as DossierWriter.stem names the study's folder
+        return out.resolve(name.toLowerCase(java.util.Locale.ROOT).endsWith(".md") ? name.substring(0, name.length() - 3) : name);
+    }
+
+    /**
+     * The latest published revision and whether the preview differs from it.
+     *
+     * @param revision the latest revision found, or 0 when none is published
+     * @param differs  the preview's inputs, cells, settings or results differ from it (true when none is published)
+     */
+    record Latest(int revision, boolean differs) {
+    }
+
+    /** The last comparison, kept while neither the preview nor the published file changes (the page asks every second). */
+    private record Compared(byte[] preview, Path file, long modified, Latest latest) {
+    }
+
+    private Compared compared;
+    /** Guards only the comparison, so the page's status is answered while an issue is being written. */
+    private final Object comparing = new Object();
+
+    /** Compares the preview's results.json with the latest published revision's. */
+    Latest latest(byte[] previewJson) {
+        synchronized (comparing) {
+            return compare(previewJson);
+        }
+    }
+
+    private Latest compare(byte[] previewJson) {
+        Optional<Path> json = latestResults();
+        if (json.isEmpty()) {
+            return new Latest(0, true);
+        }
+        Path file = json.get();
+        int revision = Integer.parseInt(REVISION_FOLDER.matcher(file.getParent().getFileName().toString())
+                .replaceFirst("$1"));
+        try {
+            long modified = Files.getLastModifiedTime(file).toMillis();
+            if (compared != null && compared.preview() == previewJson && compared.file().equals(file)
+                    && compared.modified() == modified) {
+                return compared.latest();
+            }
+            byte[] issued = Files.readAllBytes(file);
+            Latest latest = new Latest(revision, !RevisionDiffer.diff("rev" + revision, issued, "preview", previewJson)
+                    .identical());
+            compared = new Compared(previewJson, file, modified, latest);
+            return latest;
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read " + file, e);
+        }
+    }
+
+    private Optional<Path> latestResults() {
+        Path folder = folder();
+        if (!Files.isDirectory(folder)) {
+            return Optional.empty();
+        }
+        Path best = null;
+        int bestRevision = 0;
+        try (Stream<Path> entries = Files.list(folder)) {
+            for (Path p : entries.toList()) {
+                Matcher m = REVISION_FOLDER.matcher(p.getFileName().toString());
+                Path json = p.resolve("results.json");
+                if (m.matches() && Integer.parseInt(m.group(1)) > bestRevision && Files.isRegularFile(json)) {
+                    best = json;
+                    bestRevision = Integer.parseInt(m.group(1));
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot list " + folder, e);
+        }
+        return Optional.ofNullable(best);
+    }
+
+    /** What an issue published: the revision and its files. */
+    record Result(int revision, StudyFolder.Published published) {
+    }
+
+    /**
+     * Raises the notebook's revision with {@code reason} and publishes it. Refusals of the edit come
+     * as {@link NotebookEdits.EditRefused}; a failed publication as the exception that stopped it,
+     * after the notebook has been put back.
+     */
+    synchronized Result issue(String reason) {
+        NotebookWriter.Written raised = writer.apply(text -> NotebookEdits.nextRevision(text, notebook, reason));
+        try {
+            PublishingSequence.Issued issued = sequence.issue(notebook, out, false, folder -> { });
+            return new Result(issued.results().study().frontMatter().revision(), issued.published());
+        } catch (RuntimeException e) {
+            writer.putBack(raised.before());
+            throw e;
+        }
+    }
+}
