@@ -29,6 +29,14 @@ public record AcceptanceProfile(String name, String description, String origin, 
         this(name, description, origin, rules, Comparison.AS_COMPUTED);
     }
 
+    /**
+     * The rules that judged none of these sections: a reviewer must see that a criterion of the
+     * profile was not applied at all (no cell of its kind or model), not read its silence as a pass.
+     */
+    public List<Rule> unapplied(List<SectionResult> sections) {
+        return rules.stream().filter(r -> sections.stream().allMatch(s -> r.judge(s, comparison).isEmpty())).toList();
+    }
+
     /** The section with this profile's verdicts added, in rule order. */
     public SectionResult judge(SectionResult section) {
         List<Verdict> verdicts = new ArrayList<>(section.verdicts());

@@ -25,7 +25,7 @@ public final class BuiltInProfiles {
                         new QuantityRule(AnalysisKind.CALIBRATION, "Linearity: lack of fit", "lack_of_fit_p", true, 0.05,
                                 "lack-of-fit p", null, "lack-of-fit F test at the 5 % level"),
                         new QuantityRule(AnalysisKind.CALIBRATION, "Linearity: no curvature", "mandel_p", true, 0.05,
-                                "Mandel p", "straight line", "Mandel's fitting test at the 5 % level (ISO 8466-1)")),
+                                "Mandel p", "linear", "Mandel's fitting test at the 5 % level (ISO 8466-1)")),
                 BUILT_IN_COMPARISON));
         all.put("bioanalytical-calibration", new AcceptanceProfile("bioanalytical-calibration",
                 "Calibration standards of a bioanalytical method: back-calculated concentrations near nominal.",

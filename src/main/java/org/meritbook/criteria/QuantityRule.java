@@ -32,6 +32,11 @@ public record QuantityRule(AnalysisKind kind, String characteristic, String quan
         if (!Double.isFinite(limit)) {
             throw new IllegalArgumentException("limit of " + quantity + " must be finite");
         }
+        if (model != null && !AnalysisKind.choicesOf("model").contains(model)) {
+            // A model the notebook cannot write would match no section: the rule would judge nothing, silently.
+            throw new IllegalArgumentException("model of the rule on " + quantity + " must be a notebook word ("
+                    + String.join(", ", AnalysisKind.choicesOf("model")) + "), not '" + model + "'");
+        }
     }
 
     @Override

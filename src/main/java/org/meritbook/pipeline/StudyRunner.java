@@ -88,8 +88,10 @@ public final class StudyRunner {
                 context = context.with(section);
                 sections.add(profile == null ? section : profile.judge(section));
             }
+            List<String> warnings = new ArrayList<>(unusedSources(study, rangesBySource));
+            warnings.addAll(unappliedRules(profile, sections));
             return new StudyResults(study, inputs(study, rangesBySource, reader), sections,
-                    SoftwareInventory.components(), profile, unusedSources(study, rangesBySource));
+                    SoftwareInventory.components(), profile, warnings);
         }
     }
 
@@ -132,6 +134,14 @@ public final class StudyRunner {
     }
 
     /** A declared source that no cell reads is neither checksummed nor attached; the analyst is told. */
+    private static List<String> unappliedRules(AcceptanceProfile profile, List<SectionResult> sections) {
+        if (profile == null) {
+            return List.of();
+        }
+        return profile.unapplied(sections).stream().map(r -> "Acceptance rule '" + r.text() + "' of profile "
+                + profile.name() + " judged no section: the study has no cell it applies to.").toList();
+    }
+
     private static List<String> unusedSources(Study study, Map<String, Set<String>> rangesBySource) {
         List<String> warnings = new ArrayList<>();
         for (SourceFile source : study.sources().values()) {

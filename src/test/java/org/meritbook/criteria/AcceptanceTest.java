@@ -96,6 +96,24 @@ class AcceptanceTest {
     }
 
     @Test
+    void everyRuleOfLinearityBasicJudgesAStraightLineAndARuleThatJudgesNothingIsNamed() {
+        // Regression: the built-in Mandel rule once named its model "straight line", a display text no
+        // section carries, and judged nothing — silently, beside two passes.
+        AcceptanceProfile basic = BuiltInProfiles.all().get("linearity-basic");
+        double[] dev = {0, 0, 0, 0, 0, 0, 0, 0};
+        SectionResult line = basic.judge(calibration(LEVELS, dev, "linear", 0.9991, List.of()));
+        assertEquals(List.of("r_squared", "lack_of_fit_p", "mandel_p"),
+                line.verdicts().stream().map(Verdict::quantity).toList());
+        assertEquals(List.of(), basic.unapplied(List.of(line)));
+        SectionResult curve = calibration(LEVELS, dev, "quadratic", 0.9991, List.of());
+        assertEquals(List.of("Mandel p ≥ 0.05"), basic.unapplied(List.of(curve)).stream().map(Rule::text).toList());
+        assertEquals("model of the rule on mandel_p must be a notebook word (linear, quadratic, "
+                + "linear-through-origin), not 'straight line'", assertThrows(IllegalArgumentException.class,
+                        () -> new QuantityRule(AnalysisKind.CALIBRATION, "No curvature", "mandel_p", true, 0.05,
+                                "Mandel p", "straight line", "x")).getMessage());
+    }
+
+    @Test
     void aLabProfileFileIsReadAndItsMistakesLocated() throws Exception {
         Path file = dir.resolve("lab.yaml");
         Files.writeString(file, """
