@@ -12,11 +12,20 @@ import java.util.Objects;
  * @param xTitle x-axis title with unit
  * @param yTitle y-axis title with unit
  * @param series the series, drawn in order
+ * @param xCategories for a categorical x axis (groups, days, levels), the label of position 1, 2, …;
+ *                    empty for a numeric axis
  */
-public record FigureSpec(String id, String title, String xTitle, String yTitle, List<Series> series) {
+public record FigureSpec(String id, String title, String xTitle, String yTitle, List<Series> series,
+                         List<String> xCategories) {
     public FigureSpec {
         Objects.requireNonNull(id, "id");
         series = List.copyOf(series);
+        xCategories = List.copyOf(xCategories);
+    }
+
+    /** A figure with a numeric x axis. */
+    public FigureSpec(String id, String title, String xTitle, String yTitle, List<Series> series) {
+        this(id, title, xTitle, yTitle, series, List.of());
     }
 
     /**

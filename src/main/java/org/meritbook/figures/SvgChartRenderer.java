@@ -51,6 +51,9 @@ public final class SvgChartRenderer {
         chart.setXAxisTitle(nullToEmpty(spec.xTitle()));
         chart.setYAxisTitle(nullToEmpty(spec.yTitle()));
         style(chart.getStyler());
+        if (!spec.xCategories().isEmpty()) {
+            categorical(chart.getStyler(), spec.xCategories());
+        }
         Set<String> seriesNames = new HashSet<>();
         int index = 0;
         for (FigureSpec.Series s : spec.series()) {
@@ -166,6 +169,30 @@ public final class SvgChartRenderer {
     }
 
     /** Tick labels: at most ten significant digits, no digit grouping, a true minus sign. */
+    /**
+     * Positions 1 … k carry their category's name, and the axis runs from 0.5 to k + 0.5 so that
+     * each category sits in a slot of its own; ticks between the positions stay unlabelled.
+     */
+    private static void categorical(XYStyler st, List<String> categories) {
+        st.setXAxisMin(0.5);
+        st.setXAxisMax(categories.size() + 0.5);
+        // a hint of one slot's width makes the axis step by 1: a tick, and a name, at every position
+        st.setXAxisTickMarkSpacingHint(Math.max(16, (WIDTH - 120) / categories.size()));
+        st.setxAxisTickLabelsFormattingFunction(v -> categoryTick(categories, v));
+    }
+
+    /**
+     * The label at axis position {@code v}: its category's name at 1, 2, …, blank elsewhere. XChart
+     * drops every tick when two labels are equal, so each blank is a different number of spaces.
+     */
+    static String categoryTick(List<String> categories, Double v) {
+        double r = Math.rint(v);
+        if (Math.abs(v - r) > 1e-9 || r < 1 || r > categories.size()) {
+            return " ".repeat((int) Math.max(1, Math.min(64, Math.round(Math.abs(v) * 2) + 1)));
+        }
+        return categories.get((int) r - 1);
+    }
+
     static String tick(Double v) {
         BigDecimal b = new BigDecimal(v).round(new MathContext(10, RoundingMode.HALF_EVEN)).stripTrailingZeros();
         if (b.signum() == 0) {

@@ -243,4 +243,23 @@ class SvgChartRendererTest {
         org.junit.jupiter.api.Assertions.assertEquals(3, s.y().length);
         org.junit.jupiter.api.Assertions.assertTrue(Double.isNaN(s.y()[2]), "NaN stays, a gap in a line");
     }
+    @Test
+    void aCategoricalAxisNamesEachPositionAndOnlyThose() throws Exception {
+        List<String> days = List.of("Day 1", "Day 2", "Day 3");
+        assertEquals("Day 1", SvgChartRenderer.categoryTick(days, 1.0));
+        assertEquals("Day 3", SvgChartRenderer.categoryTick(days, 3.0));
+        assertTrue(SvgChartRenderer.categoryTick(days, 1.5).isBlank());
+        assertTrue(SvgChartRenderer.categoryTick(days, 0.5).isBlank());
+        assertTrue(SvgChartRenderer.categoryTick(days, 4.0).isBlank());
+        // XChart draws no tick at all when two labels are equal: the blanks must differ
+        assertFalse(SvgChartRenderer.categoryTick(days, 0.5).equals(SvgChartRenderer.categoryTick(days, 3.5)));
+        FigureSpec spec = new FigureSpec("p.values", "Results by day", "Day", "Result (mg/kg)", List.of(
+                new FigureSpec.Series("Results", FigureSpec.Style.POINTS, new double[] {1, 1, 2, 2, 3, 3},
+                        new double[] {9.8, 10.1, 10.4, 10.2, 9.9, 10.0})), days);
+        String svg = renderer.render(spec);
+        assertTrue(parse(svg).getDocumentElement().getLocalName().equals("svg"));
+        // Three category labels are drawn where a numeric axis would draw its numbers: the SVG differs.
+        FigureSpec numeric = new FigureSpec(spec.id(), spec.title(), spec.xTitle(), spec.yTitle(), spec.series());
+        assertFalse(svg.equals(renderer.render(numeric)));
+    }
 }

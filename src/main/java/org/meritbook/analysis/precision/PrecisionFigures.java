@@ -66,12 +66,11 @@ final class PrecisionFigures {
             series.add(new Series("Mean of the level", Style.REFERENCE, span, new double[] {mean, mean}));
             String unit = data.unit();
             String yTitle = data.valueColumn().name() + (unit == null ? "" : " (" + unit + ")");
-            String xTitle = data.grouped() ? data.groupColumn().name() + " (in order of appearance: "
-                    + String.join(", ", position.keySet()) + ")" : "Result number";
+            String xTitle = data.grouped() ? data.groupColumn().name() + " (in order of appearance)" : "Result number";
             String suffix = data.levelled() ? "." + level.label() : "";
             section.figure(new FigureSpec(id + ".values" + suffix, "Results by " + (data.grouped()
                     ? data.groupColumn().name() : "order") + (data.levelled() ? ", level " + level.label() : ""),
-                    xTitle, yTitle, series));
+                    xTitle, yTitle, series, data.grouped() ? List.copyOf(position.keySet()) : List.of()));
         }
     }
 

@@ -120,6 +120,9 @@ class DemoPrecisionTest {
         PrecisionAnalysisTest.everyQuantityHasItsStepAndAKnownName(s);
         assertEquals(48, s.table().rows().size());
         assertEquals(2, s.figures().size());
+        // days on a categorical axis, named in order of appearance
+        assertEquals(4, s.figures().get(0).xCategories().size());
+        assertTrue(s.figures().get(0).xCategories().get(0).contains("1"), s.figures().get(0).xCategories().toString());
         assertFalse(s.warnings().stream().anyMatch(w -> w.contains("set to zero")), s.warnings().toString());
         assertTrue(s.settings().stream().anyMatch(x -> x.label().equals("Levels") && x.value().contains("QC-N, QC-S")));
     }
