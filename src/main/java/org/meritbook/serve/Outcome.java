@@ -7,6 +7,9 @@ import org.meritbook.pipeline.StudyResults;
 /**
  * The acceptance outcome of one successful run, counted as the status bar shows it.
  *
+ * Like the dossier's summary and the exit code, only the reporting cells' verdicts count; a
+ * {@code role: supporting} check is shown and judged on the page but kept out of the counts.
+ *
  * @param passed       verdicts that passed
  * @param failed       verdicts that failed
  * @param notEvaluable verdicts that could not be evaluated
@@ -38,16 +41,16 @@ public record Outcome(int passed, int failed, int notEvaluable, int warnings) {
         int failed = 0;
         int notEvaluable = 0;
         int warnings = results.warnings().size();
-        for (SectionResult section : results.sections()) {
-            for (Verdict v : section.verdicts()) {
-                if (v.outcome() == Verdict.Outcome.PASS) {
-                    passed++;
-                } else if (v.outcome() == Verdict.Outcome.FAIL) {
-                    failed++;
-                } else {
-                    notEvaluable++;
-                }
+        for (Verdict v : results.reportingVerdicts()) {
+            if (v.outcome() == Verdict.Outcome.PASS) {
+                passed++;
+            } else if (v.outcome() == Verdict.Outcome.FAIL) {
+                failed++;
+            } else {
+                notEvaluable++;
             }
+        }
+        for (SectionResult section : results.sections()) {
             warnings += section.warnings().size();
         }
         return new Outcome(passed, failed, notEvaluable, warnings);

@@ -240,8 +240,13 @@ class LiveSessionTest {
         JsonNode demo = awaitStatus(s -> s.get("state").asText().equals("ok")).get("verdicts");
         int judged = demo.get("passed").asInt() + demo.get("failed").asInt() + demo.get("not_evaluable").asInt();
         assertTrue(judged > 0, "the demo's profile judges something: " + demo);
-        int calibrations = JSON.readTree(get("/results.json").body()).findValues("kind").stream()
-                .filter(k -> k.asText().equals("calibration")).mapToInt(k -> 1).sum();
+        // Only reporting cells count, as in the dossier's summary: the demo's unweighted check is supporting.
+        int calibrations = 0;
+        for (JsonNode section : JSON.readTree(get("/results.json").body()).get("sections")) {
+            boolean reporting = section.get("kind").asText().equals("calibration")
+                    && section.get("role").asText().equals("reporting");
+            calibrations += reporting ? 1 : 0;
+        }
         // r² <= 1 always and is below 1 for real data, so 'at least 1' fails and 'at least 0' passes, once per calibration.
         Files.writeString(dir.resolve("impossible.yaml"), "name: impossible linearity\nrules:\n"
                 + "  - quantity: r_squared\n    at-least: 1\n    characteristic: Linearity\n"
