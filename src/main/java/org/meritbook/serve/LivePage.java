@@ -624,7 +624,7 @@ final class LivePage {
                 } else if (!i.differs) {
                   text = 'The preview is the same as issued revision ' + i.latest + '.';
                 } else if (i.needs_new_revision) {
-                  text = 'The preview differs from issued revision ' + i.latest + ': issuing it needs revision ' + (s.revision + 1) + '.';
+                  text = 'The preview differs from issued revision ' + i.latest + ': issuing it needs revision ' + i.next_revision + '.';
                 } else {
                   text = 'The preview (revision ' + s.revision + ') differs from issued revision ' + i.latest + '.';
                 }

@@ -12,6 +12,7 @@ import org.meritbook.publishing.PublishingSequence;
 import org.meritbook.pipeline.StudyFolder;
 import org.meritbook.revision.RevisionDiffer;
 import org.meritbook.study.NotebookEdits;
+import org.meritbook.study.StudyParser;
 
 /**
  * "Issue revision" on the live page, in one place: it compares the preview with the latest revision
@@ -117,12 +118,33 @@ final class RevisionIssuer {
     }
 
     /**
-     * Raises the notebook's revision with {@code reason} and publishes it. Refusals of the edit come
+     * The revision an issue publishes: the notebook's own when it is ahead of every published one
+     * (the first issue of revision 1, or a revision the analyst raised by hand), else the one after
+     * the latest published.
+     *
+     * @param notebook  the notebook's {@code revision:}
+     * @param published the latest published revision, 0 when none
+     */
+    static int revisionToIssue(int notebook, int published) {
+        return Math.max(notebook, published + 1);
+    }
+
+    /** The latest published revision, 0 when none. */
+    int latestPublished() {
+        return latestResults().map(json -> Integer.parseInt(REVISION_FOLDER.matcher(json.getParent().getFileName()
+                .toString()).replaceFirst("$1"))).orElse(0);
+    }
+
+    /**
+     * Sets the notebook's revision to the one to issue ({@link #revisionToIssue}) with {@code reason}
+     * as its reason, and publishes it. Refusals of the edit come
      * as {@link NotebookEdits.EditRefused}; a failed publication as the exception that stopped it,
      * after the notebook has been put back.
      */
     synchronized Result issue(String reason) {
-        NotebookWriter.Written raised = writer.apply(text -> NotebookEdits.nextRevision(text, notebook, reason));
+        int published = latestPublished();
+        NotebookWriter.Written raised = writer.apply(text -> NotebookEdits.withRevision(text, notebook,
+                revisionToIssue(StudyParser.parse(text, notebook).frontMatter().revision(), published), reason));
         try {
             PublishingSequence.Issued issued = sequence.issue(notebook, out, false, folder -> { });
             return new Result(issued.results().study().frontMatter().revision(), issued.published());

@@ -83,6 +83,7 @@ final class StatusJson {
             o.put("differs", latest.differs());
             // The notebook's revision is already published: issuing the preview needs the next one.
             o.put("needs_new_revision", latest.differs() && latest.revision() >= issued.revision());
+            o.put("next_revision", RevisionIssuer.revisionToIssue(issued.revision(), latest.revision()));
         }
         try {
             return MAPPER.writeValueAsString(root).getBytes(StandardCharsets.UTF_8);

@@ -133,11 +133,18 @@ public final class NotebookEdits {
      */
     public static String nextRevision(String text, Path file, String reason) {
         requireSingleLine("reason", reason, true);
-        Study before = StudyParser.parse(text, file);
+        return withRevision(text, file, StudyParser.parse(text, file).frontMatter().revision() + 1, reason);
+    }
+
+    /** Sets {@code revision:} to {@code next} and {@code revision-reason:} to {@code reason}. */
+    public static String withRevision(String text, Path file, int next, String reason) {
+        requireSingleLine("reason", reason, true);
+        if (next < 1) {
+            throw new EditRefused("A revision is a whole number from 1 on, not " + next + ".");
+        }
         List<String> lines = lines(text);
         int end = frontMatterEnd(lines);
         int revisionLine = keyLine(lines, end, "revision");
-        int next = before.frontMatter().revision() + 1;
         String reasonLine = "revision-reason: " + yamlScalar(reason);
         if (revisionLine < 0) {
             lines.add(end, "revision: " + next);

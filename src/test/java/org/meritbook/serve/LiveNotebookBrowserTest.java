@@ -211,14 +211,15 @@ class LiveNotebookBrowserTest {
         browser.findElement(By.id("issue-reason")).sendKeys("First issue after review of the exclusions");
         shot("7-issue-dialog");
         browser.findElement(By.id("issue-submit")).click();
-        waitFor("the revision is issued", b -> b.findElement(By.id("notice")).getText().startsWith("Issued revision 2"));
-        Path rev = dir.resolve("out").resolve(NAME).resolve("rev2");
-        assertTrue(Files.isRegularFile(rev.resolve(NAME + "-rev2.pdf")) && Files.isRegularFile(rev.resolve("results.json")),
+        waitFor("the revision is issued", b -> b.findElement(By.id("notice")).getText().startsWith("Issued revision 1"));
+        // Nothing was issued before, so the notebook's own revision 1 is issued, with the reason given.
+        Path rev = dir.resolve("out").resolve(NAME).resolve("rev1");
+        assertTrue(Files.isRegularFile(rev.resolve(NAME + "-rev1.pdf")) && Files.isRegularFile(rev.resolve("results.json")),
                 "the dossier is written as run writes it");
-        assertTrue(read().contains("revision: 2\n") && read().contains("revision-reason: \"First issue after review of the exclusions\""),
+        assertTrue(read().contains("revision: 1\n") && read().contains("revision-reason: \"First issue after review of the exclusions\""),
                 read());
         waitFor("the page says the preview is the issued revision",
-                b -> b.findElement(By.id("issue-text")).getText().contains("same as issued revision 2"));
+                b -> b.findElement(By.id("issue-text")).getText().contains("same as issued revision 1"));
         shot("8-issued");
     }
 

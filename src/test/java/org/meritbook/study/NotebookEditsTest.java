@@ -86,6 +86,16 @@ class NotebookEditsTest {
     }
 
     @Test
+    void aRevisionCanBeSetToAGivenNumberWithItsReason() {
+        String edited = NotebookEdits.withRevision(TEXT, FILE, 3, "Issued from the page");
+        FrontMatter fm = StudyParser.parse(edited, FILE).frontMatter();
+        assertEquals(3, fm.revision());
+        assertEquals("Issued from the page", fm.revisionReason());
+        assertEquals("A revision is a whole number from 1 on, not 0.", assertThrows(NotebookEdits.EditRefused.class,
+                () -> NotebookEdits.withRevision(TEXT, FILE, 0, "r")).getMessage());
+    }
+
+    @Test
     void unsafeEditsAreRefusedWithAReason() {
         String id = StudyParser.parse(TEXT, FILE).cells().get(0).id();
         assertEquals("Calibration!C9 is already excluded in cell '" + id + "'.", assertThrows(
