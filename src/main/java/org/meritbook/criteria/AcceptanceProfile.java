@@ -15,13 +15,27 @@ import org.meritbook.analysis.Verdict;
  * @param origin      "built in" or the profile file's path as written
  * @param rules       the rules, in the order the dossier lists them
  * @param comparison  how values are compared with their limits (as computed, or rounded to the limit first)
+ * @param exclusionRecord what every {@code exclude:} entry must say besides its reason: {@code by}
+ *                    (who) and/or {@code on} (when), as the lab's procedure asks; empty for none
  */
 public record AcceptanceProfile(String name, String description, String origin, List<Rule> rules,
-                                Comparison comparison) {
+                                Comparison comparison, List<String> exclusionRecord) {
+    /** The entry keys a profile may ask every exclusion to carry. */
+    public static final List<String> EXCLUSION_KEYS = List.of("by", "on");
+
     public AcceptanceProfile {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(comparison, "comparison");
         rules = List.copyOf(rules);
+        exclusionRecord = List.copyOf(exclusionRecord);
+        if (!EXCLUSION_KEYS.containsAll(exclusionRecord)) {
+            throw new IllegalArgumentException("an exclusion record is made of " + EXCLUSION_KEYS + ": " + exclusionRecord);
+        }
+    }
+
+    /** A profile that asks nothing of exclusions beyond their reason. */
+    public AcceptanceProfile(String name, String description, String origin, List<Rule> rules, Comparison comparison) {
+        this(name, description, origin, rules, comparison, List.of());
     }
 
     /** A profile that compares values as computed (the built-in profiles do). */

@@ -24,6 +24,7 @@ import org.yaml.snakeyaml.error.YAMLException;
  * name: QC-lab linearity
  * description: SOP QA-12, section 4
  * compare: as-computed             # or rounded-to-limit (optional; as-computed when absent)
+ * exclusions-record: [by, on]      # every exclude: entry says who and when (optional)
  * rules:
  *   - quantity: r_squared          # any calibration quantity name
  *     at-least: 0.998              # or at-most:
@@ -44,7 +45,7 @@ import org.yaml.snakeyaml.error.YAMLException;
  * </pre>
  */
 final class ProfileFile {
-    private static final Set<String> TOP = Set.of("name", "description", "compare", "rules");
+    private static final Set<String> TOP = Set.of("name", "description", "compare", "exclusions-record", "rules");
     private static final Set<String> RULE = Set.of("kind", "quantity", "at-least", "at-most", "within",
             "lowest-level-within", "lowest-level-at-most", "fraction", "minimum-levels", "not-above", "not-below",
             "characteristic", "source", "model");
@@ -81,7 +82,26 @@ final class ProfileFile {
         }
         String name = top.get("name") == null ? written : String.valueOf(top.get("name"));
         String description = top.get("description") == null ? "" : String.valueOf(top.get("description"));
-        return new AcceptanceProfile(name, description, written, rules, comparison(top.get("compare"), where));
+        return new AcceptanceProfile(name, description, written, rules, comparison(top.get("compare"), where),
+                exclusionRecord(top.get("exclusions-record"), where));
+    }
+
+    private static List<String> exclusionRecord(Object written, String where) {
+        if (written == null) {
+            return List.of();
+        }
+        List<?> keys = written instanceof List<?> l ? l : List.of(written);
+        List<String> out = new ArrayList<>();
+        for (Object k : keys) {
+            // YAML 1.1 reads a bare 'on' as true: in this list it can only mean the key 'on'
+            String key = Boolean.TRUE.equals(k) ? "on" : String.valueOf(k);
+            if (!AcceptanceProfile.EXCLUSION_KEYS.contains(key) || out.contains(key)) {
+                throw bad(where, "'exclusions-record:' as a list of " + AcceptanceProfile.EXCLUSION_KEYS
+                        + ", each once", "'" + written + "'");
+            }
+            out.add(key);
+        }
+        return out;
     }
 
     private static Rule rule(Map<?, ?> r, String where, String which) {

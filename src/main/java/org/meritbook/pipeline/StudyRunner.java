@@ -30,6 +30,7 @@ import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
 import org.meritbook.study.AnalysisCell;
 import org.meritbook.study.AnalysisKind;
+import org.meritbook.study.Exclusion;
 import org.meritbook.study.SourceFile;
 import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
@@ -72,6 +73,7 @@ public final class StudyRunner {
         checkKindsAvailable(study);
         checkSourceTypes(study);
         AcceptanceProfile profile = AcceptanceProfiles.of(study);
+        checkExclusionRecords(study, profile);
         Map<String, Set<String>> rangesBySource = new LinkedHashMap<>();
         List<SectionResult> sections = new ArrayList<>();
         try (WorkbookReader reader = new WorkbookReader()) {
@@ -92,6 +94,33 @@ public final class StudyRunner {
             warnings.addAll(unappliedRules(profile, sections));
             return new StudyResults(study, inputs(study, rangesBySource, reader), sections,
                     SoftwareInventory.components(), profile, warnings);
+        }
+    }
+
+    /** Every exclusion says who and when when the lab's profile asks it to, before any work. */
+    private static void checkExclusionRecords(Study study, AcceptanceProfile profile) {
+        if (profile == null || profile.exclusionRecord().isEmpty()) {
+            return;
+        }
+        List<org.meritbook.error.Problem> problems = new ArrayList<>();
+        for (AnalysisCell cell : study.cells()) {
+            for (Exclusion e : cell.exclusions()) {
+                for (String key : profile.exclusionRecord()) {
+                    String given = key.equals("by") ? e.by() : e.on();
+                    if (given == null) {
+                        problems.add(new org.meritbook.error.Problem(ErrorKey.MISSING_OPTION,
+                                study.file().getFileName() + " line " + e.line(),
+                                (key.equals("by") ? "who excluded " : "when ") + e.address()
+                                        + (key.equals("by") ? "" : " was excluded") + " ('" + key + ":'), as profile "
+                                        + profile.name() + " asks of every exclusion", "no '" + key + ":' in the entry",
+                                "Add '" + key + ": " + (key.equals("by") ? "<name>" : "YYYY-MM-DD")
+                                        + "' under the entry's reason."));
+                    }
+                }
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new InputException(problems);
         }
     }
 

@@ -3,9 +3,12 @@ package org.meritbook.serve;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.regex.Pattern;
+import org.meritbook.criteria.AcceptanceProfile;
+import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.error.InputException;
 import org.meritbook.study.Exclusion;
 import org.meritbook.study.NotebookEdits;
+import org.meritbook.study.StudyParser;
 
 /**
  * The three changes the page may ask for — exclude a point, restore one, issue a revision — checked
@@ -49,6 +52,13 @@ final class PageActions {
         if (on != null && !DATE.matcher(on).matches()) {
             return new Reply(400, "Write the date as YYYY-MM-DD (found '" + on + "').");
         }
+        for (String key : exclusionRecord()) {
+            String given = key.equals("by") ? by : on;
+            if (given == null || given.isBlank()) {
+                return new Reply(400, "The lab's acceptance profile asks " + (key.equals("by") ? "who excluded"
+                        : "when they excluded") + " each point: fill in '" + (key.equals("by") ? "by" : "on") + "'.");
+            }
+        }
         PointIndex.Section s = shown.points().section(section).orElse(null);
         if (s == null) {
             return new Reply(400, "The study has no cell '" + section + "'.");
@@ -59,6 +69,19 @@ final class PageActions {
         }
         return edit(text -> NotebookEdits.exclude(text, study.notebook(), section, address, reason.strip(),
                 blankToNull(by), blankToNull(on)), "Excluded " + address + " from cell '" + section + "'");
+    }
+
+    /**
+     * What the study's profile asks every exclusion to say besides its reason. A notebook or profile
+     * that cannot be read asks nothing here: the run that follows reports it where it is.
+     */
+    private List<String> exclusionRecord() {
+        try {
+            AcceptanceProfile profile = AcceptanceProfiles.of(StudyParser.parse(study.notebook()));
+            return profile == null ? List.of() : profile.exclusionRecord();
+        } catch (InputException e) {
+            return List.of();
+        }
     }
 
     Reply restore(int run, String section, String address) {

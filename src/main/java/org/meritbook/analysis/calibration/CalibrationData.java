@@ -206,7 +206,7 @@ record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, L
                         "exclude: " + e.address(),
                         "Name the concentration or response cell of the point to leave out."));
             } else {
-                reasons.put(ref, e.reason());
+                reasons.put(ref, e.shownReason());
             }
         }
         if (!problems.isEmpty()) {
