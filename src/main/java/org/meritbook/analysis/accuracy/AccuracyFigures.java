@@ -21,12 +21,20 @@ final class AccuracyFigures {
         List<Series> series = new ArrayList<>();
         List<double[]> used = new ArrayList<>();
         List<double[]> excluded = new ArrayList<>();
+        List<String> notes = new ArrayList<>();
         for (AccuracyRow r : data.rows()) {
             if (recoveries.has(r)) {
                 (r.used() ? used : excluded).add(new double[] {r.knownValue(), recoveries.of(r).value()});
+                if (r.used()) {
+                    // what hovering over the point tells (in the live notebook): its cells and its recovery
+                    notes.add(r.measured().ref().address() + ": measured " + r.measured().raw() + ", known "
+                            + r.known().raw() + " (" + r.known().ref().address() + "); recovery "
+                            + new java.math.BigDecimal(recoveries.of(r).value()).round(new java.math.MathContext(4))
+                                    .stripTrailingZeros().toPlainString() + " %");
+                }
             }
         }
-        series.add(new Series("Results", Style.POINTS, xs(used), ys(used)));
+        series.add(new Series("Results", Style.POINTS, xs(used), ys(used), notes));
         if (!excluded.isEmpty()) {
             series.add(new Series("Excluded (see reasons)", Style.EXCLUDED_POINTS, xs(excluded), ys(excluded)));
         }

@@ -29,6 +29,7 @@ final class PrecisionFigures {
             Map<String, Integer> position = new LinkedHashMap<>();
             level.groups().keySet().forEach(g -> position.put(g, position.size() + 1));
             List<double[]> used = new ArrayList<>();
+            List<String> notes = new ArrayList<>();
             List<double[]> means = new ArrayList<>();
             int i = 0;
             for (Map.Entry<String, List<MeasuredRows.Row>> g : level.groups().entrySet()) {
@@ -36,6 +37,8 @@ final class PrecisionFigures {
                 for (MeasuredRows.Row r : g.getValue()) {
                     double x = data.grouped() ? position.get(g.getKey()) : ++i;
                     used.add(new double[] {x, r.number(0)});
+                    notes.add(r.cell(0).ref().address() + ": " + r.cell(0).raw() + (data.unit() == null ? "" : " "
+                            + data.unit()) + (data.grouped() ? ", " + data.groupColumn().name() + " " + g.getKey() : ""));
                     sum += r.number(0);
                 }
                 if (data.grouped()) {
@@ -56,7 +59,8 @@ final class PrecisionFigures {
             }
             double[] span = data.grouped() ? new double[] {0.5, position.size() + 0.5} : new double[] {1, values.length};
             List<Series> series = new ArrayList<>();
-            series.add(series("Results", Style.POINTS, used));
+            series.add(new Series("Results", Style.POINTS, used.stream().mapToDouble(p -> p[0]).toArray(),
+                    used.stream().mapToDouble(p -> p[1]).toArray(), notes));
             if (!means.isEmpty()) {
                 series.add(series(data.groupColumn().name() + " means", Style.LINE, means));
             }
