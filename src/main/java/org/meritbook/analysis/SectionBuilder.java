@@ -21,6 +21,7 @@ public final class SectionBuilder {
     private final List<Verdict> verdicts = new ArrayList<>();
     private final List<String> warnings = new ArrayList<>();
     private final List<Exported> exports = new ArrayList<>();
+    private final java.util.Map<String, Double> nominals = new java.util.LinkedHashMap<>();
     private final List<ResultTable> tables = new ArrayList<>();
 
     public SectionBuilder(AnalysisCell cell) {
@@ -95,6 +96,17 @@ public final class SectionBuilder {
         return this;
     }
 
+    /**
+     * The nominal value behind the members labelled {@code label} ({@code deviation_percent:<label>}),
+     * exported as {@link NominalValues} for the rules that set the lowest level apart.
+     */
+    public SectionBuilder nominal(String label, double value) {
+        if (Double.isFinite(value)) {
+            nominals.put(label, value);
+        }
+        return this;
+    }
+
     /** A typed result later cells may use. */
     public SectionBuilder export(Exported result) {
         exports.add(result);
@@ -110,8 +122,12 @@ public final class SectionBuilder {
     }
 
     public SectionResult build(DataTable table) {
+        List<Exported> all = new ArrayList<>(exports);
+        if (!nominals.isEmpty()) {
+            all.add(new NominalValues(nominals));
+        }
         return new SectionResult(cell.id(), cell.kind(), cell.title(), settings, quantities, steps, table, tables,
-                figures, verdicts, warnings, exports);
+                figures, verdicts, warnings, all);
     }
 
     /**

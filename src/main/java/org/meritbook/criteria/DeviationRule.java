@@ -6,11 +6,10 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.meritbook.analysis.DataTable;
+import org.meritbook.analysis.NominalValues;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.study.AnalysisKind;
-import org.meritbook.trail.Step;
-import org.meritbook.trail.StepInput;
 import org.meritbook.analysis.Verdict;
 
 /**
@@ -100,11 +99,9 @@ public record DeviationRule(String characteristic, double tolerance, double lowe
         return kind == AnalysisKind.CALIBRATION;
     }
 
-    /** The nominal concentration x the deviation step used, as its trail records it. */
+    /** The standard's nominal concentration, as the calibration section exports it ({@link NominalValues}). */
     private static double nominal(SectionResult section, Quantity deviation) {
-        Step step = section.steps().stream().filter(s -> s.id().equals(deviation.stepId())).findFirst()
-                .orElseThrow(() -> new IllegalStateException("no trail step for " + deviation.name()));
-        return step.inputs().stream().filter(in -> in.name().equals("x")).mapToDouble(StepInput::value).findFirst()
-                .orElseThrow(() -> new IllegalStateException("step " + step.id() + " records no nominal x"));
+        return NominalValues.of(section, deviation.name()).orElseThrow(() -> new IllegalStateException(
+                "calibration section " + section.id() + " exports no nominal concentration for " + deviation.name()));
     }
 }

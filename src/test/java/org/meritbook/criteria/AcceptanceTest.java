@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.meritbook.analysis.DataTable;
+import org.meritbook.analysis.NominalValues;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Setting;
@@ -36,10 +37,12 @@ class AcceptanceTest {
         List<Quantity> quantities = new ArrayList<>();
         List<Step> steps = new ArrayList<>();
         List<DataTable.Row> rows = new ArrayList<>();
+        java.util.Map<String, Double> nominals = new java.util.LinkedHashMap<>();
         quantities.add(new Quantity("r_squared", "r²", rSquared, null, "cal.r_squared", null, true));
         steps.add(new Step("cal.r_squared", "r²", "r²", List.of(), rSquared, null, null));
         for (int i = 0; i < nominal.length; i++) {
             String label = "P" + i;
+            nominals.put(label, nominal[i]);
             String id = "cal.deviation_percent:" + label;
             quantities.add(new Quantity("deviation_percent:" + label, "dev", deviation[i], "%", id, null, false));
             steps.add(new Step(id, "dev", "%dev = (x̂ − x) / x × 100",
@@ -48,7 +51,8 @@ class AcceptanceTest {
                     excluded.contains(label) ? "failed injection" : null));
         }
         return new SectionResult("cal", AnalysisKind.CALIBRATION, "Linearity", List.of(new Setting("Model", "model " + model, model)),
-                quantities, steps, new DataTable(List.of("Conc"), rows), List.of(), List.of(), List.of());
+                quantities, steps, new DataTable(List.of("Conc"), rows), List.of(), List.of(), List.of(),
+                List.of(new NominalValues(nominals)));
     }
 
     private static final double[] LEVELS = {1, 2, 5, 10, 20, 50, 100, 200};

@@ -12,6 +12,7 @@ import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meritbook.analysis.DataTable;
+import org.meritbook.analysis.NominalValues;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.TableCell;
@@ -40,8 +41,10 @@ class M10ProfileTest {
         List<Quantity> quantities = new ArrayList<>();
         List<Step> steps = new ArrayList<>();
         List<DataTable.Row> rows = new ArrayList<>();
+        Map<String, Double> nominals = new java.util.LinkedHashMap<>();
         for (int i = 0; i < nominal.length; i++) {
             String label = "P" + i;
+            nominals.put(label, nominal[i]);
             String id = "cal.deviation_percent:" + label;
             quantities.add(new Quantity("deviation_percent:" + label, "dev", deviation[i], "%", id, null, false));
             steps.add(new Step(id, "dev", "%dev = (x̂ − x) / x × 100",
@@ -49,7 +52,8 @@ class M10ProfileTest {
             rows.add(new DataTable.Row(label, List.of(TableCell.raw("1", "Cal!A" + (i + 2))), null));
         }
         return new SectionResult("cal", AnalysisKind.CALIBRATION, "Calibration", List.of(), quantities, steps,
-                new DataTable(List.of("Conc"), rows), List.of(), List.of(), List.of());
+                new DataTable(List.of("Conc"), rows), List.of(), List.of(), List.of(),
+                List.of(new NominalValues(nominals)));
     }
 
     /** An unknowns section of QC samples: name → {known ng/mL, deviation %}; the known value is a step input. */
@@ -57,7 +61,9 @@ class M10ProfileTest {
         List<Quantity> quantities = new ArrayList<>();
         List<Step> steps = new ArrayList<>();
         int row = 2;
+        Map<String, Double> nominals = new java.util.LinkedHashMap<>();
         for (Map.Entry<String, double[]> e : samples.entrySet()) {
+            nominals.put(e.getKey(), e.getValue()[0]);
             String id = "u.qc_deviation_percent:" + e.getKey();
             double known = e.getValue()[0];
             double dev = e.getValue()[1];
@@ -67,7 +73,7 @@ class M10ProfileTest {
                     StepInput.number("known", known, "ng/mL", "Samples!D" + row++)), dev, "%", null));
         }
         return new SectionResult("u", AnalysisKind.UNKNOWNS, "QC samples", List.of(), quantities, steps,
-                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of());
+                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of(), List.of(new NominalValues(nominals)));
     }
 
     private static List<Verdict> judged(SectionResult s) {
@@ -139,13 +145,15 @@ class M10ProfileTest {
     /**
      * An accuracy section whose levels are text labels: error_percent:&lt;level&gt; → recovery_percent:&lt;level&gt;
      * → row recoveries with their known value k, as AccuracyAnalysis records them, so the LLOQ is found
-     * through the trail.
+     * through the section's nominal values, as AccuracyAnalysis exports them.
      */
     private static SectionResult accuracy(String[] levels, double[] known, double[] error) {
         List<Quantity> quantities = new ArrayList<>();
         List<Step> steps = new ArrayList<>();
+        Map<String, Double> nominals = new java.util.LinkedHashMap<>();
         for (int i = 0; i < levels.length; i++) {
             String level = levels[i];
+            nominals.put(level, known[i]);
             List<StepInput> rows = new ArrayList<>();
             for (int r = 0; r < 3; r++) {
                 String rowId = "a.row_recovery_percent:" + level + r;
@@ -167,7 +175,7 @@ class M10ProfileTest {
         steps.add(new Step("a.error_percent", "error", "mean(R) − 100", List.of(), 30, "%", null));
         quantities.add(new Quantity("error_percent", "overall", 30, "%", "a.error_percent", null, false));
         return new SectionResult("a", AnalysisKind.ACCURACY, "Accuracy", List.of(), quantities, steps,
-                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of());
+                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of(), List.of(new NominalValues(nominals)));
     }
 
     @Test

@@ -199,8 +199,10 @@ public final class DossierFixtures {
         List<DataTable.Row> rows = new ArrayList<>();
         double[] stdRes = new double[n];
         double[] dev = new double[n];
+        java.util.Map<String, Double> nominals = new java.util.LinkedHashMap<>();
         for (int i = 0; i < n; i++) {
             String p = "P" + (i + 1);
+            nominals.put(p, x[i]);
             double back = (AREAS[i] - a) / b;
             dev[i] = (back - x[i]) / x[i] * 100;
             stdRes[i] = (AREAS[i] - a - b * x[i]) / s;
@@ -237,7 +239,8 @@ public final class DossierFixtures {
                         new Setting("Data", "runs!Calibration!A4:C25"), new Setting("Confidence level", "95 %")),
                 q, steps, table, figures, verdicts,
                 List.of("Point P17 (Calibration!C21) is excluded: " + EXCLUSION_REASON + ".",
-                        "Lack-of-fit test not evaluable in this fixture: the fixture does not compute it."));
+                        "Lack-of-fit test not evaluable in this fixture: the fixture does not compute it."),
+                List.of(new org.meritbook.analysis.NominalValues(nominals)));
     }
 
     private static List<FigureSpec> figures(double[] x, double a, double b, double s, double t, int m, double xbar,

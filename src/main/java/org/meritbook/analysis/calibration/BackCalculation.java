@@ -57,6 +57,7 @@ final class BackCalculation {
                         List.of(section.ref("x̂", backId),
                                 StepInput.number("x", p.x(), data.xUnit(), p.xCell().ref().address())),
                         deviation, "%"));
+                section.nominal(p.label(), p.x());
             }
         }
     }

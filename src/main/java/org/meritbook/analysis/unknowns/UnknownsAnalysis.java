@@ -249,6 +249,7 @@ public final class UnknownsAnalysis implements Analysis {
                     "(result − known) / known × 100", List.of(section.ref("result", resultId),
                             StepInput.number("known", known, units.known(), options.knownSource(g))),
                     (result - known) / known * 100.0, "%").inSummary());
+            section.nominal(id, known);
             if (units.known() != null && resultUnit != null && !units.known().equals(resultUnit)) {
                 throw new IllegalStateException("known and result units were checked to agree");
             }

@@ -128,6 +128,9 @@ class CalibrationAnalysisTest {
         assertEquals((back - X[3]) / X[3] * 100, q(s, "deviation_percent:B5"), 1e-10);
         // The standard at nominal 0 has no % deviation.
         assertTrue(s.quantity("deviation_percent:B2").isEmpty());
+        // Acceptance rules read each standard's nominal concentration from the typed export, not the trail.
+        assertEquals(X[3], org.meritbook.analysis.NominalValues.of(s, "deviation_percent:B5").getAsDouble(), 0);
+        assertTrue(org.meritbook.analysis.NominalValues.of(s, "deviation_percent:B2").isEmpty());
     }
 
     @Test
