@@ -24,7 +24,12 @@ public final class DossierWriter {
 
     /** The notebook's name without .md, e.g. {@code nitrite}: the study's output folder and its files' stem. */
     public static String stem(Study study) {
-        String name = study.file().getFileName().toString();
+        return stem(study.file());
+    }
+
+    /** The stem of a notebook file, as {@link #stem(Study)} names it, before the notebook is parsed. */
+    public static String stem(java.nio.file.Path notebook) {
+        String name = notebook.getFileName().toString();
         return name.toLowerCase(Locale.ROOT).endsWith(".md") ? name.substring(0, name.length() - 3) : name;
     }
 

@@ -8,8 +8,9 @@ import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
-import org.meritbook.publishing.PublishingSequence;
+import org.meritbook.dossier.DossierWriter;
 import org.meritbook.pipeline.StudyFolder;
+import org.meritbook.publishing.PublishingSequence;
 import org.meritbook.revision.RevisionDiffer;
 import org.meritbook.study.NotebookEdits;
 import org.meritbook.study.StudyParser;
@@ -38,9 +39,7 @@ final class RevisionIssuer {
 
     /** The study's output folder, {@code OUT/<stem>}. */
     Path folder() {
-        String name = notebook.getFileName().toString();
-        // as DossierWriter.stem names the study's folder
-        return out.resolve(name.toLowerCase(java.util.Locale.ROOT).endsWith(".md") ? name.substring(0, name.length() - 3) : name);
+        return out.resolve(DossierWriter.stem(notebook));
     }
 
     /**
@@ -73,8 +72,7 @@ final class RevisionIssuer {
             return new Latest(0, true);
         }
         Path file = json.get();
-        int revision = Integer.parseInt(REVISION_FOLDER.matcher(file.getParent().getFileName().toString())
-                .replaceFirst("$1"));
+        int revision = revisionOf(file);
         try {
             long modified = Files.getLastModifiedTime(file).toMillis();
             if (compared != null && compared.preview() == previewJson && compared.file().equals(file)
@@ -89,6 +87,11 @@ final class RevisionIssuer {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + file, e);
         }
+    }
+
+    /** The revision of a published results.json, from its folder's name ({@code rev3/results.json}: 3). */
+    private static int revisionOf(Path json) {
+        return Integer.parseInt(REVISION_FOLDER.matcher(json.getParent().getFileName().toString()).replaceFirst("$1"));
     }
 
     private Optional<Path> latestResults() {
@@ -131,8 +134,7 @@ final class RevisionIssuer {
 
     /** The latest published revision, 0 when none. */
     int latestPublished() {
-        return latestResults().map(json -> Integer.parseInt(REVISION_FOLDER.matcher(json.getParent().getFileName()
-                .toString()).replaceFirst("$1"))).orElse(0);
+        return latestResults().map(RevisionIssuer::revisionOf).orElse(0);
     }
 
     /**
