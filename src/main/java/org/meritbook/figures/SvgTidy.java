@@ -2,10 +2,8 @@ package org.meritbook.figures;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
-import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.Map;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 /**
  * Post-processes XChart's SVG so it can be inlined several times into one XHTML document: ids made
@@ -15,9 +13,6 @@ import java.util.regex.Pattern;
  * font at all: nothing in it can fall back to a non-embedded PDF font.
  */
 final class SvgTidy {
-    private static final Pattern LONG_DECIMAL = Pattern.compile("-?\\d+\\.\\d{3,}");
-    private static final Pattern CLIP_ID = Pattern.compile("\\bclip-?\\d+\\b");
-
     private SvgTidy() {
     }
 
@@ -28,28 +23,88 @@ final class SvgTidy {
         return s.substring(0, close + 1) + "\n  <title>" + escapeXml(title) + "</title>" + s.substring(close + 1);
     }
 
-    private static String renumberClips(String svg, String prefix) {
-        Map<String, String> ids = new LinkedHashMap<>();
-        Matcher m = CLIP_ID.matcher(svg);
-        StringBuilder out = new StringBuilder(svg.length());
-        while (m.find()) {
-            String id = ids.computeIfAbsent(m.group(), k -> prefix + "-clip" + (ids.size() + 1));
-            m.appendReplacement(out, Matcher.quoteReplacement(id));
+    /** Replaces each whole word {@code clip<digits>} or {@code clip-<digits>} by the figure's own id. */
+    static String renumberClips(String svg, String prefix) {
+        Map<String, String> ids = new HashMap<>();
+        StringBuilder out = new StringBuilder(svg.length() + 256);
+        int n = svg.length();
+        int copied = 0;
+        int at = svg.indexOf("clip", 0);
+        while (at >= 0) {
+            int end = clipIdEnd(svg, at);
+            if (end > 0) {
+                String id = ids.computeIfAbsent(svg.substring(at, end), k -> prefix + "-clip" + (ids.size() + 1));
+                out.append(svg, copied, at).append(id);
+                copied = end;
+            }
+            at = svg.indexOf("clip", end > 0 ? end : at + 1);
         }
-        m.appendTail(out);
-        return out.toString();
+        return copied == 0 ? svg : out.append(svg, copied, n).toString();
     }
 
-    private static String roundDecimals(String svg) {
-        Matcher m = LONG_DECIMAL.matcher(svg);
-        StringBuilder out = new StringBuilder(svg.length());
-        while (m.find()) {
-            BigDecimal v = new BigDecimal(m.group()).setScale(2, RoundingMode.HALF_UP).stripTrailingZeros();
-            String text = v.signum() == 0 ? "0" : v.toPlainString();
-            m.appendReplacement(out, text);
+    /** End of a clip id starting at {@code at} as a whole word, or -1 when there is none there. */
+    private static int clipIdEnd(String s, int at) {
+        if (at > 0 && isWordChar(s.charAt(at - 1))) {
+            return -1;
         }
-        m.appendTail(out);
-        return out.toString();
+        int i = at + 4;
+        if (i < s.length() && s.charAt(i) == '-') {
+            i++;
+        }
+        int digits = i;
+        while (i < s.length() && isDigit(s.charAt(i))) {
+            i++;
+        }
+        if (i == digits || i < s.length() && isWordChar(s.charAt(i))) {
+            return -1;
+        }
+        return i;
+    }
+
+    /** Rounds every decimal with three or more fraction digits to 1/100, as it was written leftmost first. */
+    static String roundDecimals(String svg) {
+        StringBuilder out = new StringBuilder(svg.length());
+        int n = svg.length();
+        int copied = 0;
+        int i = 0;
+        while (i < n) {
+            char c = svg.charAt(i);
+            int start = i;
+            int digits = c == '-' ? i + 1 : i;
+            if (digits >= n || !isDigit(svg.charAt(digits))) {
+                i++;
+                continue;
+            }
+            int j = digits;
+            while (j < n && isDigit(svg.charAt(j))) {
+                j++;
+            }
+            if (j < n && svg.charAt(j) == '.') {
+                int k = j + 1;
+                while (k < n && isDigit(svg.charAt(k))) {
+                    k++;
+                }
+                if (k - j - 1 >= 3) {
+                    BigDecimal v = new BigDecimal(svg.substring(start, k)).setScale(2, RoundingMode.HALF_UP)
+                            .stripTrailingZeros();
+                    out.append(svg, copied, start).append(v.signum() == 0 ? "0" : v.toPlainString());
+                    copied = k;
+                    i = k;
+                    continue;
+                }
+            }
+            // A shorter start inside the same digits fails the same way: resume after them.
+            i = j;
+        }
+        return copied == 0 ? svg : out.append(svg, copied, n).toString();
+    }
+
+    private static boolean isDigit(char c) {
+        return c >= '0' && c <= '9';
+    }
+
+    private static boolean isWordChar(char c) {
+        return c == '_' || Character.isLetterOrDigit(c); // what a regex word boundary counts as a word
     }
 
     static String escapeXml(String text) {
