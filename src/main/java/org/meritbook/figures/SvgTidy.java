@@ -61,7 +61,7 @@ final class SvgTidy {
         return i;
     }
 
-    /** Rounds every decimal with three or more fraction digits to 1/100, as it was written leftmost first. */
+    /** Rounds to 1/100 every decimal with three or more fraction digits, scanning left to right as {@code -?\d+\.\d{3,}} did. */
     static String roundDecimals(String svg) {
         StringBuilder out = new StringBuilder(svg.length());
         int n = svg.length();
