@@ -51,6 +51,29 @@ class SvgChartRendererTest {
         }
     }
 
+    /**
+     * Studies of a batch draw their figures at the same time. The SVG export formats coordinates
+     * through one DecimalFormat that the library shares between all threads (safe only because the
+     * JDK locks its digit list); concurrent figures must come out exactly as when drawn alone.
+     */
+    @Test
+    void figuresDrawnOnTwoThreadsAtOnceAreTheBytesDrawnAlone(@TempDir Path dir) throws Exception {
+        FigureSpec spec = fit(dir, DossierFixtures.PLAIN);
+        String alone = renderer.render(spec);
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(2);
+        try {
+            List<java.util.concurrent.Future<String>> drawn = new java.util.ArrayList<>();
+            for (int i = 0; i < 40; i++) {
+                drawn.add(pool.submit(() -> new SvgChartRenderer().render(spec)));
+            }
+            for (java.util.concurrent.Future<String> f : drawn) {
+                assertEquals(alone, f.get());
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
     @Test
     void hostileSeriesAndAxisTextStaysText(@TempDir Path dir) throws Exception {
         String svg = renderer.render(fit(dir, DossierFixtures.HOSTILE));
