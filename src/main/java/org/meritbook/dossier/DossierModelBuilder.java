@@ -25,7 +25,6 @@ import org.meritbook.dossier.DossierView.Summary;
 import org.meritbook.dossier.DossierView.SummaryRow;
 import org.meritbook.dossier.DossierView.TocEntry;
 import org.meritbook.dossier.DossierView.TrailGroup;
-import org.meritbook.figures.SvgChartRenderer;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.revision.RevisionContext;
 import org.meritbook.revision.RevisionDiff;
@@ -43,7 +42,6 @@ final class DossierModelBuilder {
 
     private final DisplayFormatter format = new DisplayFormatter();
     private final NarrativeRenderer narrative = new NarrativeRenderer();
-    private final SvgChartRenderer charts = new SvgChartRenderer();
     private final RenderEnvironment environment;
     private final List<SoftwareRow> renderingLibraries;
 
@@ -52,8 +50,9 @@ final class DossierModelBuilder {
         this.renderingLibraries = List.copyOf(renderingLibraries);
     }
 
+    /** @param figureArt takes each figure and gives the placeholder the view holds until the drawing is done */
     DossierView build(StudyResults results, List<PdfAFinisher.Embedded> files, DocumentDate date, String documentId,
-                      RevisionContext earlier) {
+                      RevisionContext earlier, FigureArt figureArt) {
         FrontMatter fm = results.study().frontMatter();
         NarrativePlacement placement = new NarrativePlacement(results.study(), narrative);
         List<TocEntry> toc = new ArrayList<>();
@@ -70,7 +69,7 @@ final class DossierModelBuilder {
         Map<String, SectionResult> byId = new LinkedHashMap<>();
         results.sections().forEach(s -> byId.put(s.id(), s));
         TrailViewBuilder trail = new TrailViewBuilder(results.sections(), "A", format);
-        SectionViewBuilder sectionBuilder = new SectionViewBuilder(format, charts, trail);
+        SectionViewBuilder sectionBuilder = new SectionViewBuilder(format, figureArt, trail);
         List<SectionView> sections = new ArrayList<>();
         for (AnalysisCell cell : results.study().cells()) {
             String number = String.valueOf(++chapter);

@@ -17,6 +17,7 @@ import java.util.Properties;
 import org.meritbook.dossier.DossierView.SoftwareRow;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
+import org.meritbook.figures.SvgChartRenderer;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.revision.RevisionContext;
 import org.meritbook.pipeline.InputFile;
@@ -32,7 +33,10 @@ public final class DossierRenderer {
     private final DossierModelBuilder model;
     private final PdfRenderer pdf;
     private final PdfAFinisher finisher = new PdfAFinisher();
+    private final SvgChartRenderer charts = new SvgChartRenderer();
     private final String meritbookVersion;
+    /** Lays out the pages with the drawings already in them: the plain way, kept to test the quick one against. */
+    private final boolean figuresInline;
 
     /** @param templateDir a lab's template folder ({@code --templates DIR}); empty for the defaults */
     public DossierRenderer(Optional<Path> templateDir) {
@@ -40,6 +44,11 @@ public final class DossierRenderer {
     }
 
     public DossierRenderer(Optional<Path> templateDir, RenderEnvironment environment) {
+        this(templateDir, environment, false);
+    }
+
+    DossierRenderer(Optional<Path> templateDir, RenderEnvironment environment, boolean figuresInline) {
+        this.figuresInline = figuresInline;
         this.templates = new TemplateEngine(templateDir);
         this.model = new DossierModelBuilder(environment, renderingLibraries());
         this.pdf = new PdfRenderer(new EmbeddedFonts(templateDir));
@@ -60,14 +69,15 @@ public final class DossierRenderer {
      */
     public RenderedDossier render(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
         Prepared p = prepare(results, resultsJson, revisions);
-        byte[] html = templates.render(p.view().forPdf(false)).getBytes(StandardCharsets.UTF_8);
-        String xhtml = templates.render(p.view());
+        // The figures are drawn on a worker while this thread lays out the pages around placeholders.
+        p.figureArt().startDrawing();
+        String xhtml = templates.render(figuresInline ? p.view().withFigureMarkup(p.figureArt().resolver()) : p.view());
         FrontMatter fm = results.study().frontMatter();
         String subject = "Validation dossier, method " + p.view().cover().method() + ", revision " + fm.revision();
         PdfAFinisher.Metadata meta = new PdfAFinisher.Metadata(fm.title(), p.view().cover().preparedBy(), subject,
                 "meritbook " + meritbookVersion, p.date().calendar(), p.id());
-        byte[] pdfBytes = finisher.finish(pdf.render(xhtml), meta, p.files());
-        return new RenderedDossier(html, pdfBytes);
+        byte[] pdfBytes = finisher.finish(pdf.render(xhtml, p.figureArt()), meta, p.files());
+        return new RenderedDossier(html(p), pdfBytes);
     }
 
     /**
@@ -80,12 +90,17 @@ public final class DossierRenderer {
 
     /** The HTML dossier alone, with the earlier revisions' history and the changes since the latest. */
     public byte[] renderHtml(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
-        Prepared p = prepare(results, resultsJson, revisions);
-        return templates.render(p.view().forPdf(false)).getBytes(StandardCharsets.UTF_8);
+        return html(prepare(results, resultsJson, revisions));
+    }
+
+    private byte[] html(Prepared p) {
+        DossierView drawn = p.view().withFigureMarkup(p.figureArt().resolver());
+        return templates.render(drawn.forPdf(false)).getBytes(StandardCharsets.UTF_8);
     }
 
     /** What both renderings need: the attached files' bytes, the document id and date, the view-model. */
-    private record Prepared(DossierView view, List<PdfAFinisher.Embedded> files, byte[] id, DocumentDate date) {
+    private record Prepared(DossierView view, FigureArt figureArt, List<PdfAFinisher.Embedded> files, byte[] id,
+                            DocumentDate date) {
     }
 
     private Prepared prepare(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
@@ -97,8 +112,9 @@ public final class DossierRenderer {
         byte[] id = documentId(files);
         String idHex = HexFormat.of().formatHex(id);
         DocumentDate date = DocumentDate.of(results.study().frontMatter(), results.inputs());
-        DossierView view = model.build(results, files, date, idHex, revisions);
-        return new Prepared(view, files, id, date);
+        FigureArt art = new FigureArt(charts);
+        DossierView view = model.build(results, files, date, idHex, revisions, art);
+        return new Prepared(view, art, files, id, date);
     }
 
     /** Reads an input to attach, checking it is still the file the run read (same SHA-256). */

@@ -1,6 +1,7 @@
 package org.meritbook.dossier;
 
 import java.util.List;
+import java.util.function.UnaryOperator;
 
 /**
  * The typed view-model of a whole dossier: every value already formatted, nothing null (Freemarker
@@ -34,6 +35,12 @@ public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions,
     DossierView forPdf(boolean asPdf) {
         return new DossierView(asPdf, cover, revisions, changes, contents, summary, intro, sections, closing, trail, inputs,
                 software, notes);
+    }
+
+    /** The same view with each figure's markup passed through {@code art} (placeholder to drawing). */
+    DossierView withFigureMarkup(UnaryOperator<Markup> art) {
+        return new DossierView(pdf, cover, revisions, changes, contents, summary, intro,
+                sections.stream().map(s -> s.withFigureMarkup(art)).toList(), closing, trail, inputs, software, notes);
     }
 
     /**

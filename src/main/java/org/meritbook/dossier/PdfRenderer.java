@@ -46,7 +46,8 @@ final class PdfRenderer {
         this.coverage = new GlyphCoverage(fonts);
     }
 
-    PDDocument render(String xhtml) {
+    /** @param figureArt the figures whose placeholders the XHTML holds; put in after layout, before painting */
+    PDDocument render(String xhtml, FigureArt figureArt) {
         Document dom = parse(xhtml);
         coverage.substitute(dom.getDocumentElement());
         PdfRendererBuilder b = new PdfRendererBuilder();
@@ -63,6 +64,7 @@ final class PdfRenderer {
         b.withW3cDocument(dom, BASE_URI);
         try (PdfBoxRenderer renderer = b.buildPdfRenderer()) {
             renderer.layout();
+            figureArt.fillIn(dom, coverage);
             return renderer.createPDFKeepOpen();
         } catch (IOException e) {
             throw new UncheckedIOException("PDF rendering failed", e);

@@ -1,6 +1,7 @@
 package org.meritbook.dossier;
 
 import java.util.List;
+import java.util.function.UnaryOperator;
 
 /**
  * One analysis cell as the dossier shows it, in notebook order.
@@ -32,6 +33,14 @@ public record SectionView(String number, String anchor, String id, String kind, 
         results = List.copyOf(results);
         verdicts = List.copyOf(verdicts);
         warnings = List.copyOf(warnings);
+    }
+
+    /** The same section with each figure's markup passed through {@code art} (placeholder to drawing). */
+    SectionView withFigureMarkup(UnaryOperator<Markup> art) {
+        List<FigureView> drawn = figures.stream()
+                .map(f -> new FigureView(f.number(), f.anchor(), f.caption(), art.apply(f.svg()))).toList();
+        return new SectionView(number, anchor, id, kind, title, narrativeBefore, narrativeAfter, settings, table, tables,
+                drawn, results, verdicts, warnings, available);
     }
 
     public record SettingRow(String label, String value) {

@@ -24,7 +24,6 @@ import org.meritbook.dossier.SectionView.TableRow;
 import org.meritbook.dossier.SectionView.TableView;
 import org.meritbook.dossier.SectionView.VerdictRow;
 import org.meritbook.figures.FigureSpec;
-import org.meritbook.figures.SvgChartRenderer;
 import org.meritbook.trail.Step;
 
 /** Builds one {@link SectionView} from a section result: table, figures, results, verdicts, warnings. */
@@ -34,12 +33,12 @@ final class SectionViewBuilder {
     /** A result table with more columns than this is set in a smaller font to keep within A4. */
     private static final int WIDE_TABLE = 6;
     private final DisplayFormatter format;
-    private final SvgChartRenderer charts;
+    private final FigureArt figureArt;
     private final TrailViewBuilder trail;
 
-    SectionViewBuilder(DisplayFormatter format, SvgChartRenderer charts, TrailViewBuilder trail) {
+    SectionViewBuilder(DisplayFormatter format, FigureArt figureArt, TrailViewBuilder trail) {
         this.format = format;
-        this.charts = charts;
+        this.figureArt = figureArt;
         this.trail = trail;
     }
 
@@ -61,7 +60,7 @@ final class SectionViewBuilder {
         for (FigureSpec spec : r.figures()) {
             f++;
             figures.add(new FigureView("Figure " + number + "." + f, anchor + "-fig-" + f,
-                    spec.title() == null ? spec.id() : spec.title(), new Markup(charts.render(spec))));
+                    spec.title() == null ? spec.id() : spec.title(), figureArt.placeholder(spec)));
         }
         List<ResultRow> results = new ArrayList<>();
         for (Quantity q : r.quantities()) {

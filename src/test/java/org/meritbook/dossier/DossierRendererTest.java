@@ -179,6 +179,16 @@ class DossierRendererTest {
     }
 
     @Test
+    void figuresDrawnWhileThePagesAreLaidOutGiveTheBytesOfFiguresDrawnInline(@TempDir Path dir) throws Exception {
+        StudyResults results = DossierFixtures.results(dir);
+        RenderedDossier inline = new DossierRenderer(Optional.empty(), PINNED, true).render(results, RESULTS_JSON);
+        assertTrue(new String(inline.html(), StandardCharsets.UTF_8).contains("<path"), "the fixture has drawings");
+        assertEquals(sha256(inline.pdf()), sha256(plain.pdf()), "PDF");
+        assertEquals(sha256(inline.html()), sha256(plain.html()), "HTML");
+        assertFalse(new String(plain.html(), StandardCharsets.UTF_8).contains(FigureArt.MARK), "no placeholder left");
+    }
+
+    @Test
     void hostileTextRendersLiterallyInBothFormats(@TempDir Path dir) throws Exception {
         RenderedDossier d = renderer.render(DossierFixtures.results(dir, DossierFixtures.HOSTILE), RESULTS_JSON);
         Files.write(Path.of("target/hostile-dossier.pdf"), d.pdf());
