@@ -14,6 +14,10 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
 import java.util.Properties;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.Future;
+import java.util.concurrent.FutureTask;
 import org.meritbook.dossier.DossierView.SoftwareRow;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
@@ -29,14 +33,22 @@ import org.meritbook.study.FrontMatter;
  * templates and the {@link RenderEnvironment}): the same inputs give byte-identical output.
  */
 public final class DossierRenderer {
-    private final TemplateEngine templates;
-    private final DossierModelBuilder model;
-    private final PdfRenderer pdf;
+    private final Future<Parts> parts;
     private final PdfAFinisher finisher = new PdfAFinisher();
     private final SvgChartRenderer charts = new SvgChartRenderer();
-    private final String meritbookVersion;
+    private final String meritbookVersion = Optional.ofNullable(
+            DossierRenderer.class.getPackage().getImplementationVersion()).orElse("development build");
     /** Lays out the pages with the drawings already in them: the plain way, kept to test the quick one against. */
     private final boolean figuresInline;
+
+    /** What takes time to set up: the templates, the fonts (read and checked), the colour profile. */
+    private record Parts(TemplateEngine templates, DossierModelBuilder model, PdfRenderer pdf) {
+        static Parts of(Optional<Path> templateDir, RenderEnvironment environment) {
+            return new Parts(new TemplateEngine(templateDir),
+                    new DossierModelBuilder(environment, renderingLibraries()),
+                    new PdfRenderer(new EmbeddedFonts(templateDir)));
+        }
+    }
 
     /** @param templateDir a lab's template folder ({@code --templates DIR}); empty for the defaults */
     public DossierRenderer(Optional<Path> templateDir) {
@@ -49,11 +61,50 @@ public final class DossierRenderer {
 
     DossierRenderer(Optional<Path> templateDir, RenderEnvironment environment, boolean figuresInline) {
         this.figuresInline = figuresInline;
-        this.templates = new TemplateEngine(templateDir);
-        this.model = new DossierModelBuilder(environment, renderingLibraries());
-        this.pdf = new PdfRenderer(new EmbeddedFonts(templateDir));
-        this.meritbookVersion = Optional.ofNullable(DossierRenderer.class.getPackage().getImplementationVersion())
-                .orElse("development build");
+        this.parts = CompletableFuture.completedFuture(Parts.of(templateDir, environment));
+    }
+
+    private DossierRenderer(Future<Parts> parts) {
+        this.figuresInline = false;
+        this.parts = parts;
+    }
+
+    /**
+     * A renderer that sets itself up, and renders a throw-away dossier, on a second thread while the
+     * caller goes on (reading the workbook, computing): a command's first dossier then starts on
+     * warm code. The first render waits for that and throws what setting up threw (a lab template
+     * that fails to load, say); a template folder that does not exist is refused here, at once.
+     */
+    public static DossierRenderer warmingUp(Optional<Path> templateDir) {
+        templateDir.ifPresent(TemplateEngine::requireFolder); // a mistyped folder is told before the study runs
+        SvgChartRenderer warmUpCharts = new SvgChartRenderer();
+        FutureTask<Parts> ready = new FutureTask<>(() -> {
+            Parts p = Parts.of(templateDir, RenderEnvironment.current());
+            RenderingWarmUp.run(p.pdf(), new PdfAFinisher(), warmUpCharts);
+            return p;
+        });
+        Thread worker = new Thread(ready, "meritbook-warm-up");
+        worker.setDaemon(true); // a run that fails early must not wait for it
+        worker.start();
+        return new DossierRenderer(ready);
+    }
+
+    private Parts parts() {
+        try {
+            return parts.get();
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException r) {
+                throw r;
+            }
+            if (cause instanceof Error err) {
+                throw err;
+            }
+            throw new IllegalStateException("setting up the dossier renderer failed", cause);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while the dossier renderer was set up", e);
+        }
     }
 
     /**
@@ -69,14 +120,16 @@ public final class DossierRenderer {
      */
     public RenderedDossier render(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
         Prepared p = prepare(results, resultsJson, revisions);
+        Parts parts = parts();
         // The figures are drawn on a worker while this thread lays out the pages around placeholders.
         p.figureArt().startDrawing();
-        String xhtml = templates.render(figuresInline ? p.view().withFigureMarkup(p.figureArt().resolver()) : p.view());
+        DossierView laidOut = figuresInline ? p.view().withFigureMarkup(p.figureArt().resolver()) : p.view();
+        String xhtml = parts.templates().render(laidOut);
         FrontMatter fm = results.study().frontMatter();
         String subject = "Validation dossier, method " + p.view().cover().method() + ", revision " + fm.revision();
         PdfAFinisher.Metadata meta = new PdfAFinisher.Metadata(fm.title(), p.view().cover().preparedBy(), subject,
                 "meritbook " + meritbookVersion, p.date().calendar(), p.id());
-        byte[] pdfBytes = finisher.finish(pdf.render(xhtml, p.figureArt()), meta, p.files());
+        byte[] pdfBytes = finisher.finish(parts.pdf().render(xhtml, p.figureArt()), meta, p.files());
         return new RenderedDossier(html(p), pdfBytes);
     }
 
@@ -95,7 +148,7 @@ public final class DossierRenderer {
 
     private byte[] html(Prepared p) {
         DossierView drawn = p.view().withFigureMarkup(p.figureArt().resolver());
-        return templates.render(drawn.forPdf(false)).getBytes(StandardCharsets.UTF_8);
+        return parts().templates().render(drawn.forPdf(false)).getBytes(StandardCharsets.UTF_8);
     }
 
     /** What both renderings need: the attached files' bytes, the document id and date, the view-model. */
@@ -113,7 +166,7 @@ public final class DossierRenderer {
         String idHex = HexFormat.of().formatHex(id);
         DocumentDate date = DocumentDate.of(results.study().frontMatter(), results.inputs());
         FigureArt art = new FigureArt(charts);
-        DossierView view = model.build(results, files, date, idHex, revisions, art);
+        DossierView view = parts().model().build(results, files, date, idHex, revisions, art);
         return new Prepared(view, art, files, id, date);
     }
 

@@ -12,12 +12,15 @@ import freemarker.template.TemplateExceptionHandler;
 import java.io.IOException;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.TimeZone;
+import org.meritbook.error.ErrorKey;
+import org.meritbook.error.InputException;
 
 /**
  * Freemarker, configured to lay out and nothing else: XHTML output with auto-escaping (text from
@@ -35,6 +38,7 @@ final class TemplateEngine {
         cfg = new Configuration(Configuration.VERSION_2_3_34);
         List<TemplateLoader> loaders = new ArrayList<>();
         templateDir.ifPresent(dir -> {
+            requireFolder(dir);
             try {
                 loaders.add(new FileTemplateLoader(dir.toFile()));
             } catch (IOException e) {
@@ -56,6 +60,16 @@ final class TemplateEngine {
         cfg.setTimeZone(TimeZone.getTimeZone("UTC"));
         cfg.setNumberFormat("computer");
         cfg.setBooleanFormat("c");
+    }
+
+    /** A lab's template folder must be a folder: a mistyped path is the user's to fix, not an internal error. */
+    static void requireFolder(Path dir) {
+        if (Files.isDirectory(dir)) {
+            return;
+        }
+        throw new InputException(ErrorKey.FILE_NOT_FOUND, dir.toString(), "a folder of dossier templates (--templates)",
+                Files.exists(dir) ? "a file, not a folder" : "no such folder",
+                "Give the folder that holds the lab's copy of report-templates/, or leave --templates out.");
     }
 
     String render(DossierView view) {

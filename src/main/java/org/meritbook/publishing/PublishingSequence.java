@@ -43,9 +43,12 @@ public final class PublishingSequence {
         this.renderer = Objects.requireNonNull(renderer, "renderer");
     }
 
-    /** The built-in analyses and the default templates, or a lab's ({@code --templates DIR}). */
+    /**
+     * The built-in analyses and the default templates, or a lab's ({@code --templates DIR}); the
+     * renderer sets itself up on a second thread while the study is read and computed.
+     */
     public static PublishingSequence standard(Optional<Path> templates) {
-        return new PublishingSequence(StudyRunner.withBuiltInAnalyses()::run, new DossierRenderer(templates));
+        return new PublishingSequence(StudyRunner.withBuiltInAnalyses()::run, DossierRenderer.warmingUp(templates));
     }
 
     /**

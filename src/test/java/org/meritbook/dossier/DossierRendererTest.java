@@ -28,6 +28,7 @@ import org.apache.pdfbox.text.TextPosition;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.meritbook.error.InputException;
 import org.meritbook.pipeline.StudyResults;
 
 class DossierRendererTest {
@@ -186,6 +187,27 @@ class DossierRendererTest {
         assertEquals(sha256(inline.pdf()), sha256(plain.pdf()), "PDF");
         assertEquals(sha256(inline.html()), sha256(plain.html()), "HTML");
         assertFalse(new String(plain.html(), StandardCharsets.UTF_8).contains(FigureArt.MARK), "no placeholder left");
+    }
+
+    @Test
+    void aRendererThatWarmedUpOnASecondThreadRendersTheBytesOfOneThatDidNot(@TempDir Path dir) throws Exception {
+        StudyResults results = DossierFixtures.results(dir);
+        RenderedDossier direct = new DossierRenderer(Optional.empty()).render(results, RESULTS_JSON);
+        RenderedDossier warmed = DossierRenderer.warmingUp(Optional.empty()).render(results, RESULTS_JSON);
+        assertEquals(sha256(direct.pdf()), sha256(warmed.pdf()), "PDF");
+        assertEquals(sha256(direct.html()), sha256(warmed.html()), "HTML");
+    }
+
+    @Test
+    void aTemplateFolderThatIsNotAFolderIsRefusedAtOnceNamingIt(@TempDir Path dir) throws IOException {
+        Path file = Files.writeString(dir.resolve("templates.txt"), "not a folder");
+        InputException e = assertThrows(InputException.class, () -> DossierRenderer.warmingUp(Optional.of(file)));
+        assertTrue(e.getMessage().contains(file.toString()) && e.getMessage().contains("a file, not a folder"),
+                e.getMessage());
+        Path missing = dir.resolve("no-such-folder");
+        e = assertThrows(InputException.class, () -> new DossierRenderer(Optional.of(missing)));
+        assertTrue(e.getMessage().contains(missing.toString()) && e.getMessage().contains("no such folder"),
+                e.getMessage());
     }
 
     @Test
