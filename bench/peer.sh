@@ -43,6 +43,7 @@ echo "== warm-up: ./meritbook run (builds if needed, writes the class-data archi
 Rscript bench/peer.R "$workbook" "$tmp/warm/peer.pdf" >/dev/null
 
 echo "== $runs cold runs each, alternating (other processes on the machine add noise)"
+echo "load average before: $(cut -d' ' -f1-3 /proc/loadavg) on $(nproc) cores"
 printf '%-4s %-10s %9s %9s %12s\n' run tool "wall s" "user s" "peak RSS MB"
 for i in $(seq 1 "$runs"); do
   /usr/bin/time -f '%e %U %M' -o "$tmp/meritbook.$i.time" \
@@ -55,6 +56,8 @@ for i in $(seq 1 "$runs"); do
     printf '%-4s %-10s %9.2f %9.2f %12.0f\n' "$i" "$tool" "$wall" "$user" "$((rss / 1024))"
   done
 done
+
+echo "load average after:  $(cut -d' ' -f1-3 /proc/loadavg)"
 
 python3 - "$tmp" "$runs" "$tolerance" <<'PY'
 import json, re, statistics, sys
