@@ -30,18 +30,20 @@ class BatchRunTest {
     Path dir;
 
     /**
-     * Two copies of the demo (the renders that take seconds, so both threads render at once) with a
-     * broken notebook between them: each written set is byte for byte what a single run of that
-     * notebook writes (the demo's date is its front-matter date, so no clock enters the bytes), the
-     * bad one is reported with a single run's words, and everything comes out in argument order.
+     * The demo (a render of seconds) and a small study render at the same time on the two workers,
+     * with a broken notebook between them: each written set is byte for byte what a single run of
+     * that notebook writes (both notebooks state their date, so no clock enters the bytes), the bad
+     * one is reported in a single run's words, and everything comes out whole in argument order.
+     * bench/batch.sh does the same check on N copies of the demo rendering side by side.
      */
     @Test
     void aBatchWritesWhatSingleRunsWriteAndReportsEachStudyWholeInArgumentOrder() throws Exception {
         Files.copy(DEMO_WORKBOOK, dir.resolve(DEMO_WORKBOOK.getFileName()));
         Path first = Files.copy(DEMO, dir.resolve(DEMO.getFileName()));
-        Path second = Files.copy(DEMO, dir.resolve("second-study.md"));
         Path bad = dir.resolve("bad.md");
         Files.writeString(bad, "---\ntitle: Left unfinished\n");
+        SmallCalibration.csv(dir.resolve("runs.csv"));
+        Path second = small("second-study.md", null);
 
         Path single = dir.resolve("single");
         Outcome firstAlone = Cli.execute("run", first.toString(), "-o", single.toString());
