@@ -98,7 +98,7 @@ final class StudyBatch {
      * e.g. {@code meritbook: 4 studies: 2 written, 0 unchanged, 1 failed acceptance (b.md), 1 could not run (c.md)};
      * a study that failed acceptance has its dossier written all the same, as in a single run.
      */
-    static String summary(List<StudyReport> reports) {
+    private static String summary(List<StudyReport> reports) {
         return "meritbook: " + reports.size() + " studies: " + count(reports, StudyReport.Kind.WRITTEN) + " written, "
                 + count(reports, StudyReport.Kind.UNCHANGED) + " unchanged, "
                 + named(reports, StudyReport.Kind.FAILED_ACCEPTANCE, "failed acceptance") + ", "
