@@ -101,6 +101,18 @@ class BatchRunTest {
         Outcome missing = Cli.execute("run", failing.toString(), dir.resolve("absent.md").toString(), "-o", out);
         assertEquals(Main.BAD_INPUT, missing.code(), "2 outranks 1");
         assertTrue(missing.err().contains("absent.md"), missing.err());
+
+        // A lab template that names a value the dossier lacks fails the render: an internal error, exit 3.
+        Path templates = Files.createDirectories(dir.resolve("broken-templates"));
+        Files.writeString(templates.resolve("dossier.ftlh"), "<html>${noSuchValue}</html>");
+        Outcome internal = Cli.execute("run", dir.resolve("absent.md").toString(), passing.toString(),
+                "--templates", templates.toString(), "-o", dir.resolve("elsewhere").toString());
+        assertEquals(Main.INTERNAL_ERROR, internal.code(), "3 outranks 2");
+        assertTrue(internal.err().contains("meritbook: internal error, please report it"), internal.err());
+        assertTrue(internal.out().endsWith("meritbook: 2 studies: 0 written, 0 unchanged, 0 failed acceptance, "
+                + "2 could not run (" + dir.resolve("absent.md") + ", " + passing + ")" + System.lineSeparator()),
+                internal.out());
+        assertFalse(Files.exists(dir.resolve("elsewhere/passing/rev1")), "nothing published without a dossier");
     }
 
     @Test
