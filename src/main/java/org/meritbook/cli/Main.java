@@ -8,7 +8,8 @@ import picocli.CommandLine.Command;
 
 /**
  * The {@code meritbook} command. Exit codes (DESIGN §6): 0 done, 1 acceptance failures (the
- * dossier is still written), 2 bad input, 3 internal error.
+ * dossier is still written), 2 bad input, 3 internal error; numbered by severity, so a batch
+ * {@code run} exits with the highest of its studies' codes.
  */
 @Command(name = "meritbook", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Computes the figures of merit of a quantitative analytical method from lab workbooks "
@@ -45,12 +46,17 @@ public final class Main implements Runnable {
         try {
             return command.getAsInt();
         } catch (OutOfMemoryError e) {
-            err.println("meritbook: out of memory (" + (e.getMessage() == null ? "Java heap" : e.getMessage())
-                    + "): the workbooks and ranges read need more memory than Java was given. Give it more "
-                    + "(MERITBOOK_JAVA_OPTS=-Xmx4g) or read a smaller range.");
-            err.flush();
-            return INTERNAL_ERROR;
+            return reportOutOfMemory(e, err);
         }
+    }
+
+    /** The one line {@link #guarded} prints for running out of memory; exit 3. */
+    static int reportOutOfMemory(OutOfMemoryError e, PrintWriter err) {
+        err.println("meritbook: out of memory (" + (e.getMessage() == null ? "Java heap" : e.getMessage())
+                + "): the workbooks and ranges read need more memory than Java was given. Give it more "
+                + "(MERITBOOK_JAVA_OPTS=-Xmx4g) or read a smaller range.");
+        err.flush();
+        return INTERNAL_ERROR;
     }
 
     /** The configured command line; tests execute it in-process. */
@@ -61,7 +67,14 @@ public final class Main implements Runnable {
     }
 
     private static int handle(Exception e, CommandLine cl, CommandLine.ParseResult parsed) {
-        PrintWriter err = cl.getErr();
+        return report(e, cl.getErr());
+    }
+
+    /**
+     * How a command's failure is told: located input problems (exit 2), or an internal error with
+     * its trace (exit 3). A batch {@code run} tells each study's failure the same way.
+     */
+    static int report(Exception e, PrintWriter err) {
         if (e instanceof java.io.UncheckedIOException io && io.getCause() instanceof java.nio.file.AccessDeniedException denied) {
             // Any path the environment refuses, wherever it is met: the user's to fix, so exit 2.
             err.println("meritbook: the input needs attention (1 problem):");

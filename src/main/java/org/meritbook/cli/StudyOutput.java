@@ -18,9 +18,23 @@ final class StudyOutput {
     private StudyOutput() {
     }
 
+    /** What one issued study came to: its exit code and whether its output set was new, replaced or unchanged. */
+    record Written(int code, StudyFolder.Outcome outcome) {
+    }
+
     /** Issues the notebook's revision through the publishing sequence and reports it. */
     static int runAndWrite(Path notebook, OutputOptions options, PrintWriter out) {
-        PublishingSequence.Issued issued = PublishingSequence.standard(Optional.ofNullable(options.templates))
+        return runAndWrite(sequence(options), notebook, options, out).code();
+    }
+
+    /** The publishing sequence with the templates the options name. */
+    static PublishingSequence sequence(OutputOptions options) {
+        return PublishingSequence.standard(Optional.ofNullable(options.templates));
+    }
+
+    /** {@link #runAndWrite(Path, OutputOptions, PrintWriter)} through a given sequence (a batch worker's own). */
+    static Written runAndWrite(PublishingSequence sequence, Path notebook, OutputOptions options, PrintWriter out) {
+        PublishingSequence.Issued issued = sequence
                 .issue(notebook, options.out, options.force, folder -> {
                     out.println("meritbook: waiting for another run that is publishing into " + folder);
                     out.flush();
@@ -63,7 +77,8 @@ final class StudyOutput {
         };
         published.files().forEach(p -> out.println("  " + verb + p));
         out.flush();
-        return count(verdicts, Verdict.Outcome.FAIL) > 0 ? Main.ACCEPTANCE_FAILED : Main.DONE;
+        return new Written(count(verdicts, Verdict.Outcome.FAIL) > 0 ? Main.ACCEPTANCE_FAILED : Main.DONE,
+                published.outcome());
     }
 
     private static long count(List<Verdict> verdicts, Verdict.Outcome outcome) {

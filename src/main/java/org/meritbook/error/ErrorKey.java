@@ -45,6 +45,11 @@ public enum ErrorKey {
     ZERO_KNOWN_VALUE,
     /** Values a statistic cannot take at all (non-finite, or beyond double precision's squares). */
     UNUSABLE_VALUES,
+    // command line
+    /** One notebook file given twice to a batch run. */
+    REPEATED_NOTEBOOK,
+    /** Two notebooks of a batch run that would publish into one study folder (one revision history). */
+    SHARED_STUDY_FOLDER,
     // outputs
     OUTPUT_EXISTS,
     /** The output folder or file cannot be written where the user's environment puts it. */

@@ -80,6 +80,11 @@ public final class PublishingSequence {
         return out.resolve(DossierWriter.stem(study));
     }
 
+    /** The same folder named from the notebook's path, before it is parsed (a batch checks its arguments first). */
+    public static Path studyFolder(Path out, Path notebook) {
+        return out.resolve(DossierWriter.stem(notebook));
+    }
+
     /** Step 1: the study run (parse done by the caller, who may need the parse alone first). */
     public StudyResults run(Study study) {
         return runner.apply(study);
