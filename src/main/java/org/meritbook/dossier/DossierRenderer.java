@@ -35,7 +35,7 @@ import org.meritbook.study.FrontMatter;
 public final class DossierRenderer {
     private final Future<Parts> parts;
     private final PdfAFinisher finisher = new PdfAFinisher();
-    private final SvgChartRenderer charts = new SvgChartRenderer();
+    private final FigureCache figures = new FigureCache(new SvgChartRenderer()::render);
     private final String meritbookVersion = Optional.ofNullable(
             DossierRenderer.class.getPackage().getImplementationVersion()).orElse("development build");
     /** Lays out the pages with the drawings already in them: the plain way, kept to test the quick one against. */
@@ -165,7 +165,7 @@ public final class DossierRenderer {
         byte[] id = documentId(files);
         String idHex = HexFormat.of().formatHex(id);
         DocumentDate date = DocumentDate.of(results.study().frontMatter(), results.inputs());
-        FigureArt art = new FigureArt(charts);
+        FigureArt art = new FigureArt(figures::drawing);
         DossierView view = parts().model().build(results, files, date, idHex, revisions, art);
         return new Prepared(view, art, files, id, date);
     }

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.concurrent.CancellationException;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
+import java.util.function.Function;
 import java.util.function.UnaryOperator;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.figures.SvgChartRenderer;
@@ -32,13 +33,14 @@ final class FigureArt {
             + SvgChartRenderer.HEIGHT + "\" width=\"" + SvgChartRenderer.WIDTH + "px\" x=\"0px\" y=\"0px\" xmlns=\""
             + SVG_NS + "\">";
 
-    private final SvgChartRenderer charts;
+    private final Function<FigureSpec, String> draw;
     private final List<FigureSpec> specs = new ArrayList<>();
     private final Map<Markup, Integer> placeholders = new HashMap<>();
     private FutureTask<List<String>> drawing;
 
-    FigureArt(SvgChartRenderer charts) {
-        this.charts = charts;
+    /** @param draw a figure's SVG ({@link SvgChartRenderer#render}, or a {@link FigureCache}'s drawing) */
+    FigureArt(Function<FigureSpec, String> draw) {
+        this.draw = draw;
     }
 
     /** Registers a figure to draw and returns its placeholder markup (what the PDF's layout sees). */
@@ -56,7 +58,7 @@ final class FigureArt {
     /** Starts drawing every registered figure, in order, on a worker thread. */
     void startDrawing() {
         List<FigureSpec> toDraw = List.copyOf(specs);
-        drawing = new FutureTask<>(() -> toDraw.stream().map(charts::render).toList());
+        drawing = new FutureTask<>(() -> toDraw.stream().map(draw).toList());
         Thread worker = new Thread(drawing, "meritbook-figures");
         worker.setDaemon(true); // a failed render elsewhere must not keep the JVM alive
         worker.start();

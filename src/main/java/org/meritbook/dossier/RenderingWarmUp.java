@@ -27,7 +27,7 @@ final class RenderingWarmUp {
     }
 
     static void run(PdfRenderer pdf, PdfAFinisher finisher, SvgChartRenderer charts) {
-        FigureArt art = new FigureArt(charts);
+        FigureArt art = new FigureArt(charts::render);
         Markup figure = art.placeholder(figure());
         art.startDrawing();
         Calendar date = new GregorianCalendar(TimeZone.getTimeZone("UTC"), Locale.ROOT);

@@ -31,7 +31,7 @@ class FigureArtTest {
     void aPlaceholderFilledInAfterLayoutIsTheElementTheDrawingInlineParsesTo(@TempDir Path dir) throws Exception {
         FigureSpec spec = fit(dir);
         String drawn = new SvgChartRenderer().render(spec);
-        FigureArt art = new FigureArt(new SvgChartRenderer());
+        FigureArt art = new FigureArt(new SvgChartRenderer()::render);
         Markup placeholder = art.placeholder(spec);
         assertTrue(placeholder.html().startsWith("<svg "), placeholder.html());
         assertTrue(placeholder.html().contains(FigureArt.MARK + "=\"0\""), placeholder.html());
@@ -56,7 +56,7 @@ class FigureArtTest {
     @Test
     void theHtmlGetsTheDrawingsAndOtherMarkupStaysAsItIs(@TempDir Path dir) {
         FigureSpec spec = fit(dir);
-        FigureArt art = new FigureArt(new SvgChartRenderer());
+        FigureArt art = new FigureArt(new SvgChartRenderer()::render);
         Markup placeholder = art.placeholder(spec);
         Markup narrative = new Markup("<p>narrative</p>");
         var resolve = art.resolver();
@@ -68,7 +68,7 @@ class FigureArtTest {
     void aFigureThatCannotBeDrawnFailsTheRenderWithItsOwnMessage() {
         FigureSpec empty = new FigureSpec("empty-fig", "Nothing", "x", "y",
                 List.of(new FigureSpec.Series("none", FigureSpec.Style.POINTS, new double[0], new double[0], List.of())));
-        FigureArt art = new FigureArt(new SvgChartRenderer());
+        FigureArt art = new FigureArt(new SvgChartRenderer()::render);
         art.placeholder(empty);
         art.startDrawing();
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, art::drawings);

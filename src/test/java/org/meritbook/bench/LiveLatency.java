@@ -1,0 +1,80 @@
+package org.meritbook.bench;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.TimeUnit;
+import org.meritbook.dossier.DossierRenderer;
+import org.meritbook.serve.LiveSession;
+import org.meritbook.serve.Snapshot;
+
+/**
+ * Measures (asserts nothing) how soon the live notebook shows a saved change: a session on a copy of
+ * a study, the notebook saved N times after a few warm-up saves, each save waited for. Prints, per
+ * save and as medians, the server's re-run time (parse, read, compute, results, HTML page) and the
+ * time from the file written to the new page state, which adds the file watcher's quiet period.
+ * Run by bench/live-latency.sh.
+ */
+public final class LiveLatency {
+    private static final int WARM_UP = 5;
+
+    private LiveLatency() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path source = Path.of(args.length > 0 ? args[0] : "demo-data/hmf-honey-validation.md");
+        int n = args.length > 1 ? Integer.parseInt(args[1]) : 20;
+        Path dir = Files.createTempDirectory("meritbook-latency");
+        Path notebook = dir.resolve(source.getFileName());
+        Files.copy(source, notebook);
+        try (var files = Files.list(source.toAbsolutePath().getParent())) {
+            for (Path f : files.filter(p -> p.toString().endsWith(".xlsx")).toList()) {
+                Files.copy(f, dir.resolve(f.getFileName()));
+            }
+        }
+        String text = Files.readString(notebook);
+        LinkedBlockingQueue<Snapshot> done = new LinkedBlockingQueue<>();
+        List<Long> runMs = new ArrayList<>();
+        List<Long> saveToPageMs = new ArrayList<>();
+        try (LiveSession session = LiveSession.start(notebook, 0, new DossierRenderer(Optional.empty()), done::add)) {
+            Snapshot first = next(done);
+            System.out.printf("serving %s; first run (cold) %d ms%n", session.server().base(), first.elapsedMs());
+            for (int i = 1; i <= WARM_UP + n; i++) {
+                // A different narrative line each time: the analyses see the same data, the page changes.
+                long written = System.nanoTime();
+                Files.writeString(notebook, text + "\nEdit " + i + " of the closing remarks.\n");
+                Snapshot s = next(done);
+                long toPage = TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - written);
+                if (s.state() != Snapshot.State.OK) {
+                    throw new IllegalStateException("re-run " + i + " failed: " + s.problems());
+                }
+                if (i > WARM_UP) {
+                    runMs.add(s.elapsedMs());
+                    saveToPageMs.add(toPage);
+                    System.out.printf("save %3d: re-run %4d ms, save to new page state %4d ms%n", i - WARM_UP,
+                            s.elapsedMs(), toPage);
+                }
+            }
+        }
+        System.out.printf("median of %d saves: re-run %d ms, save to new page state %d ms (watcher quiet period "
+                + "included)%n", n, median(runMs), median(saveToPageMs));
+    }
+
+    private static long median(List<Long> values) {
+        List<Long> sorted = new ArrayList<>(values);
+        Collections.sort(sorted);
+        return sorted.get(sorted.size() / 2);
+    }
+
+    private static Snapshot next(LinkedBlockingQueue<Snapshot> done) throws InterruptedException {
+        Snapshot s = done.poll(120, TimeUnit.SECONDS);
+        if (s == null) {
+            throw new IllegalStateException("no run finished within 120 s");
+        }
+        return s;
+    }
+}
