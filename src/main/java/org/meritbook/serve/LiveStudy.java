@@ -7,6 +7,8 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Consumer;
@@ -149,11 +151,16 @@ public final class LiveStudy implements AutoCloseable {
                     ? sequence.draft(results, PublishingSequence.studyFolder(out.get(), study))
                     : sequence.draft(results, RevisionContext.none());
             byte[] json = draft.json();
-            byte[] html = sequence.html(draft);
             Snapshot.Issued previous = issued;
-            // Compared with the last successful run, so a fix after a broken save lists what the edits moved.
-            List<RevisionDiff.Change> changed = previous == null ? List.of()
-                    : RevisionDiffer.diff("run " + previous.run(), previous.json(), "run " + run, json).results();
+            // Compared with the last successful run, so a fix after a broken save lists what the edits
+            // moved; worked out on a second thread while this one renders the page.
+            FutureTask<List<RevisionDiff.Change>> changes = new FutureTask<>(() -> previous == null ? List.of()
+                    : RevisionDiffer.diff("run " + previous.run(), previous.json(), "run " + run, json).results());
+            Thread differ = new Thread(changes, "meritbook-live-changes");
+            differ.setDaemon(true);
+            differ.start();
+            byte[] html = sequence.html(draft);
+            List<RevisionDiff.Change> changed = joined(changes);
             issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json,
                     Outcome.of(results), previous == null ? 0 : previous.run(), changed, PointIndex.of(results),
                     Instant.now());
@@ -177,6 +184,24 @@ public final class LiveStudy implements AutoCloseable {
         Snapshot done = new Snapshot(run, state, problems, elapsed, Instant.now(), issued);
         current.set(done);
         finished.accept(done);
+    }
+
+    /** The task's value, or what it threw, rethrown as it was (the run's own handlers report it). */
+    private static <T> T joined(FutureTask<T> task) {
+        try {
+            return task.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt(); // the session is closing
+            throw new IllegalStateException("interrupted while the changes since the last run were listed", e);
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error err) {
+                throw err;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
     }
 
     private boolean overtaken() {
