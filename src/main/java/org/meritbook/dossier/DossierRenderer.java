@@ -14,10 +14,6 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
 import java.util.Properties;
-import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.Future;
-import java.util.concurrent.FutureTask;
 import org.meritbook.dossier.DossierView.SoftwareRow;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
@@ -25,6 +21,7 @@ import org.meritbook.figures.SvgChartRenderer;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.revision.RevisionContext;
 import org.meritbook.pipeline.InputFile;
+import org.meritbook.pipeline.SideTask;
 import org.meritbook.study.FrontMatter;
 
 /**
@@ -33,7 +30,7 @@ import org.meritbook.study.FrontMatter;
  * templates and the {@link RenderEnvironment}): the same inputs give byte-identical output.
  */
 public final class DossierRenderer {
-    private final Future<Parts> parts;
+    private final SideTask<Parts> parts;
     private final PdfAFinisher finisher = new PdfAFinisher();
     private final FigureCache figures = new FigureCache(new SvgChartRenderer()::render);
     private final String meritbookVersion = Optional.ofNullable(
@@ -61,10 +58,10 @@ public final class DossierRenderer {
 
     DossierRenderer(Optional<Path> templateDir, RenderEnvironment environment, boolean figuresInline) {
         this.figuresInline = figuresInline;
-        this.parts = CompletableFuture.completedFuture(Parts.of(templateDir, environment));
+        this.parts = SideTask.done(Parts.of(templateDir, environment));
     }
 
-    private DossierRenderer(Future<Parts> parts) {
+    private DossierRenderer(SideTask<Parts> parts) {
         this.figuresInline = false;
         this.parts = parts;
     }
@@ -78,33 +75,15 @@ public final class DossierRenderer {
     public static DossierRenderer warmingUp(Optional<Path> templateDir) {
         templateDir.ifPresent(TemplateEngine::requireFolder); // a mistyped folder is told before the study runs
         SvgChartRenderer warmUpCharts = new SvgChartRenderer();
-        FutureTask<Parts> ready = new FutureTask<>(() -> {
+        return new DossierRenderer(SideTask.start("meritbook-warm-up", () -> {
             Parts p = Parts.of(templateDir, RenderEnvironment.current());
             RenderingWarmUp.run(p.pdf(), new PdfAFinisher(), warmUpCharts);
             return p;
-        });
-        Thread worker = new Thread(ready, "meritbook-warm-up");
-        worker.setDaemon(true); // a run that fails early must not wait for it
-        worker.start();
-        return new DossierRenderer(ready);
+        }));
     }
 
     private Parts parts() {
-        try {
-            return parts.get();
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException r) {
-                throw r;
-            }
-            if (cause instanceof Error err) {
-                throw err;
-            }
-            throw new IllegalStateException("setting up the dossier renderer failed", cause);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while the dossier renderer was set up", e);
-        }
+        return parts.join("setting up the dossier renderer");
     }
 
     /**

@@ -4,13 +4,11 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.CancellationException;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.FutureTask;
 import java.util.function.Function;
 import java.util.function.UnaryOperator;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.figures.SvgChartRenderer;
+import org.meritbook.pipeline.SideTask;
 import org.w3c.dom.Document;
 import org.w3c.dom.Element;
 import org.w3c.dom.Node;
@@ -36,7 +34,7 @@ final class FigureArt {
     private final Function<FigureSpec, String> draw;
     private final List<FigureSpec> specs = new ArrayList<>();
     private final Map<Markup, Integer> placeholders = new HashMap<>();
-    private FutureTask<List<String>> drawing;
+    private SideTask<List<String>> drawing;
 
     /** @param draw a figure's SVG ({@link SvgChartRenderer#render}, or a {@link FigureCache}'s drawing) */
     FigureArt(Function<FigureSpec, String> draw) {
@@ -58,10 +56,7 @@ final class FigureArt {
     /** Starts drawing every registered figure, in order, on a worker thread. */
     void startDrawing() {
         List<FigureSpec> toDraw = List.copyOf(specs);
-        drawing = new FutureTask<>(() -> toDraw.stream().map(draw).toList());
-        Thread worker = new Thread(drawing, "meritbook-figures");
-        worker.setDaemon(true); // a failed render elsewhere must not keep the JVM alive
-        worker.start();
+        drawing = SideTask.start("meritbook-figures", () -> toDraw.stream().map(draw).toList());
     }
 
     /** The drawings in registration order; waits for the worker and rethrows what a drawing threw. */
@@ -69,31 +64,15 @@ final class FigureArt {
         if (drawing == null) {
             startDrawing();
         }
-        try {
-            List<String> svgs = drawing.get();
-            for (int i = 0; i < svgs.size(); i++) {
-                if (!svgs.get(i).startsWith(ROOT)) {
-                    // The layout was made for ROOT's size: a different root would need a different layout.
-                    throw new IllegalStateException("figure " + specs.get(i).id() + " does not start with the root "
-                            + "element its page was laid out for");
-                }
+        List<String> svgs = drawing.join("drawing the figures");
+        for (int i = 0; i < svgs.size(); i++) {
+            if (!svgs.get(i).startsWith(ROOT)) {
+                // The layout was made for ROOT's size: a different root would need a different layout.
+                throw new IllegalStateException("figure " + specs.get(i).id() + " does not start with the root "
+                        + "element its page was laid out for");
             }
-            return svgs;
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException r) {
-                throw r;
-            }
-            if (cause instanceof Error err) {
-                throw err;
-            }
-            throw new IllegalStateException("drawing the figures failed", cause);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted while the figures were drawn", e);
-        } catch (CancellationException e) {
-            throw new IllegalStateException("the figures' drawing was cancelled", e);
         }
+        return svgs;
     }
 
     /** The HTML's markup for a figure: its drawing in place of its placeholder; other markup as it is. */

@@ -7,8 +7,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.FutureTask;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.Consumer;
@@ -16,6 +14,7 @@ import java.util.function.Function;
 import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.error.InputException;
+import org.meritbook.pipeline.SideTask;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.publishing.PublishingSequence;
@@ -154,13 +153,11 @@ public final class LiveStudy implements AutoCloseable {
             Snapshot.Issued previous = issued;
             // Compared with the last successful run, so a fix after a broken save lists what the edits
             // moved; worked out on a second thread while this one renders the page.
-            FutureTask<List<RevisionDiff.Change>> changes = new FutureTask<>(() -> previous == null ? List.of()
+            SideTask<List<RevisionDiff.Change>> changes = SideTask.start("meritbook-live-changes",
+                    () -> previous == null ? List.of()
                     : RevisionDiffer.diff("run " + previous.run(), previous.json(), "run " + run, json).results());
-            Thread differ = new Thread(changes, "meritbook-live-changes");
-            differ.setDaemon(true);
-            differ.start();
             byte[] html = sequence.html(draft);
-            List<RevisionDiff.Change> changed = joined(changes);
+            List<RevisionDiff.Change> changed = changes.join("listing the changes since the last run");
             issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json,
                     Outcome.of(results), previous == null ? 0 : previous.run(), changed, PointIndex.of(results),
                     Instant.now());
@@ -184,24 +181,6 @@ public final class LiveStudy implements AutoCloseable {
         Snapshot done = new Snapshot(run, state, problems, elapsed, Instant.now(), issued);
         current.set(done);
         finished.accept(done);
-    }
-
-    /** The task's value, or what it threw, rethrown as it was (the run's own handlers report it). */
-    private static <T> T joined(FutureTask<T> task) {
-        try {
-            return task.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt(); // the session is closing
-            throw new IllegalStateException("interrupted while the changes since the last run were listed", e);
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof RuntimeException r) {
-                throw r;
-            }
-            if (e.getCause() instanceof Error err) {
-                throw err;
-            }
-            throw new IllegalStateException(e.getCause());
-        }
     }
 
     private boolean overtaken() {

@@ -23,14 +23,7 @@ public final class LiveReruns {
     public static void main(String[] args) throws Exception {
         Path source = Path.of(args.length > 0 ? args[0] : "demo-data/hmf-honey-validation.md");
         int n = args.length > 1 ? Integer.parseInt(args[1]) : 1000;
-        Path dir = Files.createTempDirectory("meritbook-reruns");
-        Path notebook = dir.resolve(source.getFileName());
-        Files.copy(source, notebook);
-        try (var files = Files.list(source.toAbsolutePath().getParent())) {
-            for (Path f : files.filter(p -> p.toString().endsWith(".xlsx")).toList()) {
-                Files.copy(f, dir.resolve(f.getFileName()));
-            }
-        }
+        Path notebook = StudyCopy.of(source, "meritbook-reruns");
         String text = Files.readString(notebook);
         LinkedBlockingQueue<Snapshot> done = new LinkedBlockingQueue<>();
         long start = System.nanoTime();
