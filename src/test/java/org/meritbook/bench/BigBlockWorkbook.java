@@ -71,6 +71,20 @@ public final class BigBlockWorkbook {
         return "A" + HEADER_ROW + ":D" + (HEADER_ROW + rows);
     }
 
+    /** The number of data rows of a workbook written here, from its notebook beside it. */
+    public static int rowsOf(Path workbook) {
+        try {
+            String text = Files.readString(workbook.resolveSibling(NOTEBOOK), StandardCharsets.UTF_8);
+            java.util.regex.Matcher m = java.util.regex.Pattern.compile("Checks!A" + HEADER_ROW + ":D(\\d+)").matcher(text);
+            if (!m.find()) {
+                throw new IllegalStateException("no data reference in " + NOTEBOOK);
+            }
+            return Integer.parseInt(m.group(1)) - HEADER_ROW;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
     private static void writeWorkbook(Path file, int rows) throws IOException {
         Random random = new Random(SEED);
         // Shared strings, as spreadsheet programs write them: the labels repeat on every row.
