@@ -132,7 +132,8 @@ final class TrailViewBuilder {
                     + "trail.md and the attached results.json hold every one", a.number(), b.number(), indexes.size(),
                     first.label(), last.label());
             StepView stand = new StepView(a.number(), a.anchor(), first.id(), first.label(), first.formula(),
-                    first.method() == null ? "" : first.method(), "", List.of(), new DossierView.IndexedInputs(false, List.of(), List.of()), List.of());
+                    first.method() == null ? "" : first.method(), "", List.of(),
+                    new DossierView.IndexedInputs(false, List.of(), List.of()), List.of());
             TrailBlock omission = new TrailBlock(false, stand, first.label(), first.formula(), stand.method(), List.of(), List.of(),
                     false, List.of(), text);
             String before = indexes.get(0) == 0 ? null : refs.get(section.steps().get(indexes.get(0) - 1).id()).anchor();

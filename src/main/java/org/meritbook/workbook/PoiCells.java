@@ -42,6 +42,8 @@ final class PoiCells {
     private final boolean date1904;
     private final long maxReferencedCells;
     private FormulaEvaluator evaluator;
+    /** Shared strings as read, by index (the ref of the first cell that used each). */
+    private final java.util.Map<Integer, CellValue> sharedRead = new java.util.HashMap<>();
 
     /**
      * @param maxReferencedCells the most cells one evaluated formula may refer to (a formula over
@@ -191,7 +193,10 @@ final class PoiCells {
         if (!index.matches("[0-9]{1,9}") || table == null || Integer.parseInt(index) >= table.getUniqueCount()) {
             return CellText.unreadable(ref, index, "a reference '" + index + "' to a shared string the workbook does not hold", null);
         }
-        return CellText.classify(ref, table.getItemAt(Integer.parseInt(index)).getString(), null);
+        // A label repeats on many rows; its reading depends on the text alone, so it is classified once per string.
+        CellValue once = sharedRead.computeIfAbsent(Integer.parseInt(index),
+                i -> CellText.classify(ref, table.getItemAt(i).getString(), null));
+        return once.ref().equals(ref) ? once : new CellValue(ref, once.kind(), once.number(), once.raw(), once.note());
     }
 
     private CellValue storedNumber(StoredCell cell, CellRef ref, String v, String note) {

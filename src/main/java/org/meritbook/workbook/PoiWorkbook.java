@@ -64,6 +64,11 @@ final class PoiWorkbook implements SourceWorkbook {
         return found == streamed.size();
     }
 
+    /** How many sheets were read by streaming. */
+    int streamedSheets() {
+        return streamed.size();
+    }
+
     private static String partName(XSSFSheet sheet) {
         return sheet.getPackagePart().getPartName().getName();
     }

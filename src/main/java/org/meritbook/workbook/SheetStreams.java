@@ -6,10 +6,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
-import java.util.Locale;
 import java.util.Map;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import java.util.zip.Deflater;
 import javax.xml.stream.XMLInputFactory;
 import javax.xml.stream.XMLOutputFactory;
@@ -41,7 +38,6 @@ final class SheetStreams {
     /** System property: the cell count above which a sheet is streamed (0 streams every sheet with a cell; for tests). */
     static final String THRESHOLD_PROPERTY = "meritbook.workbook.stream-above-cells";
 
-    private static final Pattern CELL = Pattern.compile("\\$?([A-Za-z]{1,3})\\$?([0-9]{1,7})");
     private static final XMLInputFactory INPUT = input();
     private static final XMLOutputFactory OUTPUT = XMLOutputFactory.newDefaultFactory();
 
@@ -285,11 +281,11 @@ final class SheetStreams {
             if (ref == null) {
                 col = lastCol + 1;
             } else {
-                Matcher m = CELL.matcher(ref.strip());
-                if (!m.matches()) {
+                long parsed = XmlPartScan.cellAddress(ref.strip());
+                if (parsed < 0) {
                     throw new XMLStreamException("a cell reference '" + ref + "' the package check let through");
                 }
-                col = column(m.group(1).toUpperCase(Locale.ROOT));
+                col = (int) (parsed >>> 32);
             }
             lastCol = Math.max(lastCol, col);
             String t = attribute("t");
@@ -468,15 +464,6 @@ final class SheetStreams {
             }
             return null;
         }
-    }
-
-    /** 1-based column number of letters A..ZZZ. */
-    private static int column(String letters) {
-        int c = 0;
-        for (char ch : letters.toCharArray()) {
-            c = c * 26 + (ch - 'A' + 1);
-        }
-        return c;
     }
 
     /** Keeps the StAX reader from closing the zip stream it reads one entry of. */
