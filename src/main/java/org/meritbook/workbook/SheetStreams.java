@@ -123,6 +123,7 @@ final class SheetStreams {
         }
         try {
             new Transformer(r, w, sheet).run();
+            sheet.seal();
             w.flush();
         } finally {
             r.close();

@@ -18,6 +18,7 @@ final class StreamedSheet {
     private int[] rowIndexes = new int[16];
     private Row[] rows = new Row[16];
     private int rowCount;
+    private boolean sorted = true;
     private StylesTable styles;
 
     /** One row element: its attributes and its cells, by ascending column. */
@@ -102,16 +103,34 @@ final class StreamedSheet {
             rowIndexes = Arrays.copyOf(rowIndexes, rowCount * 2);
         }
         row.seal();
-        // Rows are written in order; one out of order is placed where it belongs (the package check refused duplicates).
-        int at = rowCount;
-        while (at > 0 && rowIndexes[at - 1] > rowIndex) {
-            at--;
-        }
-        System.arraycopy(rows, at, rows, at + 1, rowCount - at);
-        System.arraycopy(rowIndexes, at, rowIndexes, at + 1, rowCount - at);
-        rows[at] = row;
-        rowIndexes[at] = rowIndex;
+        sorted &= rowCount == 0 || rowIndexes[rowCount - 1] < rowIndex;
+        rows[rowCount] = row;
+        rowIndexes[rowCount] = rowIndex;
         rowCount++;
+    }
+
+    /**
+     * Called once every row is in: rows are written in order, and rows out of order (a hand edit)
+     * are sorted once here, never shifted one by one (the package check refused duplicates).
+     */
+    void seal() {
+        if (sorted) {
+            return;
+        }
+        Integer[] order = new Integer[rowCount];
+        for (int i = 0; i < rowCount; i++) {
+            order[i] = i;
+        }
+        Arrays.sort(order, (a, b) -> Integer.compare(rowIndexes[a], rowIndexes[b]));
+        int[] indexes = new int[rowCount];
+        Row[] byIndex = new Row[rowCount];
+        for (int i = 0; i < rowCount; i++) {
+            indexes[i] = rowIndexes[order[i]];
+            byIndex[i] = rows[order[i]];
+        }
+        rowIndexes = indexes;
+        rows = byIndex;
+        sorted = true;
     }
 
     /** Called once the package is open: styles are resolved through the workbook POI holds. */

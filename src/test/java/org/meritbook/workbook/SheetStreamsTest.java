@@ -139,6 +139,23 @@ class SheetStreamsTest {
     }
 
     @Test
+    void rowsWrittenInReverseOrderReadTheSameBothWays() throws Exception {
+        Path file = generated();
+        byte[] bytes = parts(file).edit(SHEET, x -> {
+            int start = x.indexOf("<row ");
+            int end = x.indexOf("</sheetData>");
+            java.util.List<String> rows = new java.util.ArrayList<>(java.util.Arrays.asList(x.substring(start, end).split("(?=<row )")));
+            java.util.Collections.reverse(rows);
+            return x.substring(0, start) + String.join("", rows) + x.substring(end);
+        }).zip();
+        Path reversed = Files.write(dir.resolve("reversed.xlsx"), bytes);
+        DataBlock[] b = bothWays(() -> read(reversed, checks()), new DataBlock[2]);
+        assertEquals(b[0], b[1]);
+        assertEquals(ROWS, b[1].rowCount());
+        assertEquals("Checks!D4", b[1].column("Nitrate").orElseThrow().values().get(0).ref().address());
+    }
+
+    @Test
     void aBadValueDeepInABigBlockIsReportedWithItsCell() throws Exception {
         Path file = generated();
         byte[] bytes = parts(file)
