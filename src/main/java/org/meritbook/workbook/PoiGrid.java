@@ -116,8 +116,11 @@ final class PoiGrid implements Grid {
 
     @Override
     public CellValue value(int row, int col) {
-        if (streamed != null && !streamed.formula(row, col)) {
-            return cells.read(streamed.cell(row, col), ref(row, col));
+        if (streamed != null) {
+            StoredCell stored = streamed.cell(row, col);
+            if (stored != null || !streamed.formula(row, col)) {
+                return cells.read(stored, ref(row, col));
+            }
         }
         return cells.read(cell(row, col), ref(row, col));
     }

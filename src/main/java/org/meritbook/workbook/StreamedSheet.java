@@ -20,6 +20,7 @@ final class StreamedSheet {
     private int rowCount;
     private boolean sorted = true;
     private StylesTable styles;
+    private final java.util.Map<Integer, java.util.Optional<CellStyle>> styleCache = new java.util.HashMap<>();
 
     /** One row element: its attributes and its cells, by ascending column. */
     static final class Row {
@@ -219,8 +220,9 @@ final class StreamedSheet {
             if (styles == null || styles.getNumCellStyles() <= 0) {
                 return null;
             }
-            int s = row.styleIndexes[i];
-            return styles.getStyleAt(s < 0 ? 0 : s);
+            int s = row.styleIndexes[i] < 0 ? 0 : row.styleIndexes[i];
+            // POI makes a new style object per call; a sheet uses a handful, read-only here.
+            return styleCache.computeIfAbsent(s, k -> java.util.Optional.ofNullable(styles.getStyleAt(k))).orElse(null);
         }
     }
 }
