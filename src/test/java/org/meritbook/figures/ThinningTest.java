@@ -66,4 +66,21 @@ class ThinningTest {
         String svg = new SvgChartRenderer().render(Thinning.of(cloud(100_000, 3)));
         assertTrue(svg.length() < 1_000_000, "SVG of " + svg.length() + " characters");
     }
+
+    @Test
+    void aCategoricalAxisOfManyRunsShowsPositionsNotOverprintedNames() {
+        int runs = SvgChartRenderer.MAX_NAMED_CATEGORIES + 960;
+        double[] x = new double[runs];
+        double[] y = new double[runs];
+        List<String> names = new ArrayList<>();
+        for (int i = 0; i < runs; i++) {
+            x[i] = i + 1;
+            y[i] = Math.sin(i);
+            names.add(String.format(java.util.Locale.ROOT, "R%04d", i + 1));
+        }
+        FigureSpec spec = new FigureSpec("runs", "Runs", "Run", "Value",
+                List.of(new FigureSpec.Series("Means", FigureSpec.Style.LINE, x, y)), names);
+        String svg = new SvgChartRenderer().render(spec);
+        assertTrue(svg.length() < 1_000_000, "SVG of " + svg.length() + " characters");
+    }
 }
