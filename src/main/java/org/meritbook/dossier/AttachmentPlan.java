@@ -6,13 +6,15 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import org.meritbook.analysis.SectionResult;
 import org.meritbook.criteria.AcceptanceProfiles;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.study.SourceFile;
 
 /**
  * Which files the dossier carries, in a fixed order (notebook, workbooks in notebook order, the lab's
- * profile file, results.json) and under unique names, so that the manifest and the PDF agree. Only
+ * profile file, the data tables too long to print as CSV ({@link DataTableCsv}) in section order,
+ * results.json) and under unique names, so that the manifest and the PDF agree. Only
  * what the run read is attached: a declared source that no cell used is not among the run's inputs
  * and so never leaves the disk. Names come from the paths as written in the notebook, not from
  * where the files happen to lie, so a re-run from unpacked attachments names them the same.
@@ -42,6 +44,14 @@ final class AttachmentPlan {
             AcceptanceProfiles.file(results.study()).ifPresent(profile -> out.add(new Attachment(
                     unique(fileName(results.study().frontMatter().criteria().strip()), used), "application/yaml",
                     "Source", "Acceptance profile", AcceptanceProfiles.MANIFEST_ALIAS, profile)));
+        }
+        DisplayFormatter format = new DisplayFormatter();
+        for (SectionResult r : results.sections()) {
+            if (DataTableCsv.summarised(r.table())) {
+                out.add(new Attachment(unique("data-" + r.id().replaceAll("[^A-Za-z0-9._-]", "-") + ".csv", used), "text/csv",
+                        "Data", String.format(Locale.ROOT, "Data table of section '%s', all %,d rows", r.id(),
+                        r.table().rows().size()), DataTableCsv.alias(r), null, DataTableCsv.of(r, format)));
+            }
         }
         out.add(new Attachment(unique(RESULTS_NAME, used), "application/json", "Data",
                 "Results of this run (full precision)", "results", null));

@@ -69,7 +69,9 @@ final class DossierModelBuilder {
         Map<String, SectionResult> byId = new LinkedHashMap<>();
         results.sections().forEach(s -> byId.put(s.id(), s));
         TrailViewBuilder trail = new TrailViewBuilder(results.sections(), "A", format);
-        SectionViewBuilder sectionBuilder = new SectionViewBuilder(format, figureArt, trail);
+        Map<String, String> attachedTables = new LinkedHashMap<>();
+        files.forEach(e -> attachedTables.put(e.attachment().alias(), e.attachment().name()));
+        SectionViewBuilder sectionBuilder = new SectionViewBuilder(format, figureArt, trail, attachedTables);
         List<SectionView> sections = new ArrayList<>();
         for (AnalysisCell cell : results.study().cells()) {
             String number = String.valueOf(++chapter);
@@ -254,7 +256,7 @@ final class DossierModelBuilder {
             rows.add(new InputRow(f.alias(), f.path(), format.bytes(f.bytes()), f.sha256(), f.ranges(), attached));
         }
         for (PdfAFinisher.Embedded e : files) {
-            if (e.attachment().source() == null) { // produced by this run: results.json
+            if (e.attachment().source() == null) { // produced by this run: results.json, long data tables
                 rows.add(new InputRow(e.attachment().alias(), e.attachment().name(), format.bytes(e.bytes().length),
                         DossierRenderer.sha256Hex(e.bytes()), List.of(), e.attachment().name()));
             }

@@ -139,7 +139,8 @@ public final class DossierRenderer {
         List<Attachment> plan = AttachmentPlan.of(results);
         List<PdfAFinisher.Embedded> files = new ArrayList<>();
         for (Attachment a : plan) {
-            files.add(new PdfAFinisher.Embedded(a, a.source() == null ? resultsJson.clone() : read(a, results)));
+            byte[] bytes = a.content() != null ? a.content() : a.source() == null ? resultsJson.clone() : read(a, results);
+            files.add(new PdfAFinisher.Embedded(a, bytes));
         }
         byte[] id = documentId(files);
         String idHex = HexFormat.of().formatHex(id);

@@ -189,13 +189,23 @@ public record DossierView(boolean pdf, Cover cover, List<RevisionRow> revisions,
      * @param columns names of the inputs that differ between steps, one column each
      * @param points  true when the rows carry a per-step label ({@link CompactRow#point()})
      * @param rows    one per step, in computation order
+     * @param omitted for a block standing for steps not printed ({@link TrailViewBuilder#MAX_SIMILAR_STEPS}), what
+     *                it says; empty otherwise. Its anchor is {@code step}'s, so links to those steps land on it
      */
     public record TrailBlock(boolean compact, StepView step, String label, String formula, String method,
-                             List<StepInputRow> common, List<String> columns, boolean points, List<CompactRow> rows) {
+                             List<StepInputRow> common, List<String> columns, boolean points, List<CompactRow> rows,
+                             String omitted) {
         public TrailBlock {
             common = List.copyOf(common);
             columns = List.copyOf(columns);
             rows = List.copyOf(rows);
+            java.util.Objects.requireNonNull(omitted, "omitted");
+        }
+
+        /** A block of printed steps. */
+        public TrailBlock(boolean compact, StepView step, String label, String formula, String method,
+                          List<StepInputRow> common, List<String> columns, boolean points, List<CompactRow> rows) {
+            this(compact, step, label, formula, method, common, columns, points, rows, "");
         }
     }
 

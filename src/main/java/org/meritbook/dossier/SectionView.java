@@ -59,18 +59,42 @@ public record SectionView(String number, String anchor, String id, String kind, 
      * @param labels     true when a column shows the rows' point labels
      * @param rows       the rows; excluded rows stay, marked
      * @param exclusions the reasons, keyed by their mark
+     * @param omitted    the rows a summarised table leaves out ({@link Omission#NONE} for a table printed whole)
      */
     public record TableView(boolean present, String caption, List<String> headers, List<ColumnView> columns,
-                            boolean rowNumbers, boolean labels, List<TableRow> rows, List<Exclusion> exclusions) {
+                            boolean rowNumbers, boolean labels, List<TableRow> rows, List<Exclusion> exclusions,
+                            Omission omitted) {
         public TableView {
             headers = List.copyOf(headers);
             columns = List.copyOf(columns);
             rows = List.copyOf(rows);
             exclusions = List.copyOf(exclusions);
+            java.util.Objects.requireNonNull(omitted, "omitted");
+        }
+
+        /** A table printed whole. */
+        public TableView(boolean present, String caption, List<String> headers, List<ColumnView> columns,
+                         boolean rowNumbers, boolean labels, List<TableRow> rows, List<Exclusion> exclusions) {
+            this(present, caption, headers, columns, rowNumbers, labels, rows, exclusions, Omission.NONE);
         }
 
         static TableView none() {
             return new TableView(false, "", List.of(), List.of(), false, false, List.of(), List.of());
+        }
+    }
+
+    /**
+     * The rows a summarised data table leaves out, shown as one line across the table.
+     *
+     * @param after   the number of printed rows before the line (0 when nothing is left out)
+     * @param text    what the line says, e.g. "99,980 rows not printed (sheet rows 14 to 99,993) …"
+     * @param columns how many table columns the line spans
+     */
+    public record Omission(int after, String text, int columns) {
+        static final Omission NONE = new Omission(0, "", 1);
+
+        public boolean present() {
+            return !text.isEmpty();
         }
     }
 

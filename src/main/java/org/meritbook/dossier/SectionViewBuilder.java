@@ -3,6 +3,8 @@ package org.meritbook.dossier;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
 import org.meritbook.analysis.DataTable;
 import org.meritbook.analysis.Quantity;
@@ -24,6 +26,7 @@ import org.meritbook.dossier.SectionView.TableRow;
 import org.meritbook.dossier.SectionView.TableView;
 import org.meritbook.dossier.SectionView.VerdictRow;
 import org.meritbook.figures.FigureSpec;
+import org.meritbook.figures.Thinning;
 import org.meritbook.trail.Step;
 
 /** Builds one {@link SectionView} from a section result: table, figures, results, verdicts, warnings. */
@@ -35,11 +38,15 @@ final class SectionViewBuilder {
     private final DisplayFormatter format;
     private final FigureArt figureArt;
     private final TrailViewBuilder trail;
+    /** Attachment names by alias, to name the file a summarised data table is attached as. */
+    private final Map<String, String> attachments;
 
-    SectionViewBuilder(DisplayFormatter format, FigureArt figureArt, TrailViewBuilder trail) {
+    SectionViewBuilder(DisplayFormatter format, FigureArt figureArt, TrailViewBuilder trail,
+                       Map<String, String> attachments) {
         this.format = format;
         this.figureArt = figureArt;
         this.trail = trail;
+        this.attachments = Map.copyOf(attachments);
     }
 
     SectionView build(String number, String anchor, SectionResult r, Markup before, Markup after) {
@@ -59,8 +66,15 @@ final class SectionViewBuilder {
         int f = 0;
         for (FigureSpec spec : r.figures()) {
             f++;
-            figures.add(new FigureView("Figure " + number + "." + f, anchor + "-fig-" + f,
-                    spec.title() == null ? spec.id() : spec.title(), figureArt.placeholder(spec)));
+            FigureSpec drawn = Thinning.of(spec);
+            String caption = spec.title() == null ? spec.id() : spec.title();
+            String thinned = Thinning.describe(spec, drawn);
+            if (!thinned.isEmpty()) {
+                caption += ". Thinned for drawing (" + thinned + "): in each of " + Thinning.COLUMNS
+                        + " columns of the x range the lowest and the highest point are drawn; the statistics use every point";
+            }
+            figures.add(new FigureView("Figure " + number + "." + f, anchor + "-fig-" + f, caption,
+                    figureArt.placeholder(drawn)));
         }
         List<ResultRow> results = new ArrayList<>();
         for (Quantity q : r.quantities()) {
@@ -96,11 +110,18 @@ final class SectionViewBuilder {
         CellGrid grid = CellGrid.of(t);
         List<TableRow> rows = new ArrayList<>();
         List<Exclusion> exclusions = new ArrayList<>();
-        for (int i = 0; i < t.rows().size(); i++) {
+        boolean summarised = DataTableCsv.summarised(t);
+        int n = t.rows().size();
+        for (int i = 0; i < n; i++) {
             DataTable.Row row = t.rows().get(i);
+            boolean printed = !summarised || i < DataTableCsv.SHOWN_AT_EACH_END || i >= n - DataTableCsv.SHOWN_AT_EACH_END;
             List<CellView> cells = new ArrayList<>();
             for (int j = 0; j < row.cells().size(); j++) {
-                cells.add(cell(r, row.cells().get(j), grid.addressShown(j), inTable));
+                // Every cell is visited, printed or not: a computed value marks its quantity as shown in the table.
+                CellView c = cell(r, row.cells().get(j), grid.addressShown(j), inTable);
+                if (printed) {
+                    cells.add(c);
+                }
             }
             String label = row.label() == null ? "" : row.label();
             String mark = "";
@@ -109,7 +130,9 @@ final class SectionViewBuilder {
                 String where = grid.compact() ? "Point " + label + " (sheet row " + grid.row(i) + ")" : "Row " + label;
                 exclusions.add(new Exclusion(mark, where, row.exclusionReason()));
             }
-            rows.add(new TableRow(label, grid.compact() ? grid.row(i) : "", cells, row.excluded(), mark));
+            if (printed) {
+                rows.add(new TableRow(label, grid.compact() ? grid.row(i) : "", cells, row.excluded(), mark));
+            }
         }
         List<ColumnView> columns = new ArrayList<>();
         for (int j = 0; j < t.headers().size(); j++) {
@@ -124,7 +147,14 @@ final class SectionViewBuilder {
         String namedBy = grid.labelColumn();
         boolean labels = !grid.compact() || namedBy.isEmpty();
         StringBuilder caption = new StringBuilder("Table " + number + ".1 ");
-        if (grid.compact()) {
+        if (summarised) {
+            String file = attachments.getOrDefault(DataTableCsv.alias(r), "");
+            caption.append(String.format(Locale.ROOT, "Summary of the data as read%s: %,d rows, of which the first %d and the "
+                    + "last %d are printed. The full table, every value with its workbook cell, is attached to the PDF as %s",
+                    grid.compact() ? " from " + grid.range() : "", n, DataTableCsv.SHOWN_AT_EACH_END,
+                    DataTableCsv.SHOWN_AT_EACH_END, file));
+            caption.append(grid.compact() ? ". A value's cell is its column letter (under the header) and its sheet row (first column)" : "");
+        } else if (grid.compact()) {
             caption.append("Data as read from ").append(grid.range())
                     .append(". A value's cell is its column letter (under the header) and its sheet row (first column)");
             if (!namedBy.isEmpty()) {
@@ -134,7 +164,18 @@ final class SectionViewBuilder {
             caption.append("Data as read, with each value's workbook cell below it");
         }
         caption.append(exclusions.isEmpty() ? "." : ". Rows marked E are excluded from the statistics.");
-        return new TableView(true, caption.toString(), t.headers(), columns, grid.compact(), labels, rows, exclusions);
+        SectionView.Omission omitted = SectionView.Omission.NONE;
+        if (summarised) {
+            int left = n - 2 * DataTableCsv.SHOWN_AT_EACH_END;
+            String span = grid.compact() ? " (sheet rows " + grid.row(DataTableCsv.SHOWN_AT_EACH_END) + " to "
+                    + grid.row(n - DataTableCsv.SHOWN_AT_EACH_END - 1) + ")" : "";
+            int width = columns.size() + (grid.compact() ? 1 : 0) + (labels ? 1 : 0)
+                    + (!exclusions.isEmpty() && !grid.compact() ? 1 : 0);
+            omitted = new SectionView.Omission(DataTableCsv.SHOWN_AT_EACH_END, String.format(Locale.ROOT,
+                    "… %,d rows not printed%s: see the attached %s …", left, span,
+                    attachments.getOrDefault(DataTableCsv.alias(r), "")), width);
+        }
+        return new TableView(true, caption.toString(), t.headers(), columns, grid.compact(), labels, rows, exclusions, omitted);
     }
 
     /** A table of results: every number formatted by its kind (a quantity as itself) and linked to its step. */

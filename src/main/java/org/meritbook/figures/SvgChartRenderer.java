@@ -35,6 +35,11 @@ public final class SvgChartRenderer {
     /** Margin left and right of the legend box, and space between the plot and the legend. */
     private static final int LEGEND_MARGIN = 8;
     private static final int MARKER_SIZE = 7;
+    /**
+     * A categorical axis names at most this many categories; with more, a slot is a few pixels wide,
+     * the names would overprint, and the axis shows the positions as numbers instead.
+     */
+    public static final int MAX_NAMED_CATEGORIES = 40;
 
     public String render(FigureSpec spec) {
         List<Legend.Entry> entries = new ArrayList<>();
@@ -51,8 +56,12 @@ public final class SvgChartRenderer {
         chart.setXAxisTitle(nullToEmpty(spec.xTitle()));
         chart.setYAxisTitle(nullToEmpty(spec.yTitle()));
         style(chart.getStyler());
-        if (!spec.xCategories().isEmpty()) {
+        if (!spec.xCategories().isEmpty() && spec.xCategories().size() <= MAX_NAMED_CATEGORIES) {
             categorical(chart.getStyler(), spec.xCategories());
+        } else if (!spec.xCategories().isEmpty()) {
+            // Too many names to print side by side: the axis shows positions 1, 2, … with ordinary ticks.
+            chart.getStyler().setXAxisMin(0.5);
+            chart.getStyler().setXAxisMax(spec.xCategories().size() + 0.5);
         }
         Set<String> seriesNames = new HashSet<>();
         int index = 0;

@@ -52,9 +52,10 @@ final class PackageScan {
      * @param bytes    the whole file
      * @param fileName the file name, for cell locations ("lab.xlsx, Calibration!B5")
      * @param where    where to report package-level problems (the file and the data reference)
+     * @return the number of cells of each worksheet part, by zip entry name
      * @throws InputException CORRUPT_FILE, WORKBOOK_TOO_LARGE or MALFORMED_SHEET
      */
-    static void check(byte[] bytes, String fileName, String where, String expected, WorkbookBudget budget) {
+    static Map<String, Long> check(byte[] bytes, String fileName, String where, String expected, WorkbookBudget budget) {
         Problems problems = new Problems(where, expected);
         Map<String, ZipArchiveEntry> directory = directory(bytes, problems, budget);
         XmlPartScan.Tally tally = new XmlPartScan.Tally(budget, ELEMENTS_PER_CELL);
@@ -90,6 +91,13 @@ final class PackageScan {
             throw problems.corrupt("a zip whose directory lists entries that are not in the file (" + String.join(", ", missing) + ")");
         }
         malformedSheets(fileName, parts);
+        Map<String, Long> cells = new LinkedHashMap<>();
+        parts.forEach((name, facts) -> {
+            if (facts.worksheet()) {
+                cells.put(name, facts.cells);
+            }
+        });
+        return cells;
     }
 
     /** The central directory, by entry name, checked for duplicates and declared sizes. */

@@ -3,6 +3,7 @@ package org.meritbook.workbook;
 import java.time.LocalDateTime;
 import java.time.LocalTime;
 import java.util.Locale;
+import java.util.function.Supplier;
 import javax.xml.namespace.QName;
 import org.apache.poi.ss.formula.FormulaParseException;
 import org.apache.poi.ss.formula.FormulaParser;
@@ -41,6 +42,8 @@ final class PoiCells {
     private final boolean date1904;
     private final long maxReferencedCells;
     private FormulaEvaluator evaluator;
+    /** Shared strings as read, by index (the ref of the first cell that used each). */
+    private final java.util.Map<Integer, CellValue> sharedRead = new java.util.HashMap<>();
 
     /**
      * @param maxReferencedCells the most cells one evaluated formula may refer to (a formula over
@@ -57,9 +60,21 @@ final class PoiCells {
             return blank(ref, null);
         }
         try {
-            return cell instanceof XSSFCell x ? xssf(x, x.getCTCell(), ref) : binary(cell, ref);
+            return cell instanceof XSSFCell x ? stored(new XssfStored(x), ref) : binary(cell, ref);
         } catch (RuntimeException e) {
             // A cell POI cannot read (a shared string past the table's end, a damaged record): located, never guessed.
+            return CellText.unreadable(ref, "", "a cell that cannot be read (" + e.getClass().getSimpleName() + ")", null);
+        }
+    }
+
+    /** A cell of a sheet read by streaming ({@link StreamedSheet}), by the same rules as a POI cell. */
+    CellValue read(StoredCell cell, CellRef ref) {
+        if (cell == null) {
+            return blank(ref, null);
+        }
+        try {
+            return stored(cell, ref);
+        } catch (RuntimeException e) {
             return CellText.unreadable(ref, "", "a cell that cannot be read (" + e.getClass().getSimpleName() + ")", null);
         }
     }
@@ -67,7 +82,7 @@ final class PoiCells {
     /** An .xls cell: binary records, numbers as doubles. */
     private CellValue binary(Cell cell, CellRef ref) {
         return switch (cell.getCellType()) {
-            case NUMERIC -> number(cell, ref, cell.getNumericCellValue(), null);
+            case NUMERIC -> number(cell::getCellStyle, ref, cell.getNumericCellValue(), null);
             case STRING -> CellText.classify(ref, cell.getStringCellValue(), null);
             case BOOLEAN -> logical(ref, cell.getBooleanCellValue(), null);
             case ERROR -> error(ref, cell.getErrorCellValue(), null);
@@ -80,7 +95,7 @@ final class PoiCells {
         String formula = "=" + formulaText(cell);
         String note = Notes.CACHED + formula;
         return switch (cell.getCachedFormulaResultType()) {
-            case NUMERIC -> number(cell, ref, cell.getNumericCellValue(), note);
+            case NUMERIC -> number(cell::getCellStyle, ref, cell.getNumericCellValue(), note);
             case STRING -> CellText.classify(ref, cell.getStringCellValue(), note);
             case BOOLEAN -> logical(ref, cell.getBooleanCellValue(), note);
             case ERROR -> error(ref, cell.getErrorCellValue(), note);
@@ -89,19 +104,19 @@ final class PoiCells {
     }
 
     /** An .xlsx cell, read from its stored XML: type attribute {@code t}, value {@code v}, formula {@code f}. */
-    private CellValue xssf(XSSFCell cell, CTCell ct, CellRef ref) {
-        String t = typeText(ct);
+    private CellValue stored(StoredCell cell, CellRef ref) {
+        String t = cell.type();
         String note = null;
-        if (ct.isSetF()) {
+        if (cell.hasFormula()) {
             String formula = "=" + formulaText(cell);
             boolean textResult = t.equals("str") || t.equals("s") || t.equals("inlineStr");
             // openpyxl and other writers that do not calculate store <f> with no <v>, or an empty <v>.
-            if (!ct.isSetV() || (ct.getV().isEmpty() && !textResult)) {
+            if (!cell.hasValue() || (cell.value().isEmpty() && !textResult)) {
                 return new CellValue(ref, CellValue.Kind.TEXT, Double.NaN, formula, Notes.NO_CACHED + formula);
             }
             note = Notes.CACHED + formula;
         }
-        String v = ct.isSetV() ? ct.getV() : null;
+        String v = cell.hasValue() ? cell.value() : null;
         return switch (t) {
             case "n" -> storedNumber(cell, ref, v, note);
             case "e" -> storedError(ref, v == null ? "" : v.strip(), note);
@@ -112,34 +127,79 @@ final class PoiCells {
             }
             // An ISO 8601 date stored as text (strict OOXML); a date is never a measurement.
             case "d" -> new CellValue(ref, CellValue.Kind.TEXT, Double.NaN, v == null ? "" : v.strip(), Notes.join(note, Notes.DATE));
-            case "s" -> note == null ? sharedString(cell, ref, v) : CellText.classify(ref, cell.getStringCellValue(), note);
-            case "str", "inlineStr" -> CellText.classify(ref, cell.getStringCellValue(), note);
+            case "s" -> note == null ? sharedString(ref, v) : CellText.classify(ref, cell.text(), note);
+            case "str", "inlineStr" -> CellText.classify(ref, cell.text(), note);
             default -> CellText.unreadable(ref, v == null ? "" : v.strip(), "a cell of the unknown type '" + t + "'", note);
         };
     }
 
-    /** The cell's {@code t} attribute as written ("n" when absent); read as text, since POI's enum lacks some types. */
-    private static String typeText(CTCell ct) {
-        if (!ct.isSetT()) {
-            return "n";
+    /** A POI usermodel cell seen as its stored XML. */
+    private static final class XssfStored implements StoredCell {
+        private final XSSFCell cell;
+        private final CTCell ct;
+
+        XssfStored(XSSFCell cell) {
+            this.cell = cell;
+            this.ct = cell.getCTCell();
         }
-        try (XmlCursor c = ct.newCursor()) {
-            String t = c.getAttributeText(new QName("", "t"));
-            return t == null ? "n" : t.strip();
+
+        /** The cell's {@code t} attribute as written ("n" when absent); read as text, since POI's enum lacks some types. */
+        @Override
+        public String type() {
+            if (!ct.isSetT()) {
+                return "n";
+            }
+            try (XmlCursor c = ct.newCursor()) {
+                String t = c.getAttributeText(new QName("", "t"));
+                return t == null ? "n" : t.strip();
+            }
+        }
+
+        @Override
+        public boolean hasFormula() {
+            return ct.isSetF();
+        }
+
+        @Override
+        public String formula() {
+            return cell.getCellFormula();
+        }
+
+        @Override
+        public boolean hasValue() {
+            return ct.isSetV();
+        }
+
+        @Override
+        public String value() {
+            return ct.getV();
+        }
+
+        @Override
+        public String text() {
+            return cell.getStringCellValue();
+        }
+
+        @Override
+        public CellStyle style() {
+            return cell.getCellStyle();
         }
     }
 
     /** A shared string by its index, checked: POI shows an index past the table's end as an empty cell. */
-    private CellValue sharedString(XSSFCell cell, CellRef ref, String v) {
+    private CellValue sharedString(CellRef ref, String v) {
         String index = v == null ? "" : v.strip();
-        SharedStrings table = cell.getSheet().getWorkbook().getSharedStringSource();
+        SharedStrings table = ((XSSFWorkbook) workbook).getSharedStringSource();
         if (!index.matches("[0-9]{1,9}") || table == null || Integer.parseInt(index) >= table.getUniqueCount()) {
             return CellText.unreadable(ref, index, "a reference '" + index + "' to a shared string the workbook does not hold", null);
         }
-        return CellText.classify(ref, table.getItemAt(Integer.parseInt(index)).getString(), null);
+        // A label repeats on many rows; its reading depends on the text alone, so it is classified once per string.
+        CellValue once = sharedRead.computeIfAbsent(Integer.parseInt(index),
+                i -> CellText.classify(ref, table.getItemAt(i).getString(), null));
+        return once.ref().equals(ref) ? once : new CellValue(ref, once.kind(), once.number(), once.raw(), once.note());
     }
 
-    private CellValue storedNumber(XSSFCell cell, CellRef ref, String v, String note) {
+    private CellValue storedNumber(StoredCell cell, CellRef ref, String v, String note) {
         if (v == null) {
             return blank(ref, note);
         }
@@ -151,7 +211,7 @@ final class PoiCells {
             return CellText.unreadable(ref, v.strip(), n.problem() != null ? n.problem()
                     : "the stored number '" + v.strip() + "', which is not a number", note);
         }
-        return number(cell, ref, n.value(), note);
+        return number(cell::style, ref, n.value(), note);
     }
 
     private static CellValue storedError(CellRef ref, String v, String note) {
@@ -172,11 +232,19 @@ final class PoiCells {
         }
     }
 
-    private CellValue number(Cell cell, CellRef ref, double value, String note) {
+    private static String formulaText(StoredCell cell) {
+        try {
+            return cell.formula();
+        } catch (RuntimeException e) {
+            return "?";
+        }
+    }
+
+    private CellValue number(Supplier<CellStyle> styleOf, CellRef ref, double value, String note) {
         if (!Double.isFinite(value)) {
             return CellText.unreadable(ref, String.valueOf(value), "the stored value " + value + ", which is not a finite number", note);
         }
-        CellStyle style = cell.getCellStyle();
+        CellStyle style = styleOf.get();
         if (style != null && DateUtil.isADateFormat(style.getDataFormat(), style.getDataFormatString())
                 && DateUtil.isValidExcelDate(value)) {
             LocalDateTime t = DateUtil.getLocalDateTime(value, date1904, true);
@@ -214,7 +282,7 @@ final class PoiCells {
         }
         return switch (v.getCellType()) {
             case NUMERIC -> {
-                CellValue n = number(cell, ref, v.getNumberValue(), note);
+                CellValue n = number(cell::getCellStyle, ref, v.getNumberValue(), note);
                 if (!n.isNumber() && n.note().contains(Notes.UNREADABLE)) {
                     throw new FormulaFailure("the formula " + formula + ", which evaluates to " + v.getNumberValue());
                 }

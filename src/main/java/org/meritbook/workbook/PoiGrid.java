@@ -22,6 +22,9 @@ import org.meritbook.error.InputException;
 final class PoiGrid implements Grid {
     private final Sheet sheet;
     private final PoiCells cells;
+    /** The sheet's plain cells and rows when it was read by streaming ({@link SheetStreams}), else null. */
+    private final StreamedSheet streamed;
+    private final Evaluation evaluation;
     private final Map<Integer, List<Area>> mergedByRow = new HashMap<>();
 
     /**
@@ -30,9 +33,11 @@ final class PoiGrid implements Grid {
      *                 sheet's last row)
      * @throws InputException MALFORMED_SHEET for a merged region that cannot be read or overlaps another
      */
-    PoiGrid(Sheet sheet, PoiCells cells, String fileName, WorkbookBudget budget) {
+    PoiGrid(Sheet sheet, PoiCells cells, String fileName, WorkbookBudget budget, StreamedSheet streamed, Evaluation evaluation) {
         this.sheet = sheet;
         this.cells = cells;
+        this.streamed = streamed;
+        this.evaluation = evaluation;
         int last = Math.max(0, lastRow());
         long indexed = 0;
         List<CellRangeAddress> regions;
@@ -83,19 +88,40 @@ final class PoiGrid implements Grid {
         return sheet.getSheetName();
     }
 
+    /**
+     * Where a formula without a stored result is evaluated: the workbook POI holds whole. When a sheet
+     * of the file was streamed, the usermodel lacks its plain cells, so the file is opened whole for it.
+     */
+    interface Evaluation {
+        /** @throws FormulaFailure when the cell cannot be reached or evaluated */
+        CellValue evaluate(int sheetIndex, int row, int col, CellRef ref) throws FormulaFailure;
+    }
+
     @Override
     public int lastRow() {
+        if (streamed != null) {
+            return streamed.lastRow();
+        }
         return sheet.getPhysicalNumberOfRows() == 0 ? -1 : sheet.getLastRowNum();
     }
 
     @Override
     public int lastCol(int row) {
+        if (streamed != null) {
+            return streamed.lastCol(row);
+        }
         Row r = sheet.getRow(row);
         return r == null ? -1 : Math.max(-1, r.getLastCellNum() - 1);
     }
 
     @Override
     public CellValue value(int row, int col) {
+        if (streamed != null) {
+            StoredCell stored = streamed.cell(row, col);
+            if (stored != null || !streamed.formula(row, col)) {
+                return cells.read(stored, ref(row, col));
+            }
+        }
         return cells.read(cell(row, col), ref(row, col));
     }
 
@@ -120,6 +146,15 @@ final class PoiGrid implements Grid {
 
     @Override
     public boolean rowHidden(int row) {
+        if (streamed != null) {
+            StreamedSheet.Row r = streamed.row(row);
+            if (r == null) {
+                return false;
+            }
+            // POI: a row's height is its ht attribute, else the sheet's default, in twentieths of a point.
+            float points = Double.isNaN(r.height) ? sheet.getDefaultRowHeightInPoints() : (float) r.height;
+            return r.hidden || (short) (points * 20) == 0;
+        }
         Row r = sheet.getRow(row);
         return r != null && (r.getZeroHeight() || r.getHeight() == 0);
     }
@@ -131,6 +166,9 @@ final class PoiGrid implements Grid {
 
     @Override
     public CellValue evaluate(int row, int col) throws FormulaFailure {
+        if (evaluation != null) {
+            return evaluation.evaluate(sheet.getWorkbook().getSheetIndex(sheet), row, col, ref(row, col));
+        }
         Cell c = cell(row, col);
         if (c == null) {
             throw new FormulaFailure("an empty cell");

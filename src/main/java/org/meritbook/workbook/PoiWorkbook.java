@@ -27,13 +27,50 @@ final class PoiWorkbook implements SourceWorkbook {
     private final WorkbookBudget budget;
     /** Grids by sheet index, built once: indexing a sheet's merged regions is done once per file. */
     private final Map<Integer, PoiGrid> grids = new HashMap<>();
+    /** Streamed sheets by part name ({@link SheetStreams}); empty when POI holds every cell. */
+    private final Map<String, StreamedSheet> streamed;
+    private final WholeFile whole;
 
     PoiWorkbook(Workbook workbook, List<String> openingDecisions, String fileName, WorkbookBudget budget) {
+        this(workbook, openingDecisions, fileName, budget, Map.of(), null);
+    }
+
+    /**
+     * @param streamed the sheets read by streaming, by part name; every one must belong to a sheet of the workbook
+     * @param original the whole package, opened only to evaluate a formula when a sheet was streamed
+     */
+    PoiWorkbook(Workbook workbook, List<String> openingDecisions, String fileName, WorkbookBudget budget,
+                Map<String, StreamedSheet> streamed, byte[] original) {
         this.workbook = workbook;
         this.cells = new PoiCells(workbook, budget.maxCells());
         this.openingDecisions = List.copyOf(openingDecisions);
         this.fileName = fileName;
         this.budget = budget;
+        this.streamed = Map.copyOf(streamed);
+        this.whole = streamed.isEmpty() ? null : new WholeFile(original, budget);
+        if (workbook instanceof XSSFWorkbook x) {
+            this.streamed.values().forEach(sheet -> sheet.attach(x.getStylesSource()));
+        }
+    }
+
+    /** True when every streamed sheet is a sheet of the workbook POI opened (else cells would be missed). */
+    boolean streamedSheetsFound() {
+        long found = 0;
+        for (Sheet s : workbook) {
+            if (s instanceof XSSFSheet x && streamed.containsKey(partName(x))) {
+                found++;
+            }
+        }
+        return found == streamed.size();
+    }
+
+    /** How many sheets were read by streaming. */
+    int streamedSheets() {
+        return streamed.size();
+    }
+
+    private static String partName(XSSFSheet sheet) {
+        return sheet.getPackagePart().getPartName().getName();
     }
 
     @Override
@@ -50,7 +87,8 @@ final class PoiWorkbook implements SourceWorkbook {
         for (int i = 0; i < workbook.getNumberOfSheets(); i++) {
             Sheet s = workbook.getSheetAt(i);
             if (s.getSheetName().equalsIgnoreCase(name.strip())) {
-                return Optional.of(grids.computeIfAbsent(i, k -> new PoiGrid(s, cells, fileName, budget)));
+                return Optional.of(grids.computeIfAbsent(i, k -> new PoiGrid(s, cells, fileName, budget,
+                        s instanceof XSSFSheet x ? streamed.get(partName(x)) : null, whole)));
             }
         }
         return Optional.empty();
@@ -172,8 +210,53 @@ final class PoiWorkbook implements SourceWorkbook {
         try {
             // Opened from bytes in memory: closing releases memory and cannot write to the user's file.
             workbook.close();
+            if (whole != null) {
+                whole.close();
+            }
         } catch (IOException e) {
             throw new UncheckedIOException(e);
+        }
+    }
+
+    /**
+     * The file opened whole by POI, on the first formula to evaluate: with a sheet streamed, the
+     * usermodel lacks that sheet's plain cells, and any formula may refer to them. Costs the memory
+     * streaming saves, so only a study that asks for evaluation pays it.
+     */
+    private static final class WholeFile implements PoiGrid.Evaluation {
+        private final byte[] original;
+        private final WorkbookBudget budget;
+        private XSSFWorkbook workbook;
+        private PoiCells cells;
+
+        WholeFile(byte[] original, WorkbookBudget budget) {
+            this.original = original;
+            this.budget = budget;
+        }
+
+        @Override
+        public CellValue evaluate(int sheetIndex, int row, int col, CellRef ref) throws FormulaFailure {
+            if (workbook == null) {
+                try {
+                    workbook = new XSSFWorkbook(new java.io.ByteArrayInputStream(original));
+                } catch (IOException | RuntimeException e) {
+                    throw new FormulaFailure("a formula in a workbook that cannot be opened whole to evaluate it ("
+                            + e.getClass().getSimpleName() + ")");
+                }
+                cells = new PoiCells(workbook, budget.maxCells());
+            }
+            org.apache.poi.ss.usermodel.Row r = workbook.getSheetAt(sheetIndex).getRow(row);
+            org.apache.poi.ss.usermodel.Cell c = r == null ? null : r.getCell(col);
+            if (c == null) {
+                throw new FormulaFailure("an empty cell");
+            }
+            return cells.evaluate(c, ref);
+        }
+
+        void close() throws IOException {
+            if (workbook != null) {
+                workbook.close();
+            }
         }
     }
 }

@@ -13,6 +13,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import javax.xml.stream.XMLStreamException;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
@@ -76,8 +78,12 @@ final class WorkbookFiles {
                 if (ext.equals("xls")) {
                     decisions.add("the file is named .xls but holds an .xlsx workbook; read as .xlsx");
                 }
-                PackageScan.check(bytes, ReadErrors.fileName(file), where, expected, budget);
+                Map<String, Long> cells = PackageScan.check(bytes, ReadErrors.fileName(file), where, expected, budget);
                 PoiLimits.allow(budget);
+                SourceWorkbook streamed = streamed(bytes, cells, decisions, ReadErrors.fileName(file), budget);
+                if (streamed != null) {
+                    return streamed;
+                }
                 wb = new XSSFWorkbook(new ByteArrayInputStream(bytes));
             } else if (magic == FileMagic.OLE2) {
                 POIFSFileSystem fs = new POIFSFileSystem(new ByteArrayInputStream(bytes));
@@ -103,6 +109,31 @@ final class WorkbookFiles {
         } catch (IOException | RuntimeException e) {
             throw ReadErrors.corrupt(where, expected, "a damaged workbook that cannot be read", e);
         }
+    }
+
+    /**
+     * The workbook with its large sheets read by streaming ({@link SheetStreams}), or null when no
+     * sheet is large or a streamed part is not found among the sheets POI opened (then POI reads the
+     * whole file, as for a small workbook: never a sheet with cells missing).
+     */
+    private static SourceWorkbook streamed(byte[] bytes, Map<String, Long> cells, List<String> decisions, String fileName,
+                                           WorkbookBudget budget) throws IOException {
+        SheetStreams.Split split;
+        try {
+            split = SheetStreams.split(bytes, cells, SheetStreams.threshold());
+        } catch (XMLStreamException e) {
+            throw new IOException(e);
+        }
+        if (split == null) {
+            return null;
+        }
+        PoiWorkbook wb = new PoiWorkbook(new XSSFWorkbook(new ByteArrayInputStream(split.lightPackage())), decisions, fileName,
+                budget, split.sheets(), bytes);
+        if (wb.streamedSheetsFound()) {
+            return wb;
+        }
+        wb.close();
+        return null;
     }
 
     /** An .xls holds its cells as records already in memory; counting them is cheap and keeps one rule for all formats. */

@@ -14,8 +14,6 @@ import java.util.BitSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import javax.xml.stream.XMLInputFactory;
 import javax.xml.stream.XMLStreamConstants;
 import javax.xml.stream.XMLStreamException;
@@ -37,7 +35,6 @@ final class XmlPartScan {
     /** Problems listed per part; a damaged sheet can hold thousands, and the first ones say enough. */
     static final int LISTED = 20;
 
-    private static final Pattern CELL = Pattern.compile("\\$?([A-Za-z]{1,3})\\$?([0-9]{1,7})");
     private static final XMLInputFactory FACTORY = factory();
 
     /** One damaged row or cell of a worksheet: {@code at} is "B5" or "row 7". */
@@ -348,13 +345,13 @@ final class XmlPartScan {
             if (ref == null) {
                 col = lastCol + 1;
             } else {
-                Matcher m = CELL.matcher(ref.strip());
-                if (!m.matches()) {
+                long parsed = cellAddress(ref.strip());
+                if (parsed < 0) {
                     facts.damage("row " + row, "a cell reference '" + ref + "', which is not a cell address such as B5");
                     return;
                 }
-                col = column(m.group(1).toUpperCase(Locale.ROOT));
-                int refRow = parseRow(m.group(2));
+                col = (int) (parsed >>> 32);
+                int refRow = (int) parsed;
                 if (refRow != row) {
                     facts.damage(ref.strip().toUpperCase(Locale.ROOT), "a cell " + ref.strip().toUpperCase(Locale.ROOT)
                             + " written inside row " + row + ", so its row is ambiguous");
@@ -365,8 +362,8 @@ final class XmlPartScan {
                 facts.damage("row " + row, "a cell beyond the last column of a worksheet (XFD)");
                 return;
             }
-            String at = CellRef.columnLetters(col - 1) + row;
             if (colsSeen.get(col)) {
+                String at = CellRef.columnLetters(col - 1) + row;
                 facts.damage(at, "cell " + at + " written twice in the sheet's XML (a spreadsheet program writes each cell once)");
                 return;
             }
@@ -396,21 +393,58 @@ final class XmlPartScan {
         }
     }
 
-    /** 1-based row number, or -1 when the text is not a positive whole number. */
+    /** 1-based row number, or -1 when the text is not a positive whole number of up to 8 digits. */
     private static int parseRow(String text) {
-        if (!text.matches("[0-9]{1,8}")) {
+        if (text.isEmpty() || text.length() > 8) {
             return -1;
         }
-        int n = Integer.parseInt(text);
+        int n = 0;
+        for (int i = 0; i < text.length(); i++) {
+            char ch = text.charAt(i);
+            if (ch < '0' || ch > '9') {
+                return -1;
+            }
+            n = n * 10 + (ch - '0');
+        }
         return n >= 1 ? n : -1;
     }
 
-    /** 1-based column number of letters A..ZZZ. */
-    private static int column(String letters) {
-        int c = 0;
-        for (char ch : letters.toCharArray()) {
-            c = c * 26 + (ch - 'A' + 1);
+    /**
+     * A cell address as the pattern {@code \$?([A-Za-z]{1,3})\$?([0-9]{1,7})} reads it, without a
+     * regular expression (it runs once per cell of every sheet): the 1-based column in the high 32
+     * bits and the row ({@link #parseRow}, -1 for row 0) in the low 32, or -1 when the text is not
+     * such an address.
+     */
+    static long cellAddress(String text) {
+        int i = 0;
+        int n = text.length();
+        if (i < n && text.charAt(i) == '$') {
+            i++;
         }
-        return c;
+        int letters = i;
+        int col = 0;
+        while (i < n && i - letters < 4 && isLetter(text.charAt(i))) {
+            col = col * 26 + (Character.toUpperCase(text.charAt(i)) - 'A' + 1);
+            i++;
+        }
+        if (i == letters || i - letters > 3) {
+            return -1;
+        }
+        if (i < n && text.charAt(i) == '$') {
+            i++;
+        }
+        int digits = i;
+        while (i < n && text.charAt(i) >= '0' && text.charAt(i) <= '9') {
+            i++;
+        }
+        if (i != n || i == digits || i - digits > 7) {
+            return -1;
+        }
+        int row = parseRow(text.substring(digits));
+        return ((long) col << 32) | (row & 0xffffffffL);
+    }
+
+    private static boolean isLetter(char ch) {
+        return (ch >= 'A' && ch <= 'Z') || (ch >= 'a' && ch <= 'z');
     }
 }
