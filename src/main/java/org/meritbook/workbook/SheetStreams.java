@@ -457,13 +457,7 @@ final class SheetStreams {
         }
 
         private String attribute(String localName) {
-            for (int i = 0; i < r.getAttributeCount(); i++) {
-                if (r.getAttributeLocalName(i).equals(localName) && (r.getAttributeNamespace(i) == null
-                        || r.getAttributeNamespace(i).isEmpty())) {
-                    return r.getAttributeValue(i);
-                }
-            }
-            return null;
+            return XmlPartScan.unqualifiedAttribute(r, localName);
         }
     }
 

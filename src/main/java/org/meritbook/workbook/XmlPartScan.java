@@ -372,13 +372,7 @@ final class XmlPartScan {
         }
 
         private String attribute(String localName) {
-            for (int i = 0; i < r.getAttributeCount(); i++) {
-                if (r.getAttributeLocalName(i).equals(localName) && (r.getAttributeNamespace(i) == null
-                        || r.getAttributeNamespace(i).isEmpty())) {
-                    return r.getAttributeValue(i);
-                }
-            }
-            return null;
+            return unqualifiedAttribute(r, localName);
         }
 
         /** The {@code r:id} of a workbook's sheet element (relationships namespace, strict or transitional). */
@@ -446,5 +440,16 @@ final class XmlPartScan {
 
     private static boolean isLetter(char ch) {
         return (ch >= 'A' && ch <= 'Z') || (ch >= 'a' && ch <= 'z');
+    }
+
+    /** The value of the attribute {@code localName} in no namespace on the reader's current element, or null. */
+    static String unqualifiedAttribute(XMLStreamReader r, String localName) {
+        for (int i = 0; i < r.getAttributeCount(); i++) {
+            if (r.getAttributeLocalName(i).equals(localName) && (r.getAttributeNamespace(i) == null
+                    || r.getAttributeNamespace(i).isEmpty())) {
+                return r.getAttributeValue(i);
+            }
+        }
+        return null;
     }
 }
