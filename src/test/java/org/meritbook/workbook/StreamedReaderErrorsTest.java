@@ -1,21 +1,12 @@
 package org.meritbook.workbook;
 
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.extension.ExtendWith;
 
 /**
  * Every test of {@link ReaderErrorsTest} again, with every sheet that holds a cell read by streaming
  * ({@link SheetStreams}) instead of through POI's usermodel: the same blocks, values, decisions and
  * located errors, asserted by the same assertions.
  */
+@ExtendWith(EverySheetStreamed.class)
 class StreamedReaderErrorsTest extends ReaderErrorsTest {
-    @BeforeAll
-    static void streamEverySheet() {
-        System.setProperty(SheetStreams.THRESHOLD_PROPERTY, "0");
-    }
-
-    @AfterAll
-    static void streamLargeSheetsOnly() {
-        System.clearProperty(SheetStreams.THRESHOLD_PROPERTY);
-    }
 }
