@@ -17,6 +17,7 @@ import org.meritbook.serve.Browser;
 import org.meritbook.serve.LiveSession;
 import org.meritbook.serve.ShownProblem;
 import org.meritbook.serve.Snapshot;
+import org.meritbook.workbook.WorkbookShelf;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -75,10 +76,13 @@ final class ServeCommand implements Callable<Integer> {
         }
         LiveSession session;
         Optional<Path> lab = Optional.ofNullable(templates);
+        // Parsed workbooks kept from one re-run to the next: a save of the notebook alone parses no workbook.
+        WorkbookShelf shelf = new WorkbookShelf();
         try {
             session = LiveSession.start(notebook, new LiveSession.Options(address, port, out),
-                    PublishingSequence.standard(lab), s -> report(s, console));
+                    PublishingSequence.standard(lab, shelf), s -> report(s, console));
         } catch (BindException e) {
+            shelf.close();
             err.println("meritbook: port " + port + " on " + (bind == null ? "127.0.0.1" : bind)
                     + " is in use or not an address of this machine; choose another with --port N (0 picks a free one)"
                     + (bind == null ? "." : " or another --bind."));
@@ -88,6 +92,7 @@ final class ServeCommand implements Callable<Integer> {
         CountDownLatch stopped = new CountDownLatch(1);
         Thread hook = new Thread(() -> {
             session.close();
+            shelf.close();
             stopped.countDown();
         }, "meritbook-live-stop");
         Runtime.getRuntime().addShutdownHook(hook);

@@ -35,7 +35,9 @@ import org.meritbook.study.SourceFile;
 import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
 import org.meritbook.workbook.DataBlock;
+import org.meritbook.workbook.WorkbookBudget;
 import org.meritbook.workbook.WorkbookReader;
+import org.meritbook.workbook.WorkbookShelf;
 
 /**
  * Runs a study notebook: parse, read the blocks each cell names, run the analyses in notebook
@@ -43,9 +45,24 @@ import org.meritbook.workbook.WorkbookReader;
  */
 public final class StudyRunner {
     private final Map<AnalysisKind, Analysis> analyses;
+    /** Parsed workbooks kept between runs (a live session); null: each run parses its files. */
+    private final WorkbookShelf shelf;
 
     public StudyRunner(Map<AnalysisKind, Analysis> analyses) {
+        this(analyses, null);
+    }
+
+    private StudyRunner(Map<AnalysisKind, Analysis> analyses, WorkbookShelf shelf) {
         this.analyses = new EnumMap<>(analyses);
+        this.shelf = shelf;
+    }
+
+    /**
+     * This runner, keeping the workbooks it parses on {@code shelf} for its next runs: a file whose
+     * bytes have not changed is not parsed again (the live notebook re-runs on every save).
+     */
+    public StudyRunner keepingWorkbooks(WorkbookShelf shelf) {
+        return new StudyRunner(analyses, java.util.Objects.requireNonNull(shelf, "shelf"));
     }
 
     /** The analyses this version implements. */
@@ -76,7 +93,8 @@ public final class StudyRunner {
         checkExclusionRecords(study, profile);
         Map<String, Set<String>> rangesBySource = new LinkedHashMap<>();
         List<SectionResult> sections = new ArrayList<>();
-        try (WorkbookReader reader = new WorkbookReader()) {
+        try (WorkbookReader reader = shelf == null ? new WorkbookReader()
+                : new WorkbookReader(WorkbookBudget.fromEnvironment(), shelf)) {
             DataAccess access = reference -> {
                 SourceFile source = study.sources().get(reference.source());
                 DataBlock block = reader.read(source.path(), reference);

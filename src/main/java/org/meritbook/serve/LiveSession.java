@@ -11,6 +11,7 @@ import java.util.function.Consumer;
 import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.publishing.PublishingSequence;
+import org.meritbook.workbook.WorkbookShelf;
 
 /**
  * {@code meritbook serve} assembled: the study, the watcher that re-runs it and the server that
@@ -23,11 +24,14 @@ public final class LiveSession implements AutoCloseable {
     private final LiveStudy study;
     private final FileWatcher watcher;
     private final LiveServer server;
+    /** The parsed workbooks this session keeps between runs, when it made the sequence itself. */
+    private final WorkbookShelf ownShelf;
 
-    private LiveSession(LiveStudy study, FileWatcher watcher, LiveServer server) {
+    private LiveSession(LiveStudy study, FileWatcher watcher, LiveServer server, WorkbookShelf ownShelf) {
         this.study = study;
         this.watcher = watcher;
         this.server = server;
+        this.ownShelf = ownShelf;
     }
 
     /**
@@ -39,8 +43,15 @@ public final class LiveSession implements AutoCloseable {
     public static LiveSession start(Path notebook, int port, DossierRenderer renderer, Consumer<Snapshot> finished)
             throws IOException {
         Path out = notebook.toAbsolutePath().normalize().getParent().resolve("out");
-        return start(notebook, new Options(null, port, out),
-                new PublishingSequence(StudyRunner.withBuiltInAnalyses()::run, renderer), finished);
+        WorkbookShelf shelf = new WorkbookShelf();
+        try {
+            return start(notebook, new Options(null, port, out),
+                    new PublishingSequence(StudyRunner.withBuiltInAnalyses().keepingWorkbooks(shelf)::run, renderer),
+                    finished, shelf);
+        } catch (IOException | RuntimeException e) {
+            shelf.close();
+            throw e;
+        }
     }
 
     /**
@@ -58,9 +69,15 @@ public final class LiveSession implements AutoCloseable {
      * Starts serving with {@code options} and runs the study once.
      *
      * @param sequence the publishing sequence {@code run} issues with; the preview and "Issue revision" use it
+     *                 (made with a {@link WorkbookShelf}, re-runs do not parse an unchanged workbook again)
      */
     public static LiveSession start(Path notebook, Options options, PublishingSequence sequence,
                                     Consumer<Snapshot> finished) throws IOException {
+        return start(notebook, options, sequence, finished, null);
+    }
+
+    private static LiveSession start(Path notebook, Options options, PublishingSequence sequence,
+                                     Consumer<Snapshot> finished, WorkbookShelf ownShelf) throws IOException {
         LiveStudy[] study = new LiveStudy[1];
         FileWatcher watcher = new FileWatcher(DEBOUNCE, () -> study[0].request());
         study[0] = new LiveStudy(notebook, sequence, Optional.of(options.out()), watcher::watch, finished);
@@ -75,7 +92,7 @@ public final class LiveSession implements AutoCloseable {
             throw e;
         }
         study[0].start();
-        return new LiveSession(study[0], watcher, server);
+        return new LiveSession(study[0], watcher, server, ownShelf);
     }
 
     public URI uri() {
@@ -100,5 +117,8 @@ public final class LiveSession implements AutoCloseable {
         server.close();
         watcher.close();
         study.close();
+        if (ownShelf != null) {
+            ownShelf.close();
+        }
     }
 }

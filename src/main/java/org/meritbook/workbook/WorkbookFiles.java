@@ -38,6 +38,11 @@ final class WorkbookFiles {
     }
 
     static SourceWorkbook open(Path file, String where, WorkbookBudget budget) {
+        return parse(file, read(file, where, budget), where, budget);
+    }
+
+    /** The file's bytes, after the checks every format shares: it exists, its extension is known, its size is in budget. */
+    static byte[] read(Path file, String where, WorkbookBudget budget) {
         if (!Files.isRegularFile(file)) {
             throw ReadErrors.fileNotFound(where, file, Files.isDirectory(file));
         }
@@ -56,6 +61,12 @@ final class WorkbookFiles {
         } catch (IOException e) {
             throw ReadErrors.corrupt(where, "a readable file", "a file that cannot be read (" + e.getClass().getSimpleName() + ")", e);
         }
+        return bytes;
+    }
+
+    /** The workbook those bytes (read from {@code file} by {@link #read}) hold. */
+    static SourceWorkbook parse(Path file, byte[] bytes, String where, WorkbookBudget budget) {
+        String ext = extension(file);
         return ext.equals("csv") ? csv(file, bytes, where, budget) : excel(bytes, file, ext, where, budget);
     }
 

@@ -22,6 +22,9 @@ import org.meritbook.study.DataReference;
 public final class WorkbookReader implements BlockReader {
     private final Map<Path, SourceWorkbook> open = new LinkedHashMap<>();
     private final WorkbookBudget budget;
+    /** Where parsed workbooks are taken from and given back to on close; null: each is parsed, then closed. */
+    private final WorkbookShelf shelf;
+    private final Map<Path, WorkbookShelf.Kept> taken = new LinkedHashMap<>();
 
     /** A reader with the budget the environment sets ({@link WorkbookBudget#fromEnvironment()}). */
     public WorkbookReader() {
@@ -31,6 +34,16 @@ public final class WorkbookReader implements BlockReader {
     /** @param budget how large a workbook this reader opens */
     public WorkbookReader(WorkbookBudget budget) {
         this.budget = java.util.Objects.requireNonNull(budget, "budget");
+        this.shelf = null;
+    }
+
+    /**
+     * A reader that takes a file's parsed workbook from {@code shelf} when the file's bytes are those it
+     * was parsed from, and gives what it opened back to the shelf when it closes (a live session's runs).
+     */
+    public WorkbookReader(WorkbookBudget budget, WorkbookShelf shelf) {
+        this.budget = java.util.Objects.requireNonNull(budget, "budget");
+        this.shelf = java.util.Objects.requireNonNull(shelf, "shelf");
     }
 
     @Override
@@ -63,7 +76,13 @@ public final class WorkbookReader implements BlockReader {
         Path key = file.toAbsolutePath().normalize();
         SourceWorkbook wb = open.get(key);
         if (wb == null) {
-            wb = WorkbookFiles.open(file, where, budget);
+            if (shelf == null) {
+                wb = WorkbookFiles.open(file, where, budget);
+            } else {
+                WorkbookShelf.Kept k = shelf.take(key, file, where, budget);
+                taken.put(key, k);
+                wb = k.workbook();
+            }
             open.put(key, wb);
         }
         return wb;
@@ -174,9 +193,15 @@ public final class WorkbookReader implements BlockReader {
         return new BlockBuilder(file, g, reference).build(headers, a.firstRow(), a.firstCol(), firstData, lastData, decisions);
     }
 
-    /** Closes every file this reader opened. */
+    /** Closes every file this reader opened, or gives it back to the shelf it came from. */
     @Override
     public void close() {
+        if (shelf != null) {
+            taken.forEach(shelf::giveBack);
+            taken.clear();
+            open.clear();
+            return;
+        }
         RuntimeException failure = null;
         for (SourceWorkbook wb : open.values()) {
             try {

@@ -16,8 +16,8 @@ import org.meritbook.serve.Snapshot;
  * Measures (asserts nothing) how soon the live notebook shows a saved change: a session on a copy of
  * a study, the notebook saved N times after a few warm-up saves, each save waited for. Prints, per
  * save and as medians, the server's re-run time (parse, read, compute, results, HTML page) and the
- * time from the file written to the new page state, which adds the file watcher's quiet period.
- * Run by bench/live-latency.sh.
+ * time from the file written to the new page state, which adds the file watcher's quiet period, and
+ * the process's CPU time per save (on a shared machine the steadier figure). Run by bench/live-latency.sh.
  */
 public final class LiveLatency {
     private static final int WARM_UP = 5;
@@ -33,10 +33,14 @@ public final class LiveLatency {
         LinkedBlockingQueue<Snapshot> done = new LinkedBlockingQueue<>();
         List<Long> runMs = new ArrayList<>();
         List<Long> saveToPageMs = new ArrayList<>();
+        long cpuAtStart = 0;
         try (LiveSession session = LiveSession.start(notebook, 0, new DossierRenderer(Optional.empty()), done::add)) {
             Snapshot first = next(done);
             System.out.printf("serving %s; first run (cold) %d ms%n", session.server().base(), first.elapsedMs());
             for (int i = 1; i <= WARM_UP + n; i++) {
+                if (i == WARM_UP + 1) {
+                    cpuAtStart = processCpuNanos();
+                }
                 // A different narrative line each time: the analyses see the same data, the page changes.
                 long written = System.nanoTime();
                 Files.writeString(notebook, text + "\nEdit " + i + " of the closing remarks.\n");
@@ -53,8 +57,15 @@ public final class LiveLatency {
                 }
             }
         }
+        long cpuPerSave = TimeUnit.NANOSECONDS.toMillis(processCpuNanos() - cpuAtStart) / n;
         System.out.printf("median of %d saves: re-run %d ms, save to new page state %d ms (watcher quiet period "
-                + "included)%n", n, median(runMs), median(saveToPageMs));
+                + "included); process CPU %d ms per save%n", n, median(runMs), median(saveToPageMs), cpuPerSave);
+    }
+
+    /** Every thread of this JVM, the compiler's and the collector's included. */
+    private static long processCpuNanos() {
+        return ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean())
+                .getProcessCpuTime();
     }
 
     private static long median(List<Long> values) {
