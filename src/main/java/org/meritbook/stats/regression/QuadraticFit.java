@@ -4,7 +4,6 @@ import org.meritbook.stats.Interval;
 
 import java.util.Arrays;
 import java.util.Objects;
-import org.apache.commons.math3.distribution.TDistribution;
 
 /**
  * A fitted second-order calibration y = a + b·x + c·x² with everything a dossier reports about it.
@@ -203,7 +202,7 @@ public record QuadraticFit(Weighting weighting, int n, int degreesOfFreedom,
         if (!(level > 0 && level < 1)) {
             throw new IllegalArgumentException("confidence level must lie in (0, 1) but was " + level);
         }
-        return new TDistribution(null, degreesOfFreedom, T_ACCURACY).inverseCumulativeProbability(0.5 + level / 2);
+        return TwoSidedT.quantile(degreesOfFreedom, level, T_ACCURACY);
     }
 
     /**
