@@ -35,7 +35,20 @@ public final class RevisionDiffer {
 
     /** Two runs' results.json as bytes (the live preview keeps them in memory). */
     public static RevisionDiff diff(String beforeLabel, byte[] before, String afterLabel, byte[] after) {
-        return diff(beforeLabel, ReceivedResults.parse(before, beforeLabel), afterLabel, ReceivedResults.parse(after, afterLabel));
+        return diff(parse(beforeLabel, before), parse(afterLabel, after));
+    }
+
+    /** A results.json read and checked once, to be compared with several others (the live preview's runs). */
+    public record Parsed(String label, JsonNode tree) {
+    }
+
+    /** @throws org.meritbook.error.InputException as {@link ReceivedResults#parse} */
+    public static Parsed parse(String label, byte[] json) {
+        return new Parsed(label, ReceivedResults.parse(json, label));
+    }
+
+    public static RevisionDiff diff(Parsed before, Parsed after) {
+        return diff(before.label(), before.tree(), after.label(), after.tree());
     }
 
     static RevisionDiff diff(String beforeLabel, JsonNode before, String afterLabel, JsonNode after) {

@@ -43,6 +43,11 @@ public final class LiveStudy implements AutoCloseable {
     private final Thread worker;
     private boolean requested;
     private boolean closed;
+    /**
+     * The last shown run's results.json as parsed for its comparison, so that the next comparison
+     * parses only its own run's; read and written by the worker thread only (after the join).
+     */
+    private RevisionDiffer.Parsed lastParsed;
 
     /**
      * A preview that knows no output folder, so no earlier revision: a first revision's dossier.
@@ -151,13 +156,15 @@ public final class LiveStudy implements AutoCloseable {
                     : sequence.draft(results, RevisionContext.none());
             byte[] json = draft.json();
             Snapshot.Issued previous = issued;
+            RevisionDiffer.Parsed parsedBefore = lastParsed;
             // Compared with the last successful run, so a fix after a broken save lists what the edits
             // moved; worked out on a second thread while this one renders the page.
-            SideTask<List<RevisionDiff.Change>> changes = SideTask.start("meritbook-live-changes",
-                    () -> previous == null ? List.of()
-                    : RevisionDiffer.diff("run " + previous.run(), previous.json(), "run " + run, json).results());
+            SideTask<Compared> changes = SideTask.start("meritbook-live-changes",
+                    () -> compare(previous, parsedBefore, run, json));
             byte[] html = sequence.html(draft);
-            List<RevisionDiff.Change> changed = changes.join("listing the changes since the last run");
+            Compared compared = changes.join("listing the changes since the last run");
+            List<RevisionDiff.Change> changed = compared.changes();
+            lastParsed = compared.now();
             issued = new Snapshot.Issued(run, study.frontMatter().title(), study.frontMatter().revision(), html, json,
                     Outcome.of(results), previous == null ? 0 : previous.run(), changed, PointIndex.of(results),
                     Instant.now());
@@ -181,6 +188,22 @@ public final class LiveStudy implements AutoCloseable {
         Snapshot done = new Snapshot(run, state, problems, elapsed, Instant.now(), issued);
         current.set(done);
         finished.accept(done);
+    }
+
+    /** The changes since the previous run, and this run's results.json parsed for the next comparison. */
+    private record Compared(List<RevisionDiff.Change> changes, RevisionDiffer.Parsed now) {
+    }
+
+    private static Compared compare(Snapshot.Issued previous, RevisionDiffer.Parsed parsedBefore, int run, byte[] json) {
+        RevisionDiffer.Parsed now = RevisionDiffer.parse("run " + run, json);
+        if (previous == null) {
+            return new Compared(List.of(), now);
+        }
+        // The previous run's tree is reused only when it is that run's (an overtaken run was parsed but never shown).
+        String label = "run " + previous.run();
+        RevisionDiffer.Parsed before = parsedBefore != null && parsedBefore.label().equals(label)
+                ? parsedBefore : RevisionDiffer.parse(label, previous.json());
+        return new Compared(RevisionDiffer.diff(before, now).results(), now);
     }
 
     private boolean overtaken() {
