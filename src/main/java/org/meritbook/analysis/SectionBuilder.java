@@ -1,7 +1,9 @@
 package org.meritbook.analysis;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import org.meritbook.figures.FigureSpec;
 import org.meritbook.stats.Interval;
 import org.meritbook.study.AnalysisCell;
@@ -17,6 +19,8 @@ public final class SectionBuilder {
     private final List<Setting> settings = new ArrayList<>();
     private final List<Quantity> quantities = new ArrayList<>();
     private final List<Step> steps = new ArrayList<>();
+    /** The first step recorded under each id: a section over 1,000 groups refers back to 2,000 steps. */
+    private final Map<String, Step> stepsById = new HashMap<>();
     private final List<FigureSpec> figures = new ArrayList<>();
     private final List<Verdict> verdicts = new ArrayList<>();
     private final List<String> warnings = new ArrayList<>();
@@ -47,7 +51,9 @@ public final class SectionBuilder {
     public String step(String name, String label, String formula, List<StepInput> inputs, double value, String unit,
                        String method) {
         String id = stepId(name);
-        steps.add(new Step(id, label, formula, inputs, value, unit, method));
+        Step step = new Step(id, label, formula, inputs, value, unit, method);
+        steps.add(step);
+        stepsById.putIfAbsent(id, step);
         return id;
     }
 
@@ -60,8 +66,10 @@ public final class SectionBuilder {
 
     /** An input that is the value of an earlier step of this section, named by its symbol. */
     public StepInput ref(String symbol, String stepId) {
-        Step step = steps.stream().filter(s -> s.id().equals(stepId)).findFirst()
-                .orElseThrow(() -> new IllegalStateException("no step " + stepId + " recorded yet"));
+        Step step = stepsById.get(stepId);
+        if (step == null) {
+            throw new IllegalStateException("no step " + stepId + " recorded yet");
+        }
         return StepInput.number(symbol, step.value(), step.unit(), stepId);
     }
 

@@ -44,6 +44,8 @@ final class PoiCells {
     private FormulaEvaluator evaluator;
     /** Shared strings as read, by index (the ref of the first cell that used each). */
     private final java.util.Map<Integer, CellValue> sharedRead = new java.util.HashMap<>();
+    /** Whether a number format shows dates, by format. */
+    private final java.util.Map<NumberFormat, Boolean> dateFormats = new java.util.HashMap<>();
 
     /**
      * @param maxReferencedCells the most cells one evaluated formula may refer to (a formula over
@@ -190,13 +192,26 @@ final class PoiCells {
     private CellValue sharedString(CellRef ref, String v) {
         String index = v == null ? "" : v.strip();
         SharedStrings table = ((XSSFWorkbook) workbook).getSharedStringSource();
-        if (!index.matches("[0-9]{1,9}") || table == null || Integer.parseInt(index) >= table.getUniqueCount()) {
+        if (!sharedIndex(index) || table == null || Integer.parseInt(index) >= table.getUniqueCount()) {
             return CellText.unreadable(ref, index, "a reference '" + index + "' to a shared string the workbook does not hold", null);
         }
         // A label repeats on many rows; its reading depends on the text alone, so it is classified once per string.
         CellValue once = sharedRead.computeIfAbsent(Integer.parseInt(index),
                 i -> CellText.classify(ref, table.getItemAt(i).getString(), null));
         return once.ref().equals(ref) ? once : new CellValue(ref, once.kind(), once.number(), once.raw(), once.note());
+    }
+
+    /** Like {@code index.matches("[0-9]{1,9}")}, which compiled a pattern per cell. */
+    private static boolean sharedIndex(String index) {
+        if (index.isEmpty() || index.length() > 9) {
+            return false;
+        }
+        for (int i = 0; i < index.length(); i++) {
+            if (index.charAt(i) < '0' || index.charAt(i) > '9') {
+                return false;
+            }
+        }
+        return true;
     }
 
     private CellValue storedNumber(StoredCell cell, CellRef ref, String v, String note) {
@@ -245,17 +260,29 @@ final class PoiCells {
             return CellText.unreadable(ref, String.valueOf(value), "the stored value " + value + ", which is not a finite number", note);
         }
         CellStyle style = styleOf.get();
-        if (style != null && DateUtil.isADateFormat(style.getDataFormat(), style.getDataFormatString())
-                && DateUtil.isValidExcelDate(value)) {
+        String format = style == null ? null : style.getDataFormatString();
+        if (style != null && dateFormat(style.getDataFormat(), format) && DateUtil.isValidExcelDate(value)) {
             LocalDateTime t = DateUtil.getLocalDateTime(value, date1904, true);
             if (t != null) {
                 return new CellValue(ref, CellValue.Kind.TEXT, Double.NaN, iso(t, value), Notes.join(note, Notes.DATE));
             }
         }
-        String shown = style == null
-                ? formatter.formatRawCellContents(value, 0, "General")
-                : formatter.formatRawCellContents(value, style.getDataFormat(), style.getDataFormatString());
+        String shown = style == null || GeneralNumber.isGeneral(format) ? GeneralNumber.plain(value) : null;
+        if (shown == null) {
+            shown = style == null
+                    ? formatter.formatRawCellContents(value, 0, "General")
+                    : formatter.formatRawCellContents(value, style.getDataFormat(), format);
+        }
         return new CellValue(ref, CellValue.Kind.NUMBER, value, shown, note);
+    }
+
+    /** POI's date-format test, once per format: it runs several regular expressions, and a block has 100,000 numbers in a few formats. */
+    private boolean dateFormat(short index, String format) {
+        return dateFormats.computeIfAbsent(new NumberFormat(index, format), f -> DateUtil.isADateFormat(f.index(), f.text()));
+    }
+
+    /** A cell style's number format as POI's date test reads it. */
+    private record NumberFormat(short index, String text) {
     }
 
     /**

@@ -22,7 +22,8 @@ import org.apache.commons.compress.archivers.zip.ZipArchiveOutputStream;
  * Splits the large worksheets of an .xlsx package off POI's usermodel. POI's {@code XSSFWorkbook}
  * builds an XML tree of every cell (about 720 bytes each), so a 100,000-row block of four columns
  * needs more heap than the whole study. For each worksheet part above the threshold, its XML is
- * read once with StAX: the plain cells go into a compact {@link StreamedSheet}, and the part is
+ * read once (on its bytes by {@link SheetDataScanner} when it is UTF-8, as spreadsheet programs
+ * write it, else with StAX): the plain cells go into a compact {@link StreamedSheet}, and the part is
  * rewritten for POI with its {@code <sheetData>} reduced to the formula cells (in their rows, every
  * position written out), so POI still opens the package with the sheet's merged regions, column
  * widths, tables and names, and renders each formula, shared ones included, itself. The rest of
@@ -110,8 +111,20 @@ final class SheetStreams {
         return new Split(light.toByteArray(), sheets);
     }
 
-    /** Reads one worksheet part into {@code sheet} and returns the part as POI is to see it. */
-    private static byte[] transform(InputStream part, StreamedSheet sheet) throws XMLStreamException {
+    /**
+     * Reads one worksheet part into {@code sheet} and returns the part as POI is to see it: a UTF-8
+     * part on its bytes ({@link SheetDataScanner}), any other through StAX.
+     */
+    private static byte[] transform(InputStream part, StreamedSheet sheet) throws XMLStreamException, IOException {
+        byte[] head = new byte[1 << 16];
+        int n = part.readNBytes(head, 0, head.length);
+        if (SheetDataScanner.utf8(head, n)) {
+            return new SheetDataScanner(head, n, part, sheet).run();
+        }
+        return transformStax(new java.io.SequenceInputStream(new ByteArrayInputStream(head, 0, n), part), sheet);
+    }
+
+    private static byte[] transformStax(InputStream part, StreamedSheet sheet) throws XMLStreamException {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         XMLStreamReader r;
         synchronized (INPUT) {

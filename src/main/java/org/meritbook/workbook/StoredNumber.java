@@ -33,10 +33,11 @@ final class StoredNumber {
 
     static Parsed parse(String text) {
         String t = text.strip();
-        if (NOT_FINITE.matcher(t).matches()) {
+        boolean plain = plainDecimal(t);
+        if (!plain && NOT_FINITE.matcher(t).matches()) {
             return new Parsed(Double.NaN, "the stored value '" + t + "', which is not a finite number", true);
         }
-        if (!DECIMAL.matcher(t).matches()) {
+        if (!plain && !DECIMAL.matcher(t).matches()) {
             return new Parsed(Double.NaN, null, false);
         }
         double d = Double.parseDouble(t);
@@ -49,6 +50,28 @@ final class StoredNumber {
                     + ", which is below the smallest number a double holds (about 4.9e-324) and would read as 0", true);
         }
         return new Parsed(d, null, true);
+    }
+
+    /**
+     * True for the commonest form, digits with at most one point and no exponent ("12.5", "-0.031"):
+     * a {@link #DECIMAL} number and no spelling of NaN or infinity, told without the two regular
+     * expressions (a sheet's stored values are read 100,000 at a time).
+     */
+    private static boolean plainDecimal(String t) {
+        int i = !t.isEmpty() && (t.charAt(0) == '-' || t.charAt(0) == '+') ? 1 : 0;
+        boolean digit = false;
+        boolean point = false;
+        for (; i < t.length(); i++) {
+            char c = t.charAt(i);
+            if (c >= '0' && c <= '9') {
+                digit = true;
+            } else if (c == '.' && !point) {
+                point = true;
+            } else {
+                return false;
+            }
+        }
+        return digit;
     }
 
     private static boolean hasNonZeroDigit(String t) {

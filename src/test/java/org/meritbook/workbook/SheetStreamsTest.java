@@ -126,6 +126,30 @@ class SheetStreamsTest {
         assertTrue(b[1].decisions().stream().anyMatch(d -> d.contains("hidden row 7")), b[1].decisions().toString());
     }
 
+    /** The streamed pass reads a UTF-8 part on its bytes: XML's own forms must read as the StAX reader reads them. */
+    @Test
+    void xmlMarkupInTheSheetReadsTheSameBothWays() throws Exception {
+        Path plain = Fixtures.xlsx(dir, "plain.xlsx", Fixtures::calibration);
+        String ns = "http://schemas.openxmlformats.org/spreadsheetml/2006/main";
+        byte[] bytes = XlsxParts.of(Files.readAllBytes(plain)).edit(SHEET, x -> x
+                // a comment and a processing instruction between rows and inside a value, line ends CR LF between cells
+                .replaceFirst("<row r=\"5\"", "<!-- edited by hand --><?note a?>\r\n<row r=\"5\"")
+                .replaceFirst("<c r=\"B5\"([^>]*)><v>([^<]*)</v>", "<c r='B5'$1>\r\n<v>$2<!-- kept --></v>")
+                // text written with entities, character references, a CDATA section and CR LF inside
+                .replaceFirst("<c r=\"A7\"[^>]*>.*?</c>", "<c r=\"A7\" t=\"inlineStr\"><is><t>L&amp;&#51;&#x3C;<![CDATA[a<b]]]]>\r\nc</t></is></c>")
+                // a row whose cells carry a namespace prefix, a formula among them, and a cell position written as a character reference
+                .replaceFirst("<row r=\"8\"([^>]*)>.*?</row>", "<x:row r=\"8\"$1 xmlns:x=\"" + ns + "\"><x:c r=\"A8\" t=\"inlineStr\">"
+                        + "<x:is><x:t>L4</x:t></x:is></x:c><x:c r=\"&#66;8\" s = '0'><x:v>1</x:v></x:c>"
+                        + "<x:c r=\"C8\"><x:f>B8*24100</x:f><x:v>24100</x:v></x:c></x:row>")).zip();
+        Path file = Files.write(dir.resolve("markup.xlsx"), bytes);
+        DataReference ref = Fixtures.ref("Calibration", "A4:D8");
+        DataBlock[] b = bothWays(() -> read(file, ref), new DataBlock[2]);
+        assertEquals(b[0], b[1]);
+        assertEquals("L&3<a<b]]\nc", b[1].column("A").orElseThrow().values().get(2).raw());
+        assertEquals("cached result of formula =B8*24100", b[1].column("C").orElseThrow().values().get(3).note());
+        assertEquals(1.0, b[1].column("B").orElseThrow().values().get(3).number());
+    }
+
     @Test
     void aSheetClaimingTheWholeGridIsReadForWhatItHolds() throws Exception {
         Path file = generated();
