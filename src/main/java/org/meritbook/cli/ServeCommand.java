@@ -12,12 +12,12 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
+import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.publishing.PublishingSequence;
 import org.meritbook.serve.Browser;
 import org.meritbook.serve.LiveSession;
 import org.meritbook.serve.ShownProblem;
 import org.meritbook.serve.Snapshot;
-import org.meritbook.workbook.WorkbookShelf;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -77,12 +77,12 @@ final class ServeCommand implements Callable<Integer> {
         LiveSession session;
         Optional<Path> lab = Optional.ofNullable(templates);
         // Parsed workbooks kept from one re-run to the next: a save of the notebook alone parses no workbook.
-        WorkbookShelf shelf = new WorkbookShelf();
+        StudyRunner runner = StudyRunner.withBuiltInAnalyses().keepingWorkbooks();
         try {
             session = LiveSession.start(notebook, new LiveSession.Options(address, port, out),
-                    PublishingSequence.standard(lab, shelf), s -> report(s, console));
+                    PublishingSequence.standard(lab, runner), s -> report(s, console));
         } catch (BindException e) {
-            shelf.close();
+            runner.close();
             err.println("meritbook: port " + port + " on " + (bind == null ? "127.0.0.1" : bind)
                     + " is in use or not an address of this machine; choose another with --port N (0 picks a free one)"
                     + (bind == null ? "." : " or another --bind."));
@@ -92,7 +92,7 @@ final class ServeCommand implements Callable<Integer> {
         CountDownLatch stopped = new CountDownLatch(1);
         Thread hook = new Thread(() -> {
             session.close();
-            shelf.close();
+            runner.close();
             stopped.countDown();
         }, "meritbook-live-stop");
         Runtime.getRuntime().addShutdownHook(hook);

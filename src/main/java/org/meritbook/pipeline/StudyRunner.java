@@ -43,7 +43,7 @@ import org.meritbook.workbook.WorkbookShelf;
  * Runs a study notebook: parse, read the blocks each cell names, run the analyses in notebook
  * order, and checksum the inputs. A plain function of the notebook and the workbooks it names.
  */
-public final class StudyRunner {
+public final class StudyRunner implements AutoCloseable {
     private final Map<AnalysisKind, Analysis> analyses;
     /** Parsed workbooks kept between runs (a live session); null: each run parses its files. */
     private final WorkbookShelf shelf;
@@ -58,11 +58,19 @@ public final class StudyRunner {
     }
 
     /**
-     * This runner, keeping the workbooks it parses on {@code shelf} for its next runs: a file whose
+     * This runner, keeping the workbooks it parses for its next runs until it is closed: a file whose
      * bytes have not changed is not parsed again (the live notebook re-runs on every save).
      */
-    public StudyRunner keepingWorkbooks(WorkbookShelf shelf) {
-        return new StudyRunner(analyses, java.util.Objects.requireNonNull(shelf, "shelf"));
+    public StudyRunner keepingWorkbooks() {
+        return new StudyRunner(analyses, new WorkbookShelf());
+    }
+
+    /** Lets go of the workbooks a {@link #keepingWorkbooks} runner keeps; nothing for another runner. */
+    @Override
+    public void close() {
+        if (shelf != null) {
+            shelf.close();
+        }
     }
 
     /** The analyses this version implements. */

@@ -24,7 +24,6 @@ import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
 import org.meritbook.trail.TrailMarkdown;
 import org.meritbook.trail.TrailSection;
-import org.meritbook.workbook.WorkbookShelf;
 
 /**
  * Turns a notebook into a revision's dossier, the same way for every command: run the study, find
@@ -54,10 +53,9 @@ public final class PublishingSequence {
         return new PublishingSequence(StudyRunner.withBuiltInAnalyses()::run, DossierRenderer.warmingUp(templates));
     }
 
-    /** The same, keeping parsed workbooks on {@code shelf} from one run to the next (the live notebook). */
-    public static PublishingSequence standard(Optional<Path> templates, WorkbookShelf shelf) {
-        return new PublishingSequence(StudyRunner.withBuiltInAnalyses().keepingWorkbooks(shelf)::run,
-                DossierRenderer.warmingUp(templates));
+    /** The same with another runner (the live notebook's keeps parsed workbooks from one run to the next). */
+    public static PublishingSequence standard(Optional<Path> templates, StudyRunner runner) {
+        return new PublishingSequence(runner::run, DossierRenderer.warmingUp(templates));
     }
 
     /**

@@ -11,7 +11,6 @@ import java.util.function.Consumer;
 import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.pipeline.StudyRunner;
 import org.meritbook.publishing.PublishingSequence;
-import org.meritbook.workbook.WorkbookShelf;
 
 /**
  * {@code meritbook serve} assembled: the study, the watcher that re-runs it and the server that
@@ -24,14 +23,14 @@ public final class LiveSession implements AutoCloseable {
     private final LiveStudy study;
     private final FileWatcher watcher;
     private final LiveServer server;
-    /** The parsed workbooks this session keeps between runs, when it made the sequence itself. */
-    private final WorkbookShelf ownShelf;
+    /** The runner that keeps parsed workbooks between runs, when this session made the sequence itself. */
+    private final StudyRunner ownRunner;
 
-    private LiveSession(LiveStudy study, FileWatcher watcher, LiveServer server, WorkbookShelf ownShelf) {
+    private LiveSession(LiveStudy study, FileWatcher watcher, LiveServer server, StudyRunner ownRunner) {
         this.study = study;
         this.watcher = watcher;
         this.server = server;
-        this.ownShelf = ownShelf;
+        this.ownRunner = ownRunner;
     }
 
     /**
@@ -43,13 +42,12 @@ public final class LiveSession implements AutoCloseable {
     public static LiveSession start(Path notebook, int port, DossierRenderer renderer, Consumer<Snapshot> finished)
             throws IOException {
         Path out = notebook.toAbsolutePath().normalize().getParent().resolve("out");
-        WorkbookShelf shelf = new WorkbookShelf();
+        StudyRunner runner = StudyRunner.withBuiltInAnalyses().keepingWorkbooks();
         try {
-            return start(notebook, new Options(null, port, out),
-                    new PublishingSequence(StudyRunner.withBuiltInAnalyses().keepingWorkbooks(shelf)::run, renderer),
-                    finished, shelf);
+            return start(notebook, new Options(null, port, out), new PublishingSequence(runner::run, renderer),
+                    finished, runner);
         } catch (IOException | RuntimeException e) {
-            shelf.close();
+            runner.close();
             throw e;
         }
     }
@@ -69,7 +67,7 @@ public final class LiveSession implements AutoCloseable {
      * Starts serving with {@code options} and runs the study once.
      *
      * @param sequence the publishing sequence {@code run} issues with; the preview and "Issue revision" use it
-     *                 (made with a {@link WorkbookShelf}, re-runs do not parse an unchanged workbook again)
+     *                 (with a {@link StudyRunner#keepingWorkbooks} runner, re-runs do not parse an unchanged workbook again)
      */
     public static LiveSession start(Path notebook, Options options, PublishingSequence sequence,
                                     Consumer<Snapshot> finished) throws IOException {
@@ -77,7 +75,7 @@ public final class LiveSession implements AutoCloseable {
     }
 
     private static LiveSession start(Path notebook, Options options, PublishingSequence sequence,
-                                     Consumer<Snapshot> finished, WorkbookShelf ownShelf) throws IOException {
+                                     Consumer<Snapshot> finished, StudyRunner ownRunner) throws IOException {
         LiveStudy[] study = new LiveStudy[1];
         FileWatcher watcher = new FileWatcher(DEBOUNCE, () -> study[0].request());
         study[0] = new LiveStudy(notebook, sequence, Optional.of(options.out()), watcher::watch, finished);
@@ -92,7 +90,7 @@ public final class LiveSession implements AutoCloseable {
             throw e;
         }
         study[0].start();
-        return new LiveSession(study[0], watcher, server, ownShelf);
+        return new LiveSession(study[0], watcher, server, ownRunner);
     }
 
     public URI uri() {
@@ -117,8 +115,8 @@ public final class LiveSession implements AutoCloseable {
         server.close();
         watcher.close();
         study.close();
-        if (ownShelf != null) {
-            ownShelf.close();
+        if (ownRunner != null) {
+            ownRunner.close();
         }
     }
 }

@@ -155,7 +155,7 @@ final class SheetDataScanner {
         lastRow = Math.max(lastRow, rowNumber);
         lastCol = 0;
         rowWritten = false;
-        StreamedSheet.Row row = new StreamedSheet.Row(bool(rowTag.value("hidden")), height(rowTag.value("ht")));
+        StreamedSheet.Row row = StreamedSheet.Row.of(rowTag.value("hidden"), rowTag.value("ht"));
         if (!rowTag.empty) {
             while (true) {
                 int c = next();
@@ -191,25 +191,6 @@ final class SheetDataScanner {
         }
     }
 
-    /** xsd:boolean as XmlBeans reads it: "1" or "true". */
-    private static boolean bool(String text) {
-        if (text == null) {
-            return false;
-        }
-        String t = text.strip();
-        return t.equals("1") || t.equals("true");
-    }
-
-    private static double height(String text) {
-        if (text == null) {
-            return Double.NaN;
-        }
-        try {
-            return Double.parseDouble(text.strip());
-        } catch (NumberFormatException e) {
-            return Double.NaN;
-        }
-    }
 
     private void cell(StreamedSheet.Row row) throws IOException, XMLStreamException {
         String ref = cellTag.value("r");

@@ -257,7 +257,7 @@ final class SheetStreams {
             rowNumber = at == null ? lastRow + 1 : Integer.parseInt(at.strip());
             lastRow = Math.max(lastRow, rowNumber);
             lastCol = 0;
-            row = new StreamedSheet.Row(bool(attribute("hidden")), height(attribute("ht")));
+            row = StreamedSheet.Row.of(attribute("hidden"), attribute("ht"));
             rowWritten = false;
             rowPrefix = r.getPrefix() == null ? "" : r.getPrefix();
             rowNamespace = r.getNamespaceURI() == null ? "" : r.getNamespaceURI();
@@ -268,25 +268,6 @@ final class SheetStreams {
             }
         }
 
-        /** xsd:boolean as XmlBeans reads it: "1" or "true". */
-        private static boolean bool(String text) {
-            if (text == null) {
-                return false;
-            }
-            String t = text.strip();
-            return t.equals("1") || t.equals("true");
-        }
-
-        private static double height(String text) {
-            if (text == null) {
-                return Double.NaN;
-            }
-            try {
-                return Double.parseDouble(text.strip());
-            } catch (NumberFormatException e) {
-                return Double.NaN;
-            }
-        }
 
         /** One cell: a plain cell is kept in the sheet; a formula cell is written out for POI, whole. */
         private void cell() throws XMLStreamException {

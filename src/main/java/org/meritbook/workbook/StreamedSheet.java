@@ -43,6 +43,31 @@ final class StreamedSheet {
             this.height = height;
         }
 
+        /** A row from its {@code hidden} and {@code ht} attributes as written (null when absent). */
+        static Row of(String hidden, String height) {
+            return new Row(bool(hidden), points(height));
+        }
+
+        /** xsd:boolean as XmlBeans reads it: "1" or "true". */
+        private static boolean bool(String text) {
+            if (text == null) {
+                return false;
+            }
+            String t = text.strip();
+            return t.equals("1") || t.equals("true");
+        }
+
+        private static double points(String text) {
+            if (text == null) {
+                return Double.NaN;
+            }
+            try {
+                return Double.parseDouble(text.strip());
+            } catch (NumberFormatException e) {
+                return Double.NaN;
+            }
+        }
+
         void add(int col, String type, String value, int style, String inlineText) {
             if (size == cols.length) {
                 int n = size * 2;
