@@ -193,17 +193,7 @@ final class SheetDataScanner {
 
 
     private void cell(StreamedSheet.Row row) throws IOException, XMLStreamException {
-        String ref = cellTag.value("r");
-        int col;
-        if (ref == null) {
-            col = lastCol + 1;
-        } else {
-            long parsed = XmlPartScan.cellAddress(ref.strip());
-            if (parsed < 0) {
-                throw new XMLStreamException("a cell reference '" + ref + "' the package check let through");
-            }
-            col = (int) (parsed >>> 32);
-        }
+        int col = StreamedSheet.column(cellTag.value("r"), lastCol);
         lastCol = Math.max(lastCol, col);
         String t = cellTag.value("t");
         String type = t == null ? "n" : types.computeIfAbsent(t.strip(), k -> k);

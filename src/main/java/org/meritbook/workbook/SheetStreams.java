@@ -271,17 +271,7 @@ final class SheetStreams {
 
         /** One cell: a plain cell is kept in the sheet; a formula cell is written out for POI, whole. */
         private void cell() throws XMLStreamException {
-            String ref = attribute("r");
-            int col;
-            if (ref == null) {
-                col = lastCol + 1;
-            } else {
-                long parsed = XmlPartScan.cellAddress(ref.strip());
-                if (parsed < 0) {
-                    throw new XMLStreamException("a cell reference '" + ref + "' the package check let through");
-                }
-                col = (int) (parsed >>> 32);
-            }
+            int col = StreamedSheet.column(attribute("r"), lastCol);
             lastCol = Math.max(lastCol, col);
             String t = attribute("t");
             String type = t == null ? "n" : types.computeIfAbsent(t.strip(), k -> k);

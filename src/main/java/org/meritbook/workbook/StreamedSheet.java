@@ -1,6 +1,7 @@
 package org.meritbook.workbook;
 
 import java.util.Arrays;
+import javax.xml.stream.XMLStreamException;
 import org.apache.poi.ss.usermodel.CellStyle;
 import org.apache.poi.xssf.model.StylesTable;
 import org.apache.poi.xssf.usermodel.XSSFRichTextString;
@@ -21,6 +22,21 @@ final class StreamedSheet {
     private boolean sorted = true;
     private StylesTable styles;
     private final java.util.Map<Integer, java.util.Optional<CellStyle>> styleCache = new java.util.HashMap<>();
+
+    /**
+     * A cell's column (0-based) from its {@code r} attribute as written, or the one after the row's
+     * last when the cell has none (as Excel reads it).
+     */
+    static int column(String ref, int lastCol) throws XMLStreamException {
+        if (ref == null) {
+            return lastCol + 1;
+        }
+        long parsed = XmlPartScan.cellAddress(ref.strip());
+        if (parsed < 0) {
+            throw new XMLStreamException("a cell reference '" + ref + "' the package check let through");
+        }
+        return (int) (parsed >>> 32);
+    }
 
     /** One row element: its attributes and its cells, by ascending column. */
     static final class Row {
