@@ -11,9 +11,7 @@ import java.util.function.Consumer;
 import java.util.function.Function;
 import org.meritbook.dossier.DossierRenderer;
 import org.meritbook.dossier.DossierWriter;
-import org.meritbook.dossier.RenderedDossier;
 import org.meritbook.pipeline.InputFile;
-import org.meritbook.pipeline.SideTask;
 import org.meritbook.pipeline.StudyFolder;
 import org.meritbook.pipeline.StudyResults;
 import org.meritbook.pipeline.StudyRunner;
@@ -120,11 +118,9 @@ public final class PublishingSequence {
     /** Step 4 for run: PDF, HTML, results.json and trail.md, named as a revision's output set. */
     public Map<String, byte[]> outputSet(Draft draft) {
         StudyResults results = draft.results();
-        // trail.md is written on a second thread while this one renders the dossier.
-        SideTask<byte[]> trail = SideTask.start("meritbook-trail", () -> trail(results).getBytes(StandardCharsets.UTF_8));
-        RenderedDossier dossier = renderer.render(results, draft.json(), draft.revisions());
-        return DossierWriter.outputSet(DossierWriter.baseName(results.study()), dossier, draft.json(),
-                trail.join("writing trail.md"));
+        return DossierWriter.outputSet(DossierWriter.baseName(results.study()),
+                renderer.render(results, draft.json(), draft.revisions()), draft.json(),
+                trail(results).getBytes(StandardCharsets.UTF_8));
     }
 
     /**
