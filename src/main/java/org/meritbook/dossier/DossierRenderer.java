@@ -100,10 +100,8 @@ public final class DossierRenderer {
     public RenderedDossier render(StudyResults results, byte[] resultsJson, RevisionContext revisions) {
         Prepared p = prepare(results, resultsJson, revisions);
         Parts parts = parts();
-        // The figures are drawn on a worker while this thread lays out the pages around placeholders;
-        // the HTML, which waits for the drawings, is rendered on another meanwhile.
+        // The figures are drawn on a worker while this thread lays out the pages around placeholders.
         p.figureArt().startDrawing();
-        SideTask<byte[]> html = SideTask.start("meritbook-html", () -> html(p));
         DossierView laidOut = figuresInline ? p.view().withFigureMarkup(p.figureArt().resolver()) : p.view();
         String xhtml = parts.templates().render(laidOut);
         FrontMatter fm = results.study().frontMatter();
@@ -111,7 +109,7 @@ public final class DossierRenderer {
         PdfAFinisher.Metadata meta = new PdfAFinisher.Metadata(fm.title(), p.view().cover().preparedBy(), subject,
                 "meritbook " + meritbookVersion, p.date().calendar(), p.id());
         byte[] pdfBytes = finisher.finish(parts.pdf().render(xhtml, p.figureArt()), meta, p.files());
-        return new RenderedDossier(html.join("rendering the HTML dossier"), pdfBytes);
+        return new RenderedDossier(html(p), pdfBytes);
     }
 
     /**
