@@ -33,4 +33,4 @@ else
 fi
 ls -l "$work/run2"/*/rev1 | awk 'NR > 1 { printf "  %-40s %12d bytes\n", $9, $5 }'
 echo "== stages in one JVM, -Xmx256m, the launcher's collector"
-java -Xmx256m -XX:+UseSerialGC -Xmn64m -Djava.awt.headless=true -cp "$cp" org.meritbook.bench.BigBlockTiming "$work/analyser-checks.md"
+java -Xmx256m -XX:+UseSerialGC -Xmn48m -Xms112m -Djava.awt.headless=true -cp "$cp" org.meritbook.bench.BigBlockTiming "$work/analyser-checks.md"

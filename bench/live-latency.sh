@@ -8,5 +8,5 @@ cd "$(dirname "$0")/.."
 notebook="${1:-demo-data/hmf-honey-validation.md}"
 n="${2:-20}"
 mvn -B -q -o -DskipTests package test-compile >/dev/null
-java -XX:+UseSerialGC -Xmn64m -Djava.awt.headless=true \
+java -XX:+UseSerialGC -Xmn48m -Xms112m -Djava.awt.headless=true \
   -cp "target/classes:target/test-classes:target/lib/*" org.meritbook.bench.LiveLatency "$notebook" "$n"
