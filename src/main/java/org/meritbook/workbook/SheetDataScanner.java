@@ -198,7 +198,7 @@ final class SheetDataScanner {
         String t = cellTag.value("t");
         String type = t == null ? "n" : types.computeIfAbsent(t.strip(), k -> k);
         String s = cellTag.value("s");
-        int style = s == null ? -1 : styleIndex(s);
+        int style = s == null ? -1 : StreamedSheet.styleIndex(s);
         boolean formula = !cellTag.empty && content();
         if (formula) {
             row.add(col - 1, null, null, -1, null);
@@ -368,15 +368,6 @@ final class SheetDataScanner {
         rowTag.attributesBut("r", out);
         out.add(" r=\"" + rowNumber + "\">");
         rowWritten = true;
-    }
-
-    private static int styleIndex(String s) {
-        try {
-            long v = Long.parseLong(s.strip());
-            return v < 0 || v > Integer.MAX_VALUE ? Integer.MAX_VALUE : (int) v;
-        } catch (NumberFormatException e) {
-            return Integer.MAX_VALUE;
-        }
     }
 
     /**

@@ -276,7 +276,7 @@ final class SheetStreams {
             String t = attribute("t");
             String type = t == null ? "n" : types.computeIfAbsent(t.strip(), k -> k);
             String s = attribute("s");
-            int style = s == null ? -1 : styleIndex(s);
+            int style = s == null ? -1 : StreamedSheet.styleIndex(s);
             String[] attributes = new String[r.getAttributeCount() * 4];
             for (int i = 0; i < r.getAttributeCount(); i++) {
                 attributes[i * 4] = r.getAttributePrefix(i);
@@ -301,15 +301,6 @@ final class SheetStreams {
                 w.writeEndElement();
             } else {
                 row.add(col - 1, type, content.value, style, content.inline);
-            }
-        }
-
-        private static int styleIndex(String s) {
-            try {
-                long v = Long.parseLong(s.strip());
-                return v < 0 || v > Integer.MAX_VALUE ? Integer.MAX_VALUE : (int) v;
-            } catch (NumberFormatException e) {
-                return Integer.MAX_VALUE;
             }
         }
 

@@ -38,6 +38,16 @@ final class StreamedSheet {
         return (int) (parsed >>> 32);
     }
 
+    /** A cell's {@code s} attribute as written; a value no style table can hold reads as Integer.MAX_VALUE. */
+    static int styleIndex(String s) {
+        try {
+            long v = Long.parseLong(s.strip());
+            return v < 0 || v > Integer.MAX_VALUE ? Integer.MAX_VALUE : (int) v;
+        } catch (NumberFormatException e) {
+            return Integer.MAX_VALUE;
+        }
+    }
+
     /** One row element: its attributes and its cells, by ascending column. */
     static final class Row {
         final boolean hidden;
