@@ -94,13 +94,10 @@ final class SheetDataScanner {
             }
             int d = next();
             if (d == '/') {
-                out.add('<');
-                out.add('/');
-                copyTo('>');
+                copyEndTag();
                 depth--;
             } else if (d == '?' || d == '!') {
-                out.add('<');
-                markup(d, out, null);
+                copyMarkup(d);
             } else {
                 child.read(d);
                 out.add(child.raw);
@@ -127,14 +124,11 @@ final class SheetDataScanner {
             }
             int d = next();
             if (d == '/') {
-                out.add('<');
-                out.add('/');
-                copyTo('>');
+                copyEndTag();
                 return;
             }
             if (d == '?' || d == '!') {
-                out.add('<');
-                markup(d, out, null);
+                copyMarkup(d);
                 continue;
             }
             child.read(d);
@@ -184,13 +178,9 @@ final class SheetDataScanner {
         }
         sheet.addRow(rowNumber - 1, row);
         if (rowWritten) {
-            out.add('<');
-            out.add('/');
-            out.add(rowTag.raw.a, 1, rowTag.nameEnd - 1);
-            out.add('>');
+            writeEndTag(rowTag);
         }
     }
-
 
     private void cell(StreamedSheet.Row row) throws IOException, XMLStreamException {
         int col = StreamedSheet.column(cellTag.value("r"), lastCol);
@@ -207,10 +197,7 @@ final class SheetDataScanner {
             cellTag.attributesBut("r", out);
             out.add(" r=\"" + CellRef.columnLetters(col - 1) + rowNumber + "\">");
             out.add(inner.a, 0, inner.n);
-            out.add('<');
-            out.add('/');
-            out.add(cellTag.raw.a, 1, cellTag.nameEnd - 1);
-            out.add('>');
+            writeEndTag(cellTag);
         } else if (cellTag.empty) {
             row.add(col - 1, type, null, style, null);
         } else {
@@ -452,6 +439,27 @@ final class SheetDataScanner {
 
     private void copyTo(int stop) throws IOException, XMLStreamException {
         copyTo(stop, out);
+    }
+
+    /** Copies an end tag whose "&lt;/" has just been read. */
+    private void copyEndTag() throws IOException, XMLStreamException {
+        out.add('<');
+        out.add('/');
+        copyTo('>');
+    }
+
+    /** Copies a comment, CDATA section or processing instruction whose "&lt;" and {@code d} have just been read. */
+    private void copyMarkup(int d) throws IOException, XMLStreamException {
+        out.add('<');
+        markup(d, out, null);
+    }
+
+    /** Writes the end tag of an element whose start tag was read, with the prefix it was written with. */
+    private void writeEndTag(Tag tag) {
+        out.add('<');
+        out.add('/');
+        out.add(tag.raw.a, 1, tag.nameEnd - 1);
+        out.add('>');
     }
 
     private void copyTo(int stop, Bytes to) throws IOException, XMLStreamException {

@@ -268,7 +268,6 @@ final class SheetStreams {
             }
         }
 
-
         /** One cell: a plain cell is kept in the sheet; a formula cell is written out for POI, whole. */
         private void cell() throws XMLStreamException {
             int col = StreamedSheet.column(attribute("r"), lastCol);
