@@ -226,7 +226,7 @@ final class PoiCells {
             return CellText.unreadable(ref, v.strip(), n.problem() != null ? n.problem()
                     : "the stored number '" + v.strip() + "', which is not a number", note);
         }
-        return number(cell::style, ref, n.value(), note);
+        return number(cell::style, ref, n.value(), v.strip(), note);
     }
 
     private static CellValue storedError(CellRef ref, String v, String note) {
@@ -256,6 +256,11 @@ final class PoiCells {
     }
 
     private CellValue number(Supplier<CellStyle> styleOf, CellRef ref, double value, String note) {
+        return number(styleOf, ref, value, null, note);
+    }
+
+    /** @param stored the text the sheet stored the value as, when it was read from one; else null */
+    private CellValue number(Supplier<CellStyle> styleOf, CellRef ref, double value, String stored, String note) {
         if (!Double.isFinite(value)) {
             return CellText.unreadable(ref, String.valueOf(value), "the stored value " + value + ", which is not a finite number", note);
         }
@@ -267,7 +272,7 @@ final class PoiCells {
                 return new CellValue(ref, CellValue.Kind.TEXT, Double.NaN, iso(t, value), Notes.join(note, Notes.DATE));
             }
         }
-        String shown = style == null || GeneralNumber.isGeneral(format) ? GeneralNumber.plain(value) : null;
+        String shown = style == null || GeneralNumber.isGeneral(format) ? GeneralNumber.plain(value, stored) : null;
         if (shown == null) {
             shown = style == null
                     ? formatter.formatRawCellContents(value, 0, "General")

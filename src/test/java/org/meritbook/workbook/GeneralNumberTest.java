@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.Locale;
 import java.util.SplittableRandom;
 import org.apache.poi.ss.usermodel.DataFormatter;
+import org.apache.poi.ss.util.NumberToTextConverter;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -62,5 +63,53 @@ class GeneralNumberTest {
                 samePoi(r.nextBoolean() ? v : -v);
             }
         }
+    }
+
+    @Test
+    void aStoredDecimalIsWrittenAsPoiWritesItsValue() {
+        assertEquals("12.5", GeneralNumber.fifteenDigitText("+012.50"));
+        assertEquals("-0.031", GeneralNumber.fifteenDigitText("-.031"));
+        assertEquals("5", GeneralNumber.fifteenDigitText("5."));
+        assertEquals("1200", GeneralNumber.fifteenDigitText("1200.00"));
+        assertEquals("123456789012345", GeneralNumber.fifteenDigitText("123456789012345"));
+        assertEquals("0.000123456789012345", GeneralNumber.fifteenDigitText("0.000123456789012345"));
+        assertNull(GeneralNumber.fifteenDigitText("1234567890123456")); // 16 digits: POI rounds them
+        assertNull(GeneralNumber.fifteenDigitText("1.5E-3"));
+        assertNull(GeneralNumber.fifteenDigitText("-0.000"));
+        assertNull(GeneralNumber.fifteenDigitText("."));
+        assertNull(GeneralNumber.fifteenDigitText("1.2.3"));
+    }
+
+    /** Texts as sheets store them, 1 to 17 significant digits at many scales, against POI's own conversion of their value. */
+    @Test
+    void randomStoredDecimalsAgreeWithPoi() {
+        SplittableRandom r = new SplittableRandom(20261204L);
+        int compared = 0;
+        for (int k = 0; k < 100_000; k++) {
+            int digits = r.nextInt(1, 18);
+            StringBuilder d = new StringBuilder();
+            d.append((char) ('1' + r.nextInt(9)));
+            for (int i = 1; i < digits; i++) {
+                d.append(k % 7 == 0 && i == digits - 1 ? '5' : (char) ('0' + r.nextInt(10))); // some ties at the last digit
+            }
+            int pointAt = r.nextInt(-12, digits + 12); // the point before, inside or after the digits
+            String text = pointAt <= 0 ? "0." + "0".repeat(-pointAt) + d
+                    : pointAt >= digits ? d + "0".repeat(pointAt - digits) + (r.nextBoolean() ? ".0" : "")
+                    : d.substring(0, pointAt) + "." + d.substring(pointAt) + "0".repeat(r.nextInt(3));
+            text = (r.nextInt(4) == 0 ? "-" : "") + text;
+            double value = Double.parseDouble(text);
+            String fromText = GeneralNumber.fifteenDigitText(text);
+            String poiText = NumberToTextConverter.toText(value);
+            if (fromText != null && !poiText.contains("E")) {
+                assertEquals(poiText, fromText, text);
+                compared++;
+            }
+            String quick = GeneralNumber.plain(value, text);
+            assertEquals(GeneralNumber.plain(value), quick, text);
+            if (quick != null) {
+                assertEquals(poi.formatRawCellContents(value, 0, "General"), quick, text);
+            }
+        }
+        assertTrue(compared > 40_000, "compared " + compared);
     }
 }
