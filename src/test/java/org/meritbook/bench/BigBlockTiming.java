@@ -30,25 +30,34 @@ public final class BigBlockTiming {
         return java.lang.management.ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime();
     }
 
+    /** Collection time so far, all collectors: the part of a stage's wall time that is neither work nor waiting. */
+    private static long gcMillis() {
+        return java.lang.management.ManagementFactory.getGarbageCollectorMXBeans().stream()
+                .mapToLong(java.lang.management.GarbageCollectorMXBean::getCollectionTime).sum();
+    }
+
     public static void main(String[] args) throws IOException {
         Path notebook = Path.of(args[0]);
         Path workbook = notebook.resolveSibling(BigBlockWorkbook.WORKBOOK);
         if (Files.exists(workbook)) {
             // The block alone, read once cold: the reader's share of the stage below.
             long r0 = System.nanoTime();
+            long g0 = gcMillis();
             String range = BigBlockWorkbook.range(BigBlockWorkbook.rowsOf(workbook));
             try (WorkbookReader reader = new WorkbookReader()) {
                 DataBlock block = reader.read(workbook, new DataReference("lab", "Checks", range, "lab!Checks!" + range, 1));
-                System.out.printf(Locale.ROOT, "read the block alone (cold):     %8.0f ms (%,d rows; main thread CPU %.0f ms)%n",
-                        (System.nanoTime() - r0) / 1e6, block.rowCount(), cpu() / 1e6);
+                System.out.printf(Locale.ROOT, "read the block alone (cold):     %8.0f ms (%,d rows; main thread CPU %.0f ms, GC %d ms)%n",
+                        (System.nanoTime() - r0) / 1e6, block.rowCount(), cpu() / 1e6, gcMillis() - g0);
             }
         }
         long t0 = System.nanoTime();
         long c0 = cpu();
+        long g0 = gcMillis();
         Study study = StudyParser.parse(notebook);
         StudyResults results = StudyRunner.withBuiltInAnalyses().run(study);
         long t1 = System.nanoTime();
         long c1 = cpu();
+        long g1 = gcMillis();
         byte[] json = ResultsJson.toBytes(results);
         long t2 = System.nanoTime();
         DossierRenderer renderer = new DossierRenderer(Optional.empty());
@@ -59,8 +68,8 @@ public final class BigBlockTiming {
         }
         RenderedDossier dossier = renderer.render(results, json);
         long t4 = System.nanoTime();
-        System.out.printf(Locale.ROOT, "parse notebook + read + analyse: %8.0f ms (main thread CPU %.0f ms)%n", (t1 - t0) / 1e6,
-                (c1 - c0) / 1e6);
+        System.out.printf(Locale.ROOT, "parse notebook + read + analyse: %8.0f ms (main thread CPU %.0f ms, GC %d ms)%n",
+                (t1 - t0) / 1e6, (c1 - c0) / 1e6, g1 - g0);
         System.out.printf(Locale.ROOT, "results.json:                    %8.0f ms (%,d bytes)%n", (t2 - t1) / 1e6, json.length);
         System.out.printf(Locale.ROOT, "HTML dossier alone:              %8.0f ms (%,d bytes)%n", (t3 - t2) / 1e6, html.length);
         System.out.printf(Locale.ROOT, "HTML + PDF dossier:              %8.0f ms (PDF %,d bytes)%n", (t4 - t3) / 1e6,
