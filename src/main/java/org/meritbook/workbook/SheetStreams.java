@@ -5,8 +5,10 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.Map;
+import java.util.Set;
+import java.util.function.BooleanSupplier;
 import java.util.zip.Deflater;
 import javax.xml.stream.XMLInputFactory;
 import javax.xml.stream.XMLOutputFactory;
@@ -29,9 +31,10 @@ import org.apache.commons.compress.archivers.zip.ZipArchiveOutputStream;
  * widths, tables and names, and renders each formula, shared ones included, itself. The rest of
  * the package is copied unchanged.
  *
- * <p>Runs after {@link PackageScan}, which has checked the package against the budget, refused
- * document type declarations and rows or cells written twice, so this pass needs no checks of its
- * own beyond well-formedness.
+ * <p>Its result is used only once {@link PackageScan} has checked the package against the budget,
+ * refused document type declarations and rows or cells written twice, so this pass needs no checks
+ * of its own beyond well-formedness. It may run alongside the check ({@link SplitAhead}), held to the
+ * byte budget and stopped when the check fails.
  */
 final class SheetStreams {
     /** Sheets with more cells than this are streamed unless the system property says otherwise. */
@@ -74,31 +77,37 @@ final class SheetStreams {
         return f;
     }
 
-    /**
-     * @param bytes       the package, already checked by {@link PackageScan}
-     * @param cellsByPart cells per worksheet part (zip entry names), from the check
-     * @return null when no sheet is above the threshold
-     */
-    static Split split(byte[] bytes, Map<String, Long> cellsByPart, long threshold) throws IOException, XMLStreamException {
-        Map<String, Long> large = new LinkedHashMap<>();
+    /** The worksheet parts with more cells than {@code threshold}: the ones to stream. */
+    static Set<String> large(Map<String, Long> cellsByPart, long threshold) {
+        Set<String> large = new LinkedHashSet<>();
         cellsByPart.forEach((part, cells) -> {
             if (cells > threshold) {
-                large.put(part, cells);
+                large.add(part);
             }
         });
-        if (large.isEmpty()) {
-            return null;
-        }
+        return large;
+    }
+
+    /**
+     * Splits the parts named {@code large} (zip entry names) off the package.
+     *
+     * @param bytes       the package; what is read from it counts only once {@link PackageScan} has passed it
+     * @param maxInflated the most bytes to inflate, all entries together, before giving up with an IOException
+     * @param stop        asked as the package is read; true gives up with an IOException
+     */
+    static Split split(byte[] bytes, Set<String> large, long maxInflated, BooleanSupplier stop)
+            throws IOException, XMLStreamException {
         Map<String, StreamedSheet> sheets = new HashMap<>();
         ByteArrayOutputStream light = new ByteArrayOutputStream(bytes.length);
-        try (ZipArchiveInputStream in = new ZipArchiveInputStream(new ByteArrayInputStream(bytes));
+        try (ZipArchiveInputStream zip = new ZipArchiveInputStream(new ByteArrayInputStream(bytes));
              ZipArchiveOutputStream out = new ZipArchiveOutputStream(light)) {
+            InputStream in = new Bounded(zip, maxInflated, stop);
             out.setLevel(Deflater.BEST_SPEED);
             ZipArchiveEntry entry;
-            while ((entry = in.getNextEntry()) != null) {
+            while ((entry = zip.getNextEntry()) != null) {
                 ZipArchiveEntry copy = new ZipArchiveEntry(entry.getName());
                 out.putArchiveEntry(copy);
-                if (large.containsKey(entry.getName())) {
+                if (large.contains(entry.getName())) {
                     StreamedSheet sheet = new StreamedSheet();
                     out.write(transform(in, sheet));
                     sheets.put("/" + entry.getName(), sheet);
@@ -436,6 +445,46 @@ final class SheetStreams {
     }
 
     /** Keeps the StAX reader from closing the zip stream it reads one entry of. */
+    /** The current zip entry's bytes, counted across entries against a limit, and given up on request. */
+    private static final class Bounded extends java.io.FilterInputStream {
+        private final long max;
+        private final BooleanSupplier stop;
+        private long inflated;
+
+        Bounded(InputStream zip, long max, BooleanSupplier stop) {
+            super(zip);
+            this.max = max;
+            this.stop = stop;
+        }
+
+        @Override
+        public int read() throws IOException {
+            byte[] one = new byte[1];
+            int n = read(one, 0, 1);
+            return n < 0 ? -1 : one[0] & 0xff;
+        }
+
+        @Override
+        public int read(byte[] b, int off, int len) throws IOException {
+            if (stop.getAsBoolean()) {
+                throw new IOException("split given up");
+            }
+            int n = in.read(b, off, len);
+            if (n > 0) {
+                inflated += n;
+                if (inflated > max) {
+                    throw new IOException("more than " + max + " bytes inflated");
+                }
+            }
+            return n;
+        }
+
+        @Override
+        public void close() {
+            // the zip stream goes on to the next entry; its owner closes it
+        }
+    }
+
     private static final class NonClosing extends java.io.FilterInputStream {
         NonClosing(InputStream in) {
             super(in);

@@ -14,6 +14,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import javax.xml.stream.XMLStreamException;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
@@ -89,9 +90,20 @@ final class WorkbookFiles {
                 if (ext.equals("xls")) {
                     decisions.add("the file is named .xls but holds an .xlsx workbook; read as .xlsx");
                 }
-                Map<String, Long> cells = PackageScan.check(bytes, ReadErrors.fileName(file), where, expected, budget);
+                long threshold = SheetStreams.threshold();
+                SplitAhead ahead = SplitAhead.start(bytes, threshold, budget);
+                Map<String, Long> cells;
+                try {
+                    cells = PackageScan.check(bytes, ReadErrors.fileName(file), where, expected, budget);
+                } catch (RuntimeException e) {
+                    if (ahead != null) {
+                        ahead.abandon();
+                    }
+                    throw e;
+                }
                 PoiLimits.allow(budget);
-                SourceWorkbook streamed = streamed(bytes, cells, decisions, ReadErrors.fileName(file), budget);
+                SourceWorkbook streamed = streamed(bytes, SheetStreams.large(cells, threshold), ahead, decisions,
+                        ReadErrors.fileName(file), budget);
                 if (streamed != null) {
                     return streamed;
                 }
@@ -127,16 +139,21 @@ final class WorkbookFiles {
      * sheet is large or a streamed part is not found among the sheets POI opened (then POI reads the
      * whole file, as for a small workbook: never a sheet with cells missing).
      */
-    private static SourceWorkbook streamed(byte[] bytes, Map<String, Long> cells, List<String> decisions, String fileName,
-                                           WorkbookBudget budget) throws IOException {
-        SheetStreams.Split split;
-        try {
-            split = SheetStreams.split(bytes, cells, SheetStreams.threshold());
-        } catch (XMLStreamException e) {
-            throw new IOException(e);
-        }
-        if (split == null) {
+    private static SourceWorkbook streamed(byte[] bytes, Set<String> large, SplitAhead ahead, List<String> decisions,
+                                           String fileName, WorkbookBudget budget) throws IOException {
+        if (large.isEmpty()) {
+            if (ahead != null) {
+                ahead.abandon();
+            }
             return null;
+        }
+        SheetStreams.Split split = ahead == null ? null : ahead.take(large);
+        if (split == null) {
+            try {
+                split = SheetStreams.split(bytes, large, Long.MAX_VALUE, () -> false);
+            } catch (XMLStreamException e) {
+                throw new IOException(e);
+            }
         }
         PoiWorkbook wb = new PoiWorkbook(new XSSFWorkbook(new ByteArrayInputStream(split.lightPackage())), decisions, fileName,
                 budget, split.sheets(), bytes);

@@ -1,0 +1,96 @@
+package org.meritbook.workbook;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Set;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.meritbook.error.InputException;
+
+/**
+ * The split made alongside the package check: used only when it is of exactly the parts the check
+ * picks, then the same as the split made after the check; held to its byte budget and stoppable;
+ * and a package the check refuses is refused with the check's own error.
+ */
+class SplitAheadTest {
+    private static final String LARGE = "xl/worksheets/sheet1.xml";
+    private static final String SMALL = "xl/worksheets/sheet2.xml";
+
+    /** A workbook with a sheet of 3,000 cells and one of 2. */
+    private static byte[] workbook(Path dir) throws IOException {
+        Path file = Fixtures.xlsx(dir, "two-sheets.xlsx", wb -> {
+            Sheet large = wb.createSheet("Runs");
+            Fixtures.row(large, 1, "Run", "Level", "Nitrate");
+            for (int r = 2; r <= 1000; r++) {
+                Fixtures.row(large, r, "R" + (r % 20), r % 2 == 0 ? "low" : "high", 10 + r * 0.001);
+            }
+            Fixtures.row(wb.createSheet("Notes"), 1, "Analyst", "B. Block");
+        });
+        return Files.readAllBytes(file);
+    }
+
+    @Test
+    void guessesTheSheetsLargeEnoughToHoldMoreCellsThanTheThreshold(@TempDir Path dir) throws IOException {
+        byte[] bytes = workbook(dir);
+        assertEquals(Set.of(LARGE), SplitAhead.guess(bytes, 1000));
+        assertEquals(Set.of(LARGE, SMALL), SplitAhead.guess(bytes, 0));
+        assertEquals(Set.of(), SplitAhead.guess(bytes, 1_000_000));
+        assertEquals(Set.of(), SplitAhead.guess(new byte[] {'P', 'K', 3, 4, 0}, 0), "a damaged zip: no guess, the check reports it");
+    }
+
+    @Test
+    void aRightGuessGivesTheSplitMadeAfterTheCheck(@TempDir Path dir) throws Exception {
+        byte[] bytes = workbook(dir);
+        SplitAhead ahead = SplitAhead.start(bytes, 1000, WorkbookBudget.DEFAULT);
+        assertNotNull(ahead);
+        SheetStreams.Split early = ahead.take(Set.of(LARGE));
+        SheetStreams.Split after = SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, () -> false);
+        assertNotNull(early);
+        assertArrayEquals(after.lightPackage(), early.lightPackage());
+        assertEquals(after.sheets().keySet(), early.sheets().keySet());
+        assertEquals(Set.of("/" + LARGE), early.sheets().keySet());
+    }
+
+    @Test
+    void aWrongGuessIsNotUsed(@TempDir Path dir) throws IOException {
+        byte[] bytes = workbook(dir);
+        SplitAhead ahead = SplitAhead.start(bytes, 0, WorkbookBudget.DEFAULT);
+        assertNotNull(ahead);
+        assertNull(ahead.take(Set.of(LARGE)), "guessed both sheets, the check picks one");
+        assertNull(SplitAhead.start(bytes, 1_000_000, WorkbookBudget.DEFAULT), "nothing to guess: no thread");
+    }
+
+    @Test
+    void theSplitKeepsToItsByteBudgetAndStopsWhenAsked(@TempDir Path dir) throws IOException {
+        byte[] bytes = workbook(dir);
+        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), 1000, () -> false));
+        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, () -> true));
+    }
+
+    /** A large sheet with a document type declaration: the check's located refusal, whatever the split ahead did. */
+    @Test
+    void aPackageTheCheckRefusesIsRefusedWithTheChecksError(@TempDir Path dir) throws IOException {
+        byte[] bytes = workbook(dir);
+        byte[] hostile = XlsxParts.of(bytes).edit(LARGE, xml -> xml.replaceFirst("\\?>",
+                "?><!DOCTYPE worksheet [<!ENTITY a \"aaaaaaaaaa\">]>")).zip();
+        assertEquals(Set.of(LARGE), SplitAhead.guess(hostile, 1000));
+        Path file = dir.resolve("hostile.xlsx");
+        Files.write(file, hostile);
+        System.setProperty(SheetStreams.THRESHOLD_PROPERTY, "1000");
+        try (WorkbookReader reader = new WorkbookReader()) {
+            InputException e = assertThrows(InputException.class, () -> reader.read(file, Fixtures.ref("Runs", "A1:C1000")));
+            assertTrue(e.getMessage().contains("document type declaration"), e.getMessage());
+        } finally {
+            System.clearProperty(SheetStreams.THRESHOLD_PROPERTY);
+        }
+    }
+}
