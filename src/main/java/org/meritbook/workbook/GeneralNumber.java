@@ -104,6 +104,13 @@ final class GeneralNumber {
             return null;
         }
         int integerEnd = point < 0 ? n : point;
+        int start = stored.charAt(0) == '-' ? 1 : 0;
+        boolean asWritten = stored.charAt(0) != '+'
+                && (firstNonZero < integerEnd ? firstNonZero == start : integerEnd == start + 1 && stored.charAt(start) == '0')
+                && (point < 0 || lastNonZero == n - 1);
+        if (asWritten) {
+            return stored; // the usual case: the one text serves the sheet's rows and the block
+        }
         StringBuilder out = new StringBuilder(n + 1);
         if (stored.charAt(0) == '-') {
             out.append('-');

@@ -78,6 +78,11 @@ class GeneralNumberTest {
         assertNull(GeneralNumber.fifteenDigitText("-0.000"));
         assertNull(GeneralNumber.fifteenDigitText("."));
         assertNull(GeneralNumber.fifteenDigitText("1.2.3"));
+        String canonical = "-0.031";
+        assertTrue(GeneralNumber.fifteenDigitText(canonical) == canonical, "a text already in POI's form is kept, not copied");
+        assertEquals("0.5", GeneralNumber.fifteenDigitText("00.5"));
+        assertEquals("7", GeneralNumber.fifteenDigitText("07"));
+        assertEquals("70", GeneralNumber.fifteenDigitText("70"));
     }
 
     /** Texts as sheets store them, 1 to 17 significant digits at many scales, against POI's own conversion of their value. */
