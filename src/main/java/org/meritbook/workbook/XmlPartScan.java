@@ -389,11 +389,16 @@ final class XmlPartScan {
 
     /** 1-based row number, or -1 when the text is not a positive whole number of up to 8 digits. */
     private static int parseRow(String text) {
-        if (text.isEmpty() || text.length() > 8) {
+        return parseRow(text, 0, text.length());
+    }
+
+    /** {@link #parseRow(String)} of the characters from {@code from} to {@code to} (exclusive), without a substring. */
+    private static int parseRow(String text, int from, int to) {
+        if (to <= from || to - from > 8) {
             return -1;
         }
         int n = 0;
-        for (int i = 0; i < text.length(); i++) {
+        for (int i = from; i < to; i++) {
             char ch = text.charAt(i);
             if (ch < '0' || ch > '9') {
                 return -1;
@@ -434,7 +439,7 @@ final class XmlPartScan {
         if (i != n || i == digits || i - digits > 7) {
             return -1;
         }
-        int row = parseRow(text.substring(digits));
+        int row = parseRow(text, digits, n);
         return ((long) col << 32) | (row & 0xffffffffL);
     }
 
