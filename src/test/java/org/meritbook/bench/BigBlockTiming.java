@@ -30,6 +30,21 @@ public final class BigBlockTiming {
         return java.lang.management.ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime();
     }
 
+    /**
+     * Parse, read and analyse as the first work of a fresh JVM (bench/bigblock.sh starts it with the
+     * launcher's options): what a user waits for before the dossier is made.
+     */
+    private static void fresh(Path notebook) {
+        long t0 = System.nanoTime();
+        StudyResults results = StudyRunner.withBuiltInAnalyses().run(StudyParser.parse(notebook));
+        long t1 = System.nanoTime();
+        long processCpu = ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
+                .getOperatingSystemMXBean()).getProcessCpuTime();
+        System.out.printf(Locale.ROOT, "fresh JVM, parse notebook + read + analyse: %6.0f ms (%d sections; main thread CPU %.0f ms,"
+                + " process CPU since start %.0f ms, GC %d ms)%n", (t1 - t0) / 1e6, results.sections().size(), cpu() / 1e6,
+                processCpu / 1e6, gcMillis());
+    }
+
     /** Collection time so far, all collectors: the part of a stage's wall time that is neither work nor waiting. */
     private static long gcMillis() {
         return java.lang.management.ManagementFactory.getGarbageCollectorMXBeans().stream()
@@ -37,6 +52,10 @@ public final class BigBlockTiming {
     }
 
     public static void main(String[] args) throws IOException {
+        if (args.length > 1 && args[1].equals("--fresh")) {
+            fresh(Path.of(args[0]));
+            return;
+        }
         Path notebook = Path.of(args[0]);
         Path workbook = notebook.resolveSibling(BigBlockWorkbook.WORKBOOK);
         if (Files.exists(workbook)) {
