@@ -44,8 +44,8 @@ final class PoiCells {
     private FormulaEvaluator evaluator;
     /** Shared strings as read, by index (the ref of the first cell that used each). */
     private final java.util.Map<Integer, CellValue> sharedRead = new java.util.HashMap<>();
-    /** Whether a number format shows dates, by format. */
-    private final java.util.Map<NumberFormat, Boolean> dateFormats = new java.util.HashMap<>();
+    /** The number facts of each cell style met, by the style's index. */
+    private final java.util.Map<Integer, NumberStyle> numberStyles = new java.util.HashMap<>();
 
     /**
      * @param maxReferencedCells the most cells one evaluated formula may refer to (a formula over
@@ -264,30 +264,41 @@ final class PoiCells {
         if (!Double.isFinite(value)) {
             return CellText.unreadable(ref, String.valueOf(value), "the stored value " + value + ", which is not a finite number", note);
         }
-        CellStyle style = styleOf.get();
-        String format = style == null ? null : style.getDataFormatString();
-        if (style != null && dateFormat(style.getDataFormat(), format) && DateUtil.isValidExcelDate(value)) {
+        NumberStyle style = numberStyle(styleOf.get());
+        if (style != null && style.date() && DateUtil.isValidExcelDate(value)) {
             LocalDateTime t = DateUtil.getLocalDateTime(value, date1904, true);
             if (t != null) {
                 return new CellValue(ref, CellValue.Kind.TEXT, Double.NaN, iso(t, value), Notes.join(note, Notes.DATE));
             }
         }
-        String shown = style == null || GeneralNumber.isGeneral(format) ? GeneralNumber.plain(value, stored) : null;
+        String shown = style == null || style.general() ? GeneralNumber.plain(value, stored) : null;
         if (shown == null) {
             shown = style == null
                     ? formatter.formatRawCellContents(value, 0, "General")
-                    : formatter.formatRawCellContents(value, style.getDataFormat(), format);
+                    : formatter.formatRawCellContents(value, style.format(), style.text());
         }
         return new CellValue(ref, CellValue.Kind.NUMBER, value, shown, note);
     }
 
-    /** POI's date-format test, once per format: it runs several regular expressions, and a block has 100,000 numbers in a few formats. */
-    private boolean dateFormat(short index, String format) {
-        return dateFormats.computeIfAbsent(new NumberFormat(index, format), f -> DateUtil.isADateFormat(f.index(), f.text()));
+    /**
+     * What a cell style says about showing a number, read once per style: POI reads a style's number
+     * format from the style's XML on every call, and a block has 100,000 numbers in a few styles.
+     */
+    private NumberStyle numberStyle(CellStyle style) {
+        if (style == null) {
+            return null;
+        }
+        // A style's index names it within its workbook (POI makes a new style object per call).
+        return numberStyles.computeIfAbsent((int) style.getIndex(), i -> {
+            short format = style.getDataFormat();
+            String text = style.getDataFormatString();
+            // POI's date test runs several regular expressions: once per style, not per number.
+            return new NumberStyle(format, text, DateUtil.isADateFormat(format, text), GeneralNumber.isGeneral(text));
+        });
     }
 
-    /** A cell style's number format as POI's date test reads it. */
-    private record NumberFormat(short index, String text) {
+    /** A style's number format, whether it shows dates, and whether it is "General". */
+    private record NumberStyle(short format, String text, boolean date, boolean general) {
     }
 
     /**
