@@ -142,17 +142,20 @@ public record MeasuredRows(DataBlock block, List<Column> columns, List<Row> rows
         }
         Map<CellRef, String> reasons = new HashMap<>();
         Set<Exclusion> claimed = new HashSet<>();
-        Map<String, CellRef> byAddress = new HashMap<>();
-        for (Column c : columns) {
-            for (CellValue v : c.values()) {
-                byAddress.put(v.ref().address(), v.ref());
-            }
-        }
+        // The few excluded addresses are looked up among the cells, not every cell among them by address.
+        Map<String, List<Exclusion>> excludedAt = new HashMap<>();
         for (Exclusion e : cell.exclusions()) {
-            CellRef ref = byAddress.get(e.address());
-            if (ref != null) {
-                reasons.put(ref, e.shownReason());
-                claimed.add(e);
+            excludedAt.computeIfAbsent(e.address(), a -> new ArrayList<>()).add(e);
+        }
+        for (Column c : excludedAt.isEmpty() ? List.<Column>of() : columns) {
+            for (CellValue v : c.values()) {
+                List<Exclusion> here = excludedAt.get(v.ref().address());
+                if (here != null) {
+                    for (Exclusion e : here) {
+                        reasons.put(v.ref(), e.shownReason()); // the notebook's last entry for a cell wins, as it did
+                        claimed.add(e);
+                    }
+                }
             }
         }
         boolean dropCensored = cell.option("censored").map(v -> v.text().equals("drop")).orElse(false);
@@ -188,12 +191,8 @@ public record MeasuredRows(DataBlock block, List<Column> columns, List<Row> rows
                 java.util.Arrays.fill(numbers[c], Double.NaN);
                 continue;
             }
-            Map<CellRef, Integer> rowOf = new HashMap<>();
-            for (int i = 0; i < n; i++) {
-                rowOf.put(column.values().get(i).ref(), i);
-            }
             try {
-                numbers[c] = NumericColumn.values(block.file(), column, ref -> rowReason[rowOf.get(ref)] != null);
+                numbers[c] = NumericColumn.valuesSkipping(block.file(), column, i -> rowReason[i] != null);
             } catch (InputException e) {
                 problems.addAll(e.problems());
             }

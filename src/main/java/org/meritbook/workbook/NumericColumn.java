@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import java.util.function.IntPredicate;
 import java.util.function.Predicate;
 import org.meritbook.error.ErrorKey;
 import org.meritbook.error.InputException;
@@ -27,11 +28,17 @@ public final class NumericColumn {
      */
     public static double[] values(Path file, Column column, Predicate<CellRef> skip) {
         Objects.requireNonNull(skip, "skip");
+        return valuesSkipping(file, column, i -> skip.test(column.values().get(i).ref()));
+    }
+
+    /** As {@link #values(Path, Column, Predicate)}, skipping by the value's index in the column. */
+    public static double[] valuesSkipping(Path file, Column column, IntPredicate skip) {
+        Objects.requireNonNull(skip, "skip");
         double[] out = new double[column.values().size()];
         List<Problem> problems = new ArrayList<>();
         for (int i = 0; i < out.length; i++) {
             CellValue v = column.values().get(i);
-            if (skip.test(v.ref())) {
+            if (skip.test(i)) {
                 out[i] = Double.NaN;
             } else if (v.isNumber()) {
                 out[i] = v.number();
