@@ -93,11 +93,15 @@ final class SheetStreams {
      *
      * @param bytes       the package; what is read from it counts only once {@link PackageScan} has passed it
      * @param maxInflated the most bytes to inflate, all entries together, before giving up with an IOException
+     * @param maxCells    the most cells the streamed sheets may hold together, before giving up with an
+     *                    IllegalStateException (the check counts against the same budget, so a checked
+     *                    package never reaches it)
      * @param stop        asked as the package is read; true gives up with an IOException
      */
-    static Split split(byte[] bytes, Set<String> large, long maxInflated, BooleanSupplier stop)
+    static Split split(byte[] bytes, Set<String> large, long maxInflated, long maxCells, BooleanSupplier stop)
             throws IOException, XMLStreamException {
         Map<String, StreamedSheet> sheets = new HashMap<>();
+        long room = maxCells;
         ByteArrayOutputStream light = new ByteArrayOutputStream(bytes.length);
         try (ZipArchiveInputStream zip = new ZipArchiveInputStream(new ByteArrayInputStream(bytes));
              ZipArchiveOutputStream out = new ZipArchiveOutputStream(light)) {
@@ -108,8 +112,9 @@ final class SheetStreams {
                 ZipArchiveEntry copy = new ZipArchiveEntry(entry.getName());
                 out.putArchiveEntry(copy);
                 if (large.contains(entry.getName())) {
-                    StreamedSheet sheet = new StreamedSheet();
+                    StreamedSheet sheet = new StreamedSheet(room);
                     out.write(transform(in, sheet));
+                    room = sheet.room();
                     sheets.put("/" + entry.getName(), sheet);
                 } else {
                     in.transferTo(out);
@@ -444,7 +449,6 @@ final class SheetStreams {
         }
     }
 
-    /** Keeps the StAX reader from closing the zip stream it reads one entry of. */
     /** The current zip entry's bytes, counted across entries against a limit, and given up on request. */
     private static final class Bounded extends java.io.FilterInputStream {
         private final long max;
@@ -485,6 +489,7 @@ final class SheetStreams {
         }
     }
 
+    /** Keeps the StAX reader from closing the zip stream it reads one entry of. */
     private static final class NonClosing extends java.io.FilterInputStream {
         NonClosing(InputStream in) {
             super(in);

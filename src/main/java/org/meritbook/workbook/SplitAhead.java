@@ -19,7 +19,8 @@ import org.apache.commons.compress.utils.SeekableInMemoryByteChannel;
  * guess is used only when, the check passed, it names exactly the parts that the check's cell counts
  * pick, and only if it finished without error; otherwise the split is made again after the check,
  * as without it. Nothing it read counts before the check has passed; meanwhile its inflated bytes
- * are held to the budget, and it stops at its next read when the check fails.
+ * and its cells are held to the budget, and it stops at its next read once the check has ended
+ * without taking it.
  */
 final class SplitAhead {
     /** The fewest bytes a cell takes in a worksheet part: {@code <c><v>1</v></c>}. */
@@ -31,7 +32,7 @@ final class SplitAhead {
 
     private SplitAhead(byte[] bytes, Set<String> parts, WorkbookBudget budget) {
         this.parts = parts;
-        this.task = new FutureTask<>(() -> SheetStreams.split(bytes, parts, budget.maxBytes(), () -> abandoned));
+        this.task = new FutureTask<>(() -> SheetStreams.split(bytes, parts, budget.maxBytes(), budget.maxCells(), () -> abandoned));
     }
 
     /**
@@ -46,7 +47,11 @@ final class SplitAhead {
         SplitAhead ahead = new SplitAhead(bytes, guessed, budget);
         Thread thread = new Thread(ahead.task, "meritbook-split-ahead");
         thread.setDaemon(true);
-        thread.start();
+        try {
+            thread.start();
+        } catch (OutOfMemoryError | IllegalThreadStateException e) {
+            return null; // no thread to be had (a busy server): the split is made after the check, as without one
+        }
         return ahead;
     }
 

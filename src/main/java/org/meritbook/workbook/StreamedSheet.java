@@ -22,6 +22,18 @@ final class StreamedSheet {
     private boolean sorted = true;
     private StylesTable styles;
     private final java.util.Map<Integer, java.util.Optional<CellStyle>> styleCache = new java.util.HashMap<>();
+    /** Cells this sheet may still take: a split made before the package check is held to the cell budget. */
+    private long room;
+
+    /** @param room the most cells this sheet may hold */
+    StreamedSheet(long room) {
+        this.room = room;
+    }
+
+    /** Cells this sheet could still have taken, for the next sheet of the same split. */
+    long room() {
+        return room;
+    }
 
     /**
      * A cell's column (0-based) from its {@code r} attribute as written, or the one after the row's
@@ -95,6 +107,10 @@ final class StreamedSheet {
         }
 
         void add(int col, String type, String value, int style, String inlineText) {
+            if (size == RangeText.MAX_COLS) {
+                // A checked row holds each of the columns A to XFD at most once; an unchecked one may hold anything.
+                throw new IllegalStateException("a row of more than " + RangeText.MAX_COLS + " cells");
+            }
             if (size == cols.length) {
                 int n = size * 2;
                 cols = Arrays.copyOf(cols, n);
@@ -150,6 +166,10 @@ final class StreamedSheet {
     }
 
     void addRow(int rowIndex, Row row) {
+        room -= row.size;
+        if (room < 0) {
+            throw new IllegalStateException("more cells than the workbook budget allows");
+        }
         if (rowCount == rows.length) {
             rows = Arrays.copyOf(rows, rowCount * 2);
             rowIndexes = Arrays.copyOf(rowIndexes, rowCount * 2);

@@ -92,18 +92,17 @@ final class WorkbookFiles {
                 }
                 long threshold = SheetStreams.threshold();
                 SplitAhead ahead = SplitAhead.start(bytes, threshold, budget);
-                Map<String, Long> cells;
+                SourceWorkbook streamed;
                 try {
-                    cells = PackageScan.check(bytes, ReadErrors.fileName(file), where, expected, budget);
-                } catch (RuntimeException e) {
+                    Map<String, Long> cells = PackageScan.check(bytes, ReadErrors.fileName(file), where, expected, budget);
+                    PoiLimits.allow(budget);
+                    streamed = streamed(bytes, SheetStreams.large(cells, threshold), ahead, decisions,
+                            ReadErrors.fileName(file), budget);
+                } finally {
                     if (ahead != null) {
-                        ahead.abandon();
+                        ahead.abandon(); // whatever ended the check, nobody waits for the split any more
                     }
-                    throw e;
                 }
-                PoiLimits.allow(budget);
-                SourceWorkbook streamed = streamed(bytes, SheetStreams.large(cells, threshold), ahead, decisions,
-                        ReadErrors.fileName(file), budget);
                 if (streamed != null) {
                     return streamed;
                 }
@@ -142,15 +141,12 @@ final class WorkbookFiles {
     private static SourceWorkbook streamed(byte[] bytes, Set<String> large, SplitAhead ahead, List<String> decisions,
                                            String fileName, WorkbookBudget budget) throws IOException {
         if (large.isEmpty()) {
-            if (ahead != null) {
-                ahead.abandon();
-            }
             return null;
         }
         SheetStreams.Split split = ahead == null ? null : ahead.take(large);
         if (split == null) {
             try {
-                split = SheetStreams.split(bytes, large, Long.MAX_VALUE, () -> false);
+                split = SheetStreams.split(bytes, large, Long.MAX_VALUE, Long.MAX_VALUE, () -> false);
             } catch (XMLStreamException e) {
                 throw new IOException(e);
             }

@@ -53,7 +53,7 @@ class SplitAheadTest {
         SplitAhead ahead = SplitAhead.start(bytes, 1000, WorkbookBudget.DEFAULT);
         assertNotNull(ahead);
         SheetStreams.Split early = ahead.take(Set.of(LARGE));
-        SheetStreams.Split after = SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, () -> false);
+        SheetStreams.Split after = SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, Long.MAX_VALUE, () -> false);
         assertNotNull(early);
         assertArrayEquals(after.lightPackage(), early.lightPackage());
         assertEquals(after.sheets().keySet(), early.sheets().keySet());
@@ -70,10 +70,32 @@ class SplitAheadTest {
     }
 
     @Test
-    void theSplitKeepsToItsByteBudgetAndStopsWhenAsked(@TempDir Path dir) throws IOException {
+    void theSplitKeepsToItsByteAndCellBudgetsAndStopsWhenAsked(@TempDir Path dir) throws Exception {
         byte[] bytes = workbook(dir);
-        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), 1000, () -> false));
-        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, () -> true));
+        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), 1000, Long.MAX_VALUE, () -> false));
+        assertThrows(IllegalStateException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, 2999, () -> false));
+        assertEquals(1, SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, 3000, () -> false).sheets().size(), "its 3,000 cells fit");
+        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, Long.MAX_VALUE, () -> true));
+    }
+
+    /** A row of one cell more than the columns A to XFD: the check refuses it, and the split ahead never holds more. */
+    @Test
+    void aRowWiderThanASheetStopsTheSplit(@TempDir Path dir) throws IOException {
+        byte[] bytes = workbook(dir);
+        String wide = "<row r=\"1\">" + "<c><v>1</v></c>".repeat(RangeText.MAX_COLS + 1) + "</row>";
+        byte[] hostile = XlsxParts.of(bytes).edit(LARGE, xml -> xml.replaceFirst("<sheetData>.*</sheetData>",
+                "<sheetData>" + wide + "</sheetData>")).zip();
+        assertThrows(IllegalStateException.class, () -> SheetStreams.split(hostile, Set.of(LARGE), Long.MAX_VALUE,
+                Long.MAX_VALUE, () -> false));
+        Path file = dir.resolve("wide.xlsx");
+        Files.write(file, hostile);
+        System.setProperty(SheetStreams.THRESHOLD_PROPERTY, "1000");
+        try (WorkbookReader reader = new WorkbookReader()) {
+            InputException e = assertThrows(InputException.class, () -> reader.read(file, Fixtures.ref("Runs", "A1:C10")));
+            assertTrue(e.getMessage().contains("beyond the last column"), e.getMessage());
+        } finally {
+            System.clearProperty(SheetStreams.THRESHOLD_PROPERTY);
+        }
     }
 
     /** A large sheet with a document type declaration: the check's located refusal, whatever the split ahead did. */
