@@ -40,6 +40,7 @@ live = find("live", r"re-run (\d+) ms, save to new page state (\d+) ms")
 batch = find("batch", r"batch / singles: wall ([\d.]+) %")
 big_run = find("bigblock", r"^run 2: ([\d.]+) s wall, [\d.]+ s user, peak RSS (\d+) KB")
 big_read = find("bigblock", r"^parse notebook \+ read \+ analyse:\s+([\d.]+) ms")
+fresh = sorted(float(x) for x in re.findall(r"^fresh JVM, parse notebook \+ read \+ analyse:\s+([\d.]+) ms", text["bigblock"], re.M))
 rows = [
     ("demo dossier cold, wall", "<= 1.2 s", f"{ours[0]} s" if ours else "?"),
     ("demo cold / R peer, wall", "<= 2x", f"{ratio[0]}x" if ratio else "?"),
@@ -48,7 +49,8 @@ rows = [
     ("live: file written to new page state", "(adds 300 ms quiet)", f"{live[1]} ms" if live else "?"),
     (f"batch of {n} / {n} single cold runs, wall", "<= 40 %", f"{batch[0]} %" if batch else "?"),
     ("100,000-row block: cold run in 256 MiB", "(whole run)", f"{big_run[0]} s, {int(big_run[1]) // 1024} MB" if big_run else "?"),
-    ("100,000-row block: read + analyse", "<= 3 s", f"{big_read[0]} ms (warm)" if big_read else "?"),
+    ("100,000-row block: read + analyse, fresh JVM", "<= 3 s", f"{fresh[len(fresh) // 2]:.0f} ms (median)" if fresh else "?"),
+    ("100,000-row block: read + analyse, 2nd pass", "<= 3 s", f"{big_read[0]} ms (one JVM)" if big_read else "?"),
 ]
 print("== targets")
 for what, target, measured in rows:
