@@ -90,6 +90,7 @@ final class PackageScan {
             List<String> missing = directory.keySet().stream().filter(n -> !seen.contains(n)).limit(5).toList();
             throw problems.corrupt("a zip whose directory lists entries that are not in the file (" + String.join(", ", missing) + ")");
         }
+        missingSheetParts(parts, seen, problems);
         malformedSheets(fileName, parts);
         Map<String, Long> cells = new LinkedHashMap<>();
         parts.forEach((name, facts) -> {
@@ -171,6 +172,25 @@ final class PackageScan {
                 throw meter.failure();
             }
             throw e;
+        }
+    }
+
+    /**
+     * A sheet the workbook part lists must have its part in the file: POI leaves such a sheet out
+     * without a word, and the reader would then report a sheet the analyst can see in the workbook's
+     * own list as missing.
+     */
+    private static void missingSheetParts(Map<String, XmlPartScan.Facts> parts, Set<String> seen, Problems problems) {
+        List<String> missing = new ArrayList<>();
+        sheetNames(parts).forEach((part, sheet) -> {
+            if (!seen.contains(part)) {
+                missing.add("'" + sheet + "' (part " + part + ")");
+            }
+        });
+        if (!missing.isEmpty()) {
+            java.util.Collections.sort(missing);
+            throw problems.corrupt("a package whose workbook part lists the sheet" + (missing.size() == 1 ? " " : "s ")
+                    + String.join(", ", missing) + ", which the file does not hold (it is damaged or was cut short)");
         }
     }
 

@@ -61,7 +61,7 @@ final class ReadErrors {
 
     static InputException missingSheet(String where, String sheet, List<String> sheets) {
         return new InputException(ErrorKey.MISSING_SHEET, where, "a sheet named '" + sheet + "'",
-                "only the " + plural(sheets.size(), "sheet") + " " + quoted(sheets),
+                sheets.isEmpty() ? "a workbook without a sheet" : "only the " + plural(sheets.size(), "sheet") + " " + quoted(sheets),
                 "Correct the sheet name in the data reference.");
     }
 

@@ -84,6 +84,37 @@ class UnsafeWorkbookTest {
         assertEquals("parts that inflate to more than 10 MB (" + SHEET + " among them)", e.problems().get(0).found());
     }
 
+    /** A sheet listed by the workbook part whose own part is not in the zip: damage, not a missing sheet name. */
+    @Test
+    void aListedSheetWithoutItsPartIsDamage() throws Exception {
+        XlsxParts.Raw raw = new XlsxParts.Raw();
+        for (XlsxParts.Raw.Entry e : plain().rawEntries()) {
+            if (!e.name().equals(SHEET)) {
+                raw.add(e);
+            }
+        }
+        InputException e = fails(raw.bytes());
+        assertEquals(ErrorKey.CORRUPT_FILE, e.key());
+        assertLocated(e);
+        assertTrue(e.problems().get(0).found().contains("lists the sheet 'Calibration' (part " + SHEET + "), which the file does not hold"),
+                e.getMessage());
+    }
+
+    /** A workbook part that lists no sheet at all, and no sheet part: the sheet asked for is missing, said plainly. */
+    @Test
+    void aWorkbookWithoutSheetsSaysSo() throws Exception {
+        XlsxParts p = plain().edit("xl/workbook.xml", x -> x.replaceAll("<sheet [^>]*/>", ""));
+        XlsxParts.Raw raw = new XlsxParts.Raw();
+        for (XlsxParts.Raw.Entry e : p.rawEntries()) {
+            if (!e.name().equals(SHEET)) {
+                raw.add(e);
+            }
+        }
+        InputException e = fails(raw.bytes());
+        assertEquals(ErrorKey.MISSING_SHEET, e.key(), e.getMessage());
+        assertEquals("a workbook without a sheet", e.problems().get(0).found());
+    }
+
     /** The same bomb within the budget: its header lies about its size, so it is a damaged file. */
     @Test
     void aSizeTheDirectoryUnderstatesIsDamage() throws Exception {
