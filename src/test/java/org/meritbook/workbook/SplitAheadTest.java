@@ -87,12 +87,16 @@ class SplitAheadTest {
                 "<sheetData>" + wide + "</sheetData>")).zip();
         assertThrows(IllegalStateException.class, () -> SheetStreams.split(hostile, Set.of(LARGE), Long.MAX_VALUE,
                 Long.MAX_VALUE, () -> false));
-        Path file = dir.resolve("wide.xlsx");
-        Files.write(file, hostile);
+        InputException e = refused(dir, hostile);
+        assertTrue(e.getMessage().contains("beyond the last column"), e.getMessage());
+    }
+
+    /** The reader's error on {@code xlsx}, with sheets of more than 1,000 cells streamed (so split ahead). */
+    private static InputException refused(Path dir, byte[] xlsx) throws IOException {
+        Path file = Files.write(dir.resolve("hostile.xlsx"), xlsx);
         System.setProperty(SheetStreams.THRESHOLD_PROPERTY, "1000");
         try (WorkbookReader reader = new WorkbookReader()) {
-            InputException e = assertThrows(InputException.class, () -> reader.read(file, Fixtures.ref("Runs", "A1:C10")));
-            assertTrue(e.getMessage().contains("beyond the last column"), e.getMessage());
+            return assertThrows(InputException.class, () -> reader.read(file, Fixtures.ref("Runs", "A1:C10")));
         } finally {
             System.clearProperty(SheetStreams.THRESHOLD_PROPERTY);
         }
@@ -105,14 +109,7 @@ class SplitAheadTest {
         byte[] hostile = XlsxParts.of(bytes).edit(LARGE, xml -> xml.replaceFirst("\\?>",
                 "?><!DOCTYPE worksheet [<!ENTITY a \"aaaaaaaaaa\">]>")).zip();
         assertEquals(Set.of(LARGE), SplitAhead.guess(hostile, 1000));
-        Path file = dir.resolve("hostile.xlsx");
-        Files.write(file, hostile);
-        System.setProperty(SheetStreams.THRESHOLD_PROPERTY, "1000");
-        try (WorkbookReader reader = new WorkbookReader()) {
-            InputException e = assertThrows(InputException.class, () -> reader.read(file, Fixtures.ref("Runs", "A1:C1000")));
-            assertTrue(e.getMessage().contains("document type declaration"), e.getMessage());
-        } finally {
-            System.clearProperty(SheetStreams.THRESHOLD_PROPERTY);
-        }
+        InputException e = refused(dir, hostile);
+        assertTrue(e.getMessage().contains("document type declaration"), e.getMessage());
     }
 }
