@@ -291,7 +291,7 @@ final class PackageScan {
      * checked against the directory's CRC-32 and size at the end. The budget passed is remembered and
      * reported as an IOException, which stops any reader of the stream.
      */
-    static final class Meter extends InputStream {
+    static final class Meter extends ChunkReadStream {
         private final ZipArchiveInputStream zip;
         private final String name;
         private final long[] total;
@@ -312,13 +312,6 @@ final class PackageScan {
         /** The limit this entry passed, if any, as the located error to report. */
         IOException failure() {
             return failure;
-        }
-
-        @Override
-        public int read() throws IOException {
-            byte[] one = new byte[1];
-            int n = read(one, 0, 1);
-            return n < 0 ? -1 : one[0] & 0xff;
         }
 
         @Override

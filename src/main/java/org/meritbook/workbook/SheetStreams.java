@@ -450,22 +450,16 @@ final class SheetStreams {
     }
 
     /** The current zip entry's bytes, counted across entries against a limit, and given up on request. */
-    private static final class Bounded extends java.io.FilterInputStream {
+    private static final class Bounded extends ChunkReadStream {
+        private final InputStream in;
         private final long max;
         private final BooleanSupplier stop;
         private long inflated;
 
         Bounded(InputStream zip, long max, BooleanSupplier stop) {
-            super(zip);
+            this.in = zip;
             this.max = max;
             this.stop = stop;
-        }
-
-        @Override
-        public int read() throws IOException {
-            byte[] one = new byte[1];
-            int n = read(one, 0, 1);
-            return n < 0 ? -1 : one[0] & 0xff;
         }
 
         @Override
