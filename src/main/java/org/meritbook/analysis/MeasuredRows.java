@@ -142,19 +142,18 @@ public record MeasuredRows(DataBlock block, List<Column> columns, List<Row> rows
         }
         Map<CellRef, String> reasons = new HashMap<>();
         Set<Exclusion> claimed = new HashSet<>();
-        // The few excluded addresses are looked up among the cells, not every cell among them by address.
-        Map<String, List<Exclusion>> excludedAt = new HashMap<>();
-        for (Exclusion e : cell.exclusions()) {
-            excludedAt.computeIfAbsent(e.address(), a -> new ArrayList<>()).add(e);
-        }
-        for (Column c : excludedAt.isEmpty() ? List.<Column>of() : columns) {
-            for (CellValue v : c.values()) {
-                List<Exclusion> here = excludedAt.get(v.ref().address());
-                if (here != null) {
-                    for (Exclusion e : here) {
-                        reasons.put(v.ref(), e.shownReason()); // the notebook's last entry for a cell wins, as it did
-                        claimed.add(e);
-                    }
+        if (!cell.exclusions().isEmpty()) { // a large block without exclusions is not indexed by address
+            Map<String, CellRef> byAddress = new HashMap<>();
+            for (Column c : columns) {
+                for (CellValue v : c.values()) {
+                    byAddress.put(v.ref().address(), v.ref());
+                }
+            }
+            for (Exclusion e : cell.exclusions()) {
+                CellRef ref = byAddress.get(e.address());
+                if (ref != null) {
+                    reasons.put(ref, e.shownReason());
+                    claimed.add(e);
                 }
             }
         }

@@ -159,12 +159,8 @@ record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, L
 
     /** One column's numbers, NaN where its cell is left out; bad cells are added to {@code problems}. */
     private static double[] numbers(Path file, Column column, String[] rowReason, List<Problem> problems) {
-        Map<CellRef, Integer> rowOf = new HashMap<>();
-        for (int i = 0; i < column.values().size(); i++) {
-            rowOf.put(column.values().get(i).ref(), i);
-        }
         try {
-            return NumericColumn.values(file, column, ref -> rowReason[rowOf.get(ref)] != null);
+            return NumericColumn.valuesSkipping(file, column, i -> rowReason[i] != null);
         } catch (InputException e) {
             problems.addAll(e.problems()); // every column's bad cells are reported together
             return new double[column.values().size()];
