@@ -48,15 +48,27 @@ final class PackageScan {
     }
 
     /**
-     * @param bytes    the whole file
-     * @param fileName the file name, for cell locations ("lab.xlsx, Calibration!B5")
-     * @param where    where to report package-level problems (the file and the data reference)
+     * The first step of the check: the zip's central directory, by entry name, each entry listed once
+     * and the declared sizes within the budget.
+     *
+     * @param where where to report package-level problems (the file and the data reference)
+     * @throws InputException CORRUPT_FILE or WORKBOOK_TOO_LARGE
+     */
+    static Map<String, ZipArchiveEntry> directory(byte[] bytes, String where, String expected, WorkbookBudget budget) {
+        return directory(bytes, new Problems(where, expected), budget);
+    }
+
+    /**
+     * @param bytes     the whole file
+     * @param directory its central directory, from {@link #directory(byte[], String, String, WorkbookBudget)}
+     * @param fileName  the file name, for cell locations ("lab.xlsx, Calibration!B5")
+     * @param where     where to report package-level problems (the file and the data reference)
      * @return the number of cells of each worksheet part, by zip entry name
      * @throws InputException CORRUPT_FILE, WORKBOOK_TOO_LARGE or MALFORMED_SHEET
      */
-    static Map<String, Long> check(byte[] bytes, String fileName, String where, String expected, WorkbookBudget budget) {
+    static Map<String, Long> check(byte[] bytes, Map<String, ZipArchiveEntry> directory, String fileName, String where,
+                                   String expected, WorkbookBudget budget) {
         Problems problems = new Problems(where, expected);
-        Map<String, ZipArchiveEntry> directory = directory(bytes, problems, budget);
         XmlPartScan.Tally tally = new XmlPartScan.Tally(budget, ELEMENTS_PER_CELL);
         Map<String, XmlPartScan.Facts> parts = new LinkedHashMap<>();
         Set<String> seen = new HashSet<>();

@@ -92,20 +92,20 @@ final class SheetStreams {
      * Splits the parts named {@code large} (zip entry names) off the package.
      *
      * @param bytes       the package; what is read from it counts only once {@link PackageScan} has passed it
-     * @param maxInflated the most bytes to inflate, all entries together, before giving up with an IOException
-     * @param maxCells    the most cells the streamed sheets may hold together, before giving up with an
+     * @param budget      the bytes to inflate, all entries together, before giving up with an IOException,
+     *                    and the cells the streamed sheets may hold together, before giving up with an
      *                    IllegalStateException (the check counts against the same budget, so a checked
-     *                    package never reaches it)
+     *                    package never reaches either)
      * @param stop        asked as the package is read; true gives up with an IOException
      */
-    static Split split(byte[] bytes, Set<String> large, long maxInflated, long maxCells, BooleanSupplier stop)
+    static Split split(byte[] bytes, Set<String> large, WorkbookBudget budget, BooleanSupplier stop)
             throws IOException, XMLStreamException {
         Map<String, StreamedSheet> sheets = new HashMap<>();
-        long room = maxCells;
+        long room = budget.maxCells();
         ByteArrayOutputStream light = new ByteArrayOutputStream(bytes.length);
         try (ZipArchiveInputStream zip = new ZipArchiveInputStream(new ByteArrayInputStream(bytes));
              ZipArchiveOutputStream out = new ZipArchiveOutputStream(light)) {
-            InputStream in = new Bounded(zip, maxInflated, stop);
+            InputStream in = new Bounded(zip, budget.maxBytes(), stop);
             out.setLevel(Deflater.BEST_SPEED);
             ZipArchiveEntry entry;
             while ((entry = zip.getNextEntry()) != null) {

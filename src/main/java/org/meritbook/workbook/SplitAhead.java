@@ -1,12 +1,11 @@
 package org.meritbook.workbook;
 
+import java.util.Collection;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
 import org.apache.commons.compress.archivers.zip.ZipArchiveEntry;
-import org.apache.commons.compress.archivers.zip.ZipFile;
-import org.apache.commons.compress.utils.SeekableInMemoryByteChannel;
 
 /**
  * The large worksheets of a package split off ({@link SheetStreams}) on a second thread while
@@ -14,7 +13,8 @@ import org.apache.commons.compress.utils.SeekableInMemoryByteChannel;
  * neither needs the other's result, so on two cores a large workbook opens in the time of the
  * longer one, not of both.
  *
- * <p>The parts are guessed before the check from the sizes the zip's directory declares: a part of
+ * <p>The parts are guessed from the sizes the zip's directory declares, once the check has read and
+ * accepted that directory and before it reads the parts: a part of
  * more than {@value #BYTES_PER_CELL} bytes per cell of the threshold may hold that many cells. The
  * guess is used only when, the check passed, it names exactly the parts that the check's cell counts
  * pick, and only if it finished without error; otherwise the split is made again after the check,
@@ -32,15 +32,16 @@ final class SplitAhead {
 
     private SplitAhead(byte[] bytes, Set<String> parts, WorkbookBudget budget) {
         this.parts = parts;
-        this.task = new FutureTask<>(() -> SheetStreams.split(bytes, parts, budget.maxBytes(), budget.maxCells(), () -> abandoned));
+        this.task = new FutureTask<>(() -> SheetStreams.split(bytes, parts, budget, () -> abandoned));
     }
 
     /**
-     * Starts splitting the worksheet parts that may be above {@code threshold} cells; null when none may
-     * be, or when the zip's directory cannot be read (the check will say why).
+     * Starts splitting the worksheet parts that may be above {@code threshold} cells; null when none may be.
+     *
+     * @param directory the zip's central directory, as the package check read it
      */
-    static SplitAhead start(byte[] bytes, long threshold, WorkbookBudget budget) {
-        Set<String> guessed = guess(bytes, threshold);
+    static SplitAhead start(byte[] bytes, Collection<ZipArchiveEntry> directory, long threshold, WorkbookBudget budget) {
+        Set<String> guessed = guess(directory, threshold);
         if (guessed.isEmpty()) {
             return null;
         }
@@ -56,20 +57,14 @@ final class SplitAhead {
     }
 
     /** Worksheet parts whose declared size leaves room for more than {@code threshold} cells. */
-    static Set<String> guess(byte[] bytes, long threshold) {
-        Set<String> parts = new TreeSet<>();
+    static Set<String> guess(Collection<ZipArchiveEntry> directory, long threshold) {
         long minBytes = threshold > Long.MAX_VALUE / BYTES_PER_CELL ? Long.MAX_VALUE : (threshold + 1) * BYTES_PER_CELL;
-        try (ZipFile zip = ZipFile.builder().setSeekableByteChannel(new SeekableInMemoryByteChannel(bytes)).get()) {
-            var entries = zip.getEntries();
-            while (entries.hasMoreElements()) {
-                ZipArchiveEntry e = entries.nextElement();
-                String name = e.getName();
-                if (name.startsWith("xl/worksheets/") && name.endsWith(".xml") && e.getSize() >= minBytes) {
-                    parts.add(name);
-                }
+        Set<String> parts = new TreeSet<>();
+        for (ZipArchiveEntry e : directory) {
+            String name = e.getName();
+            if (name.startsWith("xl/worksheets/") && name.endsWith(".xml") && e.getSize() >= minBytes) {
+                parts.add(name);
             }
-        } catch (java.io.IOException | RuntimeException e) {
-            return Set.of(); // a damaged directory: the check reports it
         }
         return parts;
     }

@@ -16,6 +16,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import javax.xml.stream.XMLStreamException;
+import org.apache.commons.compress.archivers.zip.ZipArchiveEntry;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
@@ -91,10 +92,12 @@ final class WorkbookFiles {
                     decisions.add("the file is named .xls but holds an .xlsx workbook; read as .xlsx");
                 }
                 long threshold = SheetStreams.threshold();
-                SplitAhead ahead = SplitAhead.start(bytes, threshold, budget);
+                Map<String, ZipArchiveEntry> directory = PackageScan.directory(bytes, where, expected, budget);
+                SplitAhead ahead = SplitAhead.start(bytes, directory.values(), threshold, budget);
                 SourceWorkbook streamed;
                 try {
-                    Map<String, Long> cells = PackageScan.check(bytes, ReadErrors.fileName(file), where, expected, budget);
+                    Map<String, Long> cells = PackageScan.check(bytes, directory, ReadErrors.fileName(file), where, expected,
+                            budget);
                     PoiLimits.allow(budget);
                     streamed = streamed(bytes, SheetStreams.large(cells, threshold), ahead, decisions,
                             ReadErrors.fileName(file), budget);
@@ -146,7 +149,7 @@ final class WorkbookFiles {
         SheetStreams.Split split = ahead == null ? null : ahead.take(large);
         if (split == null) {
             try {
-                split = SheetStreams.split(bytes, large, Long.MAX_VALUE, Long.MAX_VALUE, () -> false);
+                split = SheetStreams.split(bytes, large, budget, () -> false);
             } catch (XMLStreamException e) {
                 throw new IOException(e);
             }

@@ -24,6 +24,12 @@ import org.meritbook.error.InputException;
 class SplitAheadTest {
     private static final String LARGE = "xl/worksheets/sheet1.xml";
     private static final String SMALL = "xl/worksheets/sheet2.xml";
+    private static final WorkbookBudget UNLIMITED = new WorkbookBudget(Long.MAX_VALUE, Long.MAX_VALUE);
+
+    /** The zip's directory, as the package check's first step reads it. */
+    private static java.util.Collection<org.apache.commons.compress.archivers.zip.ZipArchiveEntry> directory(byte[] xlsx) {
+        return PackageScan.directory(xlsx, "test.xlsx", "an Excel workbook (.xlsx)", WorkbookBudget.DEFAULT).values();
+    }
 
     /** A workbook with a sheet of 3,000 cells and one of 2. */
     private static byte[] workbook(Path dir) throws IOException {
@@ -41,19 +47,20 @@ class SplitAheadTest {
     @Test
     void guessesTheSheetsLargeEnoughToHoldMoreCellsThanTheThreshold(@TempDir Path dir) throws IOException {
         byte[] bytes = workbook(dir);
-        assertEquals(Set.of(LARGE), SplitAhead.guess(bytes, 1000));
-        assertEquals(Set.of(LARGE, SMALL), SplitAhead.guess(bytes, 0));
-        assertEquals(Set.of(), SplitAhead.guess(bytes, 1_000_000));
-        assertEquals(Set.of(), SplitAhead.guess(new byte[] {'P', 'K', 3, 4, 0}, 0), "a damaged zip: no guess, the check reports it");
+        assertEquals(Set.of(LARGE), SplitAhead.guess(directory(bytes), 1000));
+        assertEquals(Set.of(LARGE, SMALL), SplitAhead.guess(directory(bytes), 0));
+        assertEquals(Set.of(), SplitAhead.guess(directory(bytes), 1_000_000));
+        assertThrows(InputException.class, () -> directory(new byte[] {'P', 'K', 3, 4, 0}),
+                "a damaged zip: the check's first step refuses it, before any guess");
     }
 
     @Test
     void aRightGuessGivesTheSplitMadeAfterTheCheck(@TempDir Path dir) throws Exception {
         byte[] bytes = workbook(dir);
-        SplitAhead ahead = SplitAhead.start(bytes, 1000, WorkbookBudget.DEFAULT);
+        SplitAhead ahead = SplitAhead.start(bytes, directory(bytes), 1000, WorkbookBudget.DEFAULT);
         assertNotNull(ahead);
         SheetStreams.Split early = ahead.take(Set.of(LARGE));
-        SheetStreams.Split after = SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, Long.MAX_VALUE, () -> false);
+        SheetStreams.Split after = SheetStreams.split(bytes, Set.of(LARGE), UNLIMITED, () -> false);
         assertNotNull(early);
         assertArrayEquals(after.lightPackage(), early.lightPackage());
         assertEquals(after.sheets().keySet(), early.sheets().keySet());
@@ -63,19 +70,19 @@ class SplitAheadTest {
     @Test
     void aWrongGuessIsNotUsed(@TempDir Path dir) throws IOException {
         byte[] bytes = workbook(dir);
-        SplitAhead ahead = SplitAhead.start(bytes, 0, WorkbookBudget.DEFAULT);
+        SplitAhead ahead = SplitAhead.start(bytes, directory(bytes), 0, WorkbookBudget.DEFAULT);
         assertNotNull(ahead);
         assertNull(ahead.take(Set.of(LARGE)), "guessed both sheets, the check picks one");
-        assertNull(SplitAhead.start(bytes, 1_000_000, WorkbookBudget.DEFAULT), "nothing to guess: no thread");
+        assertNull(SplitAhead.start(bytes, directory(bytes), 1_000_000, WorkbookBudget.DEFAULT), "nothing to guess: no thread");
     }
 
     @Test
     void theSplitKeepsToItsByteAndCellBudgetsAndStopsWhenAsked(@TempDir Path dir) throws Exception {
         byte[] bytes = workbook(dir);
-        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), 1000, Long.MAX_VALUE, () -> false));
-        assertThrows(IllegalStateException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, 2999, () -> false));
-        assertEquals(1, SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, 3000, () -> false).sheets().size(), "its 3,000 cells fit");
-        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), Long.MAX_VALUE, Long.MAX_VALUE, () -> true));
+        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), new WorkbookBudget(1000, Long.MAX_VALUE), () -> false));
+        assertThrows(IllegalStateException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), new WorkbookBudget(Long.MAX_VALUE, 2999), () -> false));
+        assertEquals(1, SheetStreams.split(bytes, Set.of(LARGE), new WorkbookBudget(Long.MAX_VALUE, 3000), () -> false).sheets().size(), "its 3,000 cells fit");
+        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), UNLIMITED, () -> true));
     }
 
     /** A row of one cell more than the columns A to XFD: the check refuses it, and the split ahead never holds more. */
@@ -85,8 +92,7 @@ class SplitAheadTest {
         String wide = "<row r=\"1\">" + "<c><v>1</v></c>".repeat(RangeText.MAX_COLS + 1) + "</row>";
         byte[] hostile = XlsxParts.of(bytes).edit(LARGE, xml -> xml.replaceFirst("<sheetData>.*</sheetData>",
                 "<sheetData>" + wide + "</sheetData>")).zip();
-        assertThrows(IllegalStateException.class, () -> SheetStreams.split(hostile, Set.of(LARGE), Long.MAX_VALUE,
-                Long.MAX_VALUE, () -> false));
+        assertThrows(IllegalStateException.class, () -> SheetStreams.split(hostile, Set.of(LARGE), UNLIMITED, () -> false));
         InputException e = refused(dir, hostile);
         assertTrue(e.getMessage().contains("beyond the last column"), e.getMessage());
     }
@@ -108,7 +114,7 @@ class SplitAheadTest {
         byte[] bytes = workbook(dir);
         byte[] hostile = XlsxParts.of(bytes).edit(LARGE, xml -> xml.replaceFirst("\\?>",
                 "?><!DOCTYPE worksheet [<!ENTITY a \"aaaaaaaaaa\">]>")).zip();
-        assertEquals(Set.of(LARGE), SplitAhead.guess(hostile, 1000));
+        assertEquals(Set.of(LARGE), SplitAhead.guess(directory(hostile), 1000));
         InputException e = refused(dir, hostile);
         assertTrue(e.getMessage().contains("document type declaration"), e.getMessage());
     }
