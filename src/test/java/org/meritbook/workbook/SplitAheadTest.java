@@ -79,9 +79,12 @@ class SplitAheadTest {
     @Test
     void theSplitKeepsToItsByteAndCellBudgetsAndStopsWhenAsked(@TempDir Path dir) throws Exception {
         byte[] bytes = workbook(dir);
-        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), new WorkbookBudget(1000, Long.MAX_VALUE), () -> false));
-        assertThrows(IllegalStateException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), new WorkbookBudget(Long.MAX_VALUE, 2999), () -> false));
-        assertEquals(1, SheetStreams.split(bytes, Set.of(LARGE), new WorkbookBudget(Long.MAX_VALUE, 3000), () -> false).sheets().size(), "its 3,000 cells fit");
+        WorkbookBudget thousandBytes = new WorkbookBudget(1000, Long.MAX_VALUE);
+        assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), thousandBytes, () -> false));
+        WorkbookBudget oneCellShort = new WorkbookBudget(Long.MAX_VALUE, 2999);
+        assertThrows(IllegalStateException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), oneCellShort, () -> false));
+        WorkbookBudget justEnough = new WorkbookBudget(Long.MAX_VALUE, 3000);
+        assertEquals(1, SheetStreams.split(bytes, Set.of(LARGE), justEnough, () -> false).sheets().size(), "its 3,000 cells fit");
         assertThrows(IOException.class, () -> SheetStreams.split(bytes, Set.of(LARGE), UNLIMITED, () -> true));
     }
 
