@@ -41,9 +41,13 @@ public final class DossierRenderer {
     /** What takes time to set up: the templates, the fonts (read and checked), the colour profile. */
     private record Parts(TemplateEngine templates, DossierModelBuilder model, PdfRenderer pdf) {
         static Parts of(Optional<Path> templateDir, RenderEnvironment environment) {
+            return of(templateDir, environment, true);
+        }
+
+        static Parts of(Optional<Path> templateDir, RenderEnvironment environment, boolean pruneStyles) {
             return new Parts(new TemplateEngine(templateDir),
                     new DossierModelBuilder(environment, renderingLibraries()),
-                    new PdfRenderer(new EmbeddedFonts(templateDir)));
+                    new PdfRenderer(new EmbeddedFonts(templateDir), pruneStyles));
         }
     }
 
@@ -53,12 +57,17 @@ public final class DossierRenderer {
     }
 
     public DossierRenderer(Optional<Path> templateDir, RenderEnvironment environment) {
-        this(templateDir, environment, false);
+        this(templateDir, environment, false, false);
     }
 
-    DossierRenderer(Optional<Path> templateDir, RenderEnvironment environment, boolean figuresInline) {
+    /**
+     * @param figuresInline     lay out the pages with the drawings in them (the plain way)
+     * @param wholeStyleSheets  give the PDF renderer every rule of its style sheets (the plain way)
+     */
+    DossierRenderer(Optional<Path> templateDir, RenderEnvironment environment, boolean figuresInline,
+                    boolean wholeStyleSheets) {
         this.figuresInline = figuresInline;
-        this.parts = SideTask.done(Parts.of(templateDir, environment));
+        this.parts = SideTask.done(Parts.of(templateDir, environment, !wholeStyleSheets));
     }
 
     private DossierRenderer(SideTask<Parts> parts) {

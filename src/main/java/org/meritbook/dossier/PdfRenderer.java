@@ -40,10 +40,17 @@ final class PdfRenderer {
     private final EmbeddedFonts fonts;
     private final GlyphCoverage coverage;
     private final byte[] srgb = ICC_Profile.getInstance(ColorSpace.CS_sRGB).getData();
+    /** Style sheets cut to each page DOM ({@link UnusedStyleRules}); off only to test that the pages stay the same. */
+    private final boolean pruneStyles;
 
     PdfRenderer(EmbeddedFonts fonts) {
+        this(fonts, true);
+    }
+
+    PdfRenderer(EmbeddedFonts fonts, boolean pruneStyles) {
         this.fonts = fonts;
         this.coverage = new GlyphCoverage(fonts);
+        this.pruneStyles = pruneStyles;
     }
 
     /** @param figureArt the figures whose placeholders the XHTML holds; put in after layout, before painting */
@@ -61,6 +68,9 @@ final class PdfRenderer {
         b.withProducer(PdfAFinisher.PRODUCER);
         b.withDiagnosticConsumer(PdfRenderer::report);
         fonts.register(b);
+        if (pruneStyles) {
+            b.useNamespaceHandler(new PrunedStyleHandler(StyleVocabulary.of(dom)));
+        }
         b.withW3cDocument(dom, BASE_URI);
         try (PdfBoxRenderer renderer = b.buildPdfRenderer()) {
             renderer.layout();

@@ -1,0 +1,66 @@
+package org.meritbook.dossier;
+
+import com.openhtmltopdf.css.extend.StylesheetFactory;
+import com.openhtmltopdf.css.sheet.StylesheetInfo;
+import com.openhtmltopdf.simple.extend.XhtmlCssOnlyNamespaceHandler;
+import com.openhtmltopdf.simple.extend.XhtmlNamespaceHandler;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.StringReader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import org.w3c.dom.Document;
+
+/**
+ * The renderer's XHTML handling with the style sheets cut to one page DOM ({@link UnusedStyleRules}):
+ * the renderer's default sheet (forms, frames, lists) and the dossier's own {@code <style>}. Made
+ * for one document, from its vocabulary before the figures go in.
+ */
+final class PrunedStyleHandler extends XhtmlNamespaceHandler {
+    private final StyleVocabulary words;
+
+    PrunedStyleHandler(StyleVocabulary words) {
+        this.words = words;
+    }
+
+    /** As the default handler's (same address, origin and media), with the unused rules taken out. */
+    @Override
+    public StylesheetInfo getDefaultStylesheet(StylesheetFactory factory) {
+        String text = DefaultSheet.TEXT;
+        if (text == null || !getPathToDefaultStylesheet().equals(DefaultSheet.PATH)) {
+            return super.getDefaultStylesheet(factory); // the renderer reports its own missing sheet
+        }
+        StylesheetInfo info = new StylesheetInfo();
+        info.setUri("classpath:" + getPathToDefaultStylesheet());
+        info.setOrigin(StylesheetInfo.USER_AGENT);
+        info.setMedia("all");
+        info.setType("text/css");
+        info.setStylesheet(factory.parse(new StringReader(UnusedStyleRules.prune(text, words)), info));
+        return info;
+    }
+
+    @Override
+    public StylesheetInfo[] getStylesheets(Document doc) {
+        StylesheetInfo[] sheets = super.getStylesheets(doc);
+        for (StylesheetInfo s : sheets) {
+            if (s.isInline() && s.getContent() != null) {
+                s.setContent(UnusedStyleRules.prune(s.getContent(), words));
+            }
+        }
+        return sheets;
+    }
+
+    /** The renderer's default sheet, read once from its jar; null when the jar lacks it. */
+    private static final class DefaultSheet {
+        static final String PATH = "/resources/css/XhtmlNamespaceHandler.css";
+        static final String TEXT = read();
+
+        private static String read() {
+            try (InputStream in = XhtmlCssOnlyNamespaceHandler.class.getResourceAsStream(PATH)) {
+                return in == null ? null : new String(in.readAllBytes(), StandardCharsets.UTF_8);
+            } catch (IOException e) {
+                throw new UncheckedIOException("the PDF renderer's default style sheet could not be read", e);
+            }
+        }
+    }
+}

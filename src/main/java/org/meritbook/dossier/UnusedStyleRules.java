@@ -1,0 +1,379 @@
+package org.meritbook.dossier;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Takes out of a style sheet the selectors that cannot match anything in one page DOM: the PDF
+ * renderer tries every selector on every element, so a 90-page dossier pays for each rule the
+ * default style sheet keeps for forms, frames and lists it never has. Only what is certain goes:
+ * a selector that names an element, class, id or attribute the page does not hold
+ * ({@link StyleVocabulary}). A rule any of whose selectors is outside the plain grammar read here
+ * (escapes, namespaces, functions, the ~ combinator, pseudo-classes other than a few) is kept as
+ * written, and so is every at-rule; a sheet that does not scan (an unclosed block or string) is
+ * returned unchanged. A selector that matches nothing changes no style, so the pages are the same,
+ * byte for byte (PdfRendererTest).
+ */
+final class UnusedStyleRules {
+    private static final Set<String> PSEUDO_CLASSES = Set.of("first-child", "last-child", "link", "visited", "hover",
+            "active", "focus");
+    private static final Set<String> PSEUDO_ELEMENTS = Set.of("before", "after");
+
+    private UnusedStyleRules() {
+    }
+
+    /** The sheet without the selectors that cannot match in a page of this vocabulary. */
+    static String prune(String css, StyleVocabulary words) {
+        StringBuilder out = new StringBuilder(css.length());
+        int i = 0;
+        while (true) {
+            i = skipSpaceAndComments(css, i);
+            if (i < 0) {
+                return css;
+            }
+            if (i >= css.length()) {
+                return out.toString();
+            }
+            if (css.charAt(i) == '@') {
+                int end = atRuleEnd(css, i);
+                if (end < 0) {
+                    return css;
+                }
+                out.append(css, i, end).append('\n');
+                i = end;
+                continue;
+            }
+            int open = preludeEnd(css, i);
+            if (open < 0) {
+                return css;
+            }
+            int close = blockEnd(css, open);
+            if (close < 0) {
+                return css;
+            }
+            String kept = keptSelectors(css.substring(i, open), words);
+            if (kept != null) {
+                out.append(kept).append(' ').append(css, open, close).append('\n');
+            }
+            i = close;
+        }
+    }
+
+    /**
+     * The selector list to write: the prelude as it is when every selector may match or one is not
+     * read, the matching ones joined when some cannot, null when none can.
+     */
+    private static String keptSelectors(String prelude, StyleVocabulary words) {
+        List<String> selectors = splitOnCommas(prelude);
+        List<String> kept = new ArrayList<>();
+        for (String s : selectors) {
+            Boolean may = mayMatch(s.strip(), words);
+            if (may == null) {
+                return prelude.strip();
+            }
+            if (may) {
+                kept.add(s.strip());
+            }
+        }
+        if (kept.size() == selectors.size()) {
+            return prelude.strip();
+        }
+        return kept.isEmpty() ? null : String.join(", ", kept);
+    }
+
+    /** Whether a selector may match; null when it is not in the grammar read here. */
+    static Boolean mayMatch(String selector, StyleVocabulary words) {
+        if (selector.isEmpty()) {
+            return null;
+        }
+        boolean may = true;
+        int i = 0;
+        int n = selector.length();
+        boolean expectCompound = true;
+        while (i < n) {
+            char c = selector.charAt(i);
+            if (c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' || c == '>' || c == '+') {
+                if (expectCompound && (c == '>' || c == '+') || i == 0) {
+                    return null; // a combinator with nothing before it
+                }
+                boolean sawSymbol = false;
+                while (i < n && " \t\n\r\f>+".indexOf(selector.charAt(i)) >= 0) {
+                    if (selector.charAt(i) == '>' || selector.charAt(i) == '+') {
+                        if (sawSymbol) {
+                            return null;
+                        }
+                        sawSymbol = true;
+                    }
+                    i++;
+                }
+                if (i == n) {
+                    return null; // a combinator with nothing after it
+                }
+                expectCompound = true;
+                continue;
+            }
+            if (!expectCompound) {
+                return null;
+            }
+            int end = compoundEnd(selector, i);
+            if (end < 0) {
+                return null;
+            }
+            Boolean compound = compoundMayMatch(selector.substring(i, end), words);
+            if (compound == null) {
+                return null;
+            }
+            may &= compound;
+            i = end;
+            expectCompound = false;
+        }
+        return may;
+    }
+
+    private static int compoundEnd(String s, int from) {
+        int i = from;
+        while (i < s.length() && " \t\n\r\f>+".indexOf(s.charAt(i)) < 0) {
+            if (s.charAt(i) == '[') {
+                int close = attributeEnd(s, i);
+                if (close < 0) {
+                    return -1;
+                }
+                i = close;
+            } else {
+                i++;
+            }
+        }
+        return i;
+    }
+
+    /** The index after the ']' closing the attribute selector at {@code open}, or -1. */
+    private static int attributeEnd(String s, int open) {
+        for (int i = open + 1; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (c == '"' || c == '\'') {
+                int close = s.indexOf(c, i + 1);
+                if (close < 0 || s.substring(i + 1, close).indexOf('\\') >= 0) {
+                    return -1;
+                }
+                i = close;
+            } else if (c == ']') {
+                return i + 1;
+            }
+        }
+        return -1;
+    }
+
+    /** One compound selector (element name, then classes, ids, attributes, pseudo parts). */
+    private static Boolean compoundMayMatch(String compound, StyleVocabulary words) {
+        boolean may = true;
+        int i = 0;
+        int n = compound.length();
+        if (compound.charAt(0) == '*') {
+            i = 1;
+        } else if (identStart(compound.charAt(0))) {
+            int end = identEnd(compound, 0);
+            may = words.mayHaveElement(compound.substring(0, end));
+            i = end;
+        }
+        boolean pseudoElement = false;
+        while (i < n) {
+            char c = compound.charAt(i);
+            if (pseudoElement) {
+                return null; // nothing may follow a pseudo-element
+            }
+            if (c == '.' || c == '#') {
+                int end = identEnd(compound, i + 1);
+                if (end == i + 1) {
+                    return null;
+                }
+                String name = compound.substring(i + 1, end);
+                may &= c == '.' ? words.mayHaveClass(name) : words.mayHaveId(name);
+                i = end;
+            } else if (c == '[') {
+                int close = attributeEnd(compound, i);
+                Boolean attribute = close < 0 ? null : attributeMayMatch(compound.substring(i + 1, close - 1), words);
+                if (attribute == null) {
+                    return null;
+                }
+                may &= attribute;
+                i = close;
+            } else if (c == ':') {
+                boolean doubled = i + 1 < n && compound.charAt(i + 1) == ':';
+                int start = i + (doubled ? 2 : 1);
+                int end = identEnd(compound, start);
+                String name = compound.substring(start, end).toLowerCase(java.util.Locale.ROOT);
+                if (PSEUDO_ELEMENTS.contains(name)) {
+                    pseudoElement = true;
+                } else if (doubled || !PSEUDO_CLASSES.contains(name)) {
+                    return null;
+                }
+                i = end;
+            } else {
+                return null;
+            }
+        }
+        return may;
+    }
+
+    /** {@code name}, {@code name=value} and the like; the value is not looked at. */
+    private static Boolean attributeMayMatch(String inside, StyleVocabulary words) {
+        String s = inside.strip();
+        int end = s.isEmpty() || !identStart(s.charAt(0)) ? -1 : identEnd(s, 0);
+        if (end < 0) {
+            return null;
+        }
+        String rest = s.substring(end).strip();
+        if (!rest.isEmpty()) {
+            int valueAt = rest.startsWith("=") ? 1 : rest.length() > 1 && "~|^$*".indexOf(rest.charAt(0)) >= 0
+                    && rest.charAt(1) == '=' ? 2 : -1;
+            if (valueAt < 0 || !plainValue(rest.substring(valueAt).strip())) {
+                return null;
+            }
+        }
+        return words.mayHaveAttribute(s.substring(0, end));
+    }
+
+    private static boolean plainValue(String v) {
+        if (v.length() >= 2 && (v.charAt(0) == '"' || v.charAt(0) == '\'') && v.charAt(v.length() - 1) == v.charAt(0)) {
+            return v.indexOf(v.charAt(0), 1) == v.length() - 1;
+        }
+        return !v.isEmpty() && identEnd(v, 0) == v.length();
+    }
+
+    private static boolean identStart(char c) {
+        return c >= 'a' && c <= 'z' || c >= 'A' && c <= 'Z' || c == '_' || c == '-';
+    }
+
+    private static int identEnd(String s, int from) {
+        int i = from;
+        while (i < s.length() && (identStart(s.charAt(i)) || s.charAt(i) >= '0' && s.charAt(i) <= '9')) {
+            i++;
+        }
+        return i;
+    }
+
+    private static List<String> splitOnCommas(String prelude) {
+        List<String> parts = new ArrayList<>();
+        int start = 0;
+        char quote = 0;
+        int brackets = 0;
+        for (int i = 0; i < prelude.length(); i++) {
+            char c = prelude.charAt(i);
+            if (quote != 0) {
+                quote = c == quote ? 0 : quote;
+            } else if (c == '"' || c == '\'') {
+                quote = c;
+            } else if (c == '[' || c == '(') {
+                brackets++;
+            } else if (c == ']' || c == ')') {
+                brackets--;
+            } else if (c == ',' && brackets == 0) {
+                parts.add(prelude.substring(start, i));
+                start = i + 1;
+            }
+        }
+        parts.add(prelude.substring(start));
+        return parts;
+    }
+
+    /** The index after white space and comments from {@code i}; -1 in an unclosed comment. */
+    private static int skipSpaceAndComments(String css, int from) {
+        int i = from;
+        while (i < css.length()) {
+            if (Character.isWhitespace(css.charAt(i))) {
+                i++;
+            } else if (css.startsWith("/*", i)) {
+                int close = css.indexOf("*/", i + 2);
+                if (close < 0) {
+                    return -1;
+                }
+                i = close + 2;
+            } else {
+                break;
+            }
+        }
+        return i;
+    }
+
+    /** The index of the '{' opening a rule's block; -1 when a ';', '}' or the end comes first, or a comment is inside. */
+    private static int preludeEnd(String css, int from) {
+        char quote = 0;
+        for (int i = from; i < css.length(); i++) {
+            char c = css.charAt(i);
+            if (quote != 0) {
+                if (c == '\\') {
+                    return -1;
+                }
+                quote = c == quote ? 0 : quote;
+            } else if (c == '"' || c == '\'') {
+                quote = c;
+            } else if (c == '{') {
+                return i;
+            } else if (c == ';' || c == '}' || c == '\\' || css.startsWith("/*", i)) {
+                return -1;
+            }
+        }
+        return -1;
+    }
+
+    /** The index after the '}' that closes the block opened at {@code open}; -1 when it is not closed. */
+    private static int blockEnd(String css, int open) {
+        int depth = 0;
+        char quote = 0;
+        for (int i = open; i < css.length(); i++) {
+            char c = css.charAt(i);
+            if (quote != 0) {
+                if (c == '\\') {
+                    i++;
+                } else if (c == quote) {
+                    quote = 0;
+                } else if (c == '\n') {
+                    return -1; // an unclosed string: leave the sheet to the renderer's own recovery
+                }
+            } else if (c == '"' || c == '\'') {
+                quote = c;
+            } else if (c == '\\') {
+                i++;
+            } else if (css.startsWith("/*", i)) {
+                int close = css.indexOf("*/", i + 2);
+                if (close < 0) {
+                    return -1;
+                }
+                i = close + 1;
+            } else if (c == '{') {
+                depth++;
+            } else if (c == '}') {
+                depth--;
+                if (depth == 0) {
+                    return i + 1;
+                }
+            }
+        }
+        return -1;
+    }
+
+    /** The end of an at-rule: after its ';' or its block. */
+    private static int atRuleEnd(String css, int at) {
+        char quote = 0;
+        for (int i = at; i < css.length(); i++) {
+            char c = css.charAt(i);
+            if (quote != 0) {
+                if (c == '\\') {
+                    i++;
+                } else if (c == quote) {
+                    quote = 0;
+                }
+            } else if (c == '"' || c == '\'') {
+                quote = c;
+            } else if (c == ';') {
+                return i + 1;
+            } else if (c == '{') {
+                return blockEnd(css, i);
+            } else if (c == '}') {
+                return -1;
+            }
+        }
+        return -1;
+    }
+}

@@ -1,0 +1,83 @@
+package org.meritbook.dossier;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+class UnusedStyleRulesTest {
+    private static final String PAGE = "<html xmlns=\"http://www.w3.org/1999/xhtml\"><head><title>t</title></head>"
+            + "<body><div class=\"grid wide\" id=\"top\"><table><tr><td class=\"c-num\" dir=\"ltr\">1</td></tr></table>"
+            + "</div>%s</body></html>";
+    private static final StyleVocabulary TEXT_ONLY = StyleVocabulary.of(PdfRenderer.parse(String.format(PAGE, "")));
+    private static final StyleVocabulary WITH_FIGURE = StyleVocabulary.of(PdfRenderer.parse(String.format(PAGE,
+            "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"10\" height=\"10\"></svg>")));
+
+    @Test
+    void theVocabularyHoldsThePagesNamesClassesIdsAndAttributesLowerCased() {
+        assertTrue(TEXT_ONLY.elements().containsAll(java.util.Set.of("html", "body", "div", "table", "td", "title")));
+        assertEquals(java.util.Set.of("grid", "wide", "c-num"), TEXT_ONLY.classes());
+        assertEquals(java.util.Set.of("top"), TEXT_ONLY.ids());
+        assertTrue(TEXT_ONLY.attributes().containsAll(java.util.Set.of("class", "id", "dir")));
+        assertFalse(TEXT_ONLY.figures());
+        assertTrue(WITH_FIGURE.figures());
+    }
+
+    @Test
+    void aSelectorNamingWhatThePageLacksGoesAndTheRestStaysInOrder() {
+        String css = "h1, td, input { color: red }\n.grid td.c-num { width: 1mm }\n.steps .src { color: blue }\n"
+                + "#top > table { margin: 0 }\n#bottom { margin: 0 }\nTD[dir=ltr], p[dir=\"rtl\"] { direction: ltr }\n";
+        assertEquals("td { color: red }\n.grid td.c-num { width: 1mm }\n#top > table { margin: 0 }\n"
+                + "TD[dir=ltr] { direction: ltr }\n", UnusedStyleRules.prune(css, TEXT_ONLY));
+    }
+
+    @Test
+    void whatMayBeInsideAFigureStays() {
+        // A figure's drawing goes in after layout: any SVG element, class, id or attribute may be there.
+        String css = "line, svg g { stroke: red }\n.legend { display: none }\n#clip1 { fill: none }\n[fill] { opacity: 1 }\n"
+                + "input { border: 1px solid black }\n";
+        assertEquals("line, svg g { stroke: red }\n.legend { display: none }\n#clip1 { fill: none }\n[fill] { opacity: 1 }\n",
+                UnusedStyleRules.prune(css, WITH_FIGURE));
+        assertEquals("", UnusedStyleRules.prune(css, TEXT_ONLY));
+    }
+
+    @Test
+    void pseudoClassesAndElementsReadHereAreJudgedByTheirCompound() {
+        String css = "a:link, a:visited { text-decoration: underline }\nbr:before { content: \"\\A\" }\n"
+                + "td:first-child::after { content: \"}\" }\n.pageno::after { content: counter(page) }\n";
+        assertEquals("td:first-child::after { content: \"}\" }\n", UnusedStyleRules.prune(css, TEXT_ONLY));
+    }
+
+    @Test
+    void aRuleWithASelectorOutsideTheGrammarIsKeptAsWritten() {
+        // One selector the renderer might refuse can make it drop the whole rule: cutting the others
+        // out of such a list could change what applies, so the list stays whole.
+        for (String prelude : new String[] {"input, td:not(.x)", "input, p ~ td", "input, svg|rect", "input, td:nth-child(2n + 1)",
+            "input, td::first-line", "input, p:lang(en)", "input,", "input, > td"}) {
+            String css = prelude + " { color: red }";
+            assertEquals(prelude + " { color: red }\n", UnusedStyleRules.prune(css, TEXT_ONLY), prelude);
+        }
+        assertNull(UnusedStyleRules.mayMatch("p ~ td", TEXT_ONLY));
+        assertEquals(Boolean.FALSE, UnusedStyleRules.mayMatch("form input[type=text]", TEXT_ONLY));
+        assertEquals(Boolean.TRUE, UnusedStyleRules.mayMatch("*", TEXT_ONLY));
+    }
+
+    @Test
+    void atRulesStayAsWrittenAndCommentsAndSpaceBetweenRulesGo() {
+        String css = "/* head */ @page { size: A4; @top-center { content: element(runHead) } }\n"
+                + "@media screen { input { color: red } }\n@font-face { font-family: x; src: url(a.ttf) }\n"
+                + "/* between */\ninput { color: red }\ntd{color:blue}";
+        assertEquals("@page { size: A4; @top-center { content: element(runHead) } }\n@media screen { input { color: red } }\n"
+                + "@font-face { font-family: x; src: url(a.ttf) }\ntd {color:blue}\n", UnusedStyleRules.prune(css, TEXT_ONLY));
+    }
+
+    @Test
+    void aSheetThatDoesNotScanIsLeftToTheRenderersOwnRecovery() {
+        for (String css : new String[] {"input { color: red", "input { content: \"open\n}", "/* open", "input, td /* x */ { }",
+            "input; td { }", "} input { }", "input, td.\\31 x { color: red }"}) {
+            assertEquals(css, UnusedStyleRules.prune(css, TEXT_ONLY), css);
+        }
+    }
+}
