@@ -2,6 +2,7 @@ package org.meritbook.dossier;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Set;
 
 /**
@@ -202,7 +203,7 @@ final class UnusedStyleRules {
                 boolean doubled = i + 1 < n && compound.charAt(i + 1) == ':';
                 int start = i + (doubled ? 2 : 1);
                 int end = identEnd(compound, start);
-                String name = compound.substring(start, end).toLowerCase(java.util.Locale.ROOT);
+                String name = compound.substring(start, end).toLowerCase(Locale.ROOT);
                 if (PSEUDO_ELEMENTS.contains(name)) {
                     pseudoElement = true;
                 } else if (doubled || !PSEUDO_CLASSES.contains(name)) {

@@ -4,8 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.openhtmltopdf.simple.extend.XhtmlCssOnlyNamespaceHandler;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.Calendar;
@@ -78,11 +80,11 @@ class PdfRendererTest {
     }
 
     private static String defaultSheet() {
-        try (InputStream in = com.openhtmltopdf.simple.extend.XhtmlCssOnlyNamespaceHandler.class
+        try (InputStream in = XhtmlCssOnlyNamespaceHandler.class
                 .getResourceAsStream("/resources/css/XhtmlNamespaceHandler.css")) {
             return new String(in.readAllBytes(), StandardCharsets.UTF_8);
         } catch (IOException e) {
-            throw new java.io.UncheckedIOException(e);
+            throw new UncheckedIOException(e);
         }
     }
 }

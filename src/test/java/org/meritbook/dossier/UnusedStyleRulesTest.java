@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Set;
 import org.junit.jupiter.api.Test;
 
 class UnusedStyleRulesTest {
@@ -17,10 +18,10 @@ class UnusedStyleRulesTest {
 
     @Test
     void theVocabularyHoldsThePagesNamesClassesIdsAndAttributesLowerCased() {
-        assertTrue(TEXT_ONLY.elements().containsAll(java.util.Set.of("html", "body", "div", "table", "td", "title")));
-        assertEquals(java.util.Set.of("grid", "wide", "c-num"), TEXT_ONLY.classes());
-        assertEquals(java.util.Set.of("top"), TEXT_ONLY.ids());
-        assertTrue(TEXT_ONLY.attributes().containsAll(java.util.Set.of("class", "id", "dir")));
+        assertTrue(TEXT_ONLY.elements().containsAll(Set.of("html", "body", "div", "table", "td", "title")));
+        assertEquals(Set.of("grid", "wide", "c-num"), TEXT_ONLY.classes());
+        assertEquals(Set.of("top"), TEXT_ONLY.ids());
+        assertTrue(TEXT_ONLY.attributes().containsAll(Set.of("class", "id", "dir")));
         assertFalse(TEXT_ONLY.figures());
         assertTrue(WITH_FIGURE.figures());
     }
