@@ -285,11 +285,11 @@ final class UnusedStyleRules {
             if (Character.isWhitespace(css.charAt(i))) {
                 i++;
             } else if (css.startsWith("/*", i)) {
-                int close = css.indexOf("*/", i + 2);
+                int close = commentEnd(css, i);
                 if (close < 0) {
                     return -1;
                 }
-                i = close + 2;
+                i = close + 1;
             } else {
                 break;
             }
@@ -297,18 +297,16 @@ final class UnusedStyleRules {
         return i;
     }
 
-    /** The index of the '{' opening a rule's block; -1 when a ';', '}' or the end comes first, or a comment is inside. */
+    /** The index of the '{' opening a rule's block; -1 when a ';', '}', comment, escape or the end comes first. */
     private static int preludeEnd(String css, int from) {
-        char quote = 0;
         for (int i = from; i < css.length(); i++) {
             char c = css.charAt(i);
-            if (quote != 0) {
-                if (c == '\\') {
+            if (c == '"' || c == '\'') {
+                int close = stringEnd(css, i);
+                if (close < 0 || css.substring(i, close).indexOf('\\') >= 0) {
                     return -1;
                 }
-                quote = c == quote ? 0 : quote;
-            } else if (c == '"' || c == '\'') {
-                quote = c;
+                i = close;
             } else if (c == '{') {
                 return i;
             } else if (c == ';' || c == '}' || c == '\\' || css.startsWith("/*", i)) {
@@ -321,27 +319,15 @@ final class UnusedStyleRules {
     /** The index after the '}' that closes the block opened at {@code open}; -1 when it is not closed. */
     private static int blockEnd(String css, int open) {
         int depth = 0;
-        char quote = 0;
         for (int i = open; i < css.length(); i++) {
             char c = css.charAt(i);
-            if (quote != 0) {
-                if (c == '\\') {
-                    i++;
-                } else if (c == quote) {
-                    quote = 0;
-                } else if (c == '\n') {
-                    return -1; // an unclosed string: leave the sheet to the renderer's own recovery
-                }
-            } else if (c == '"' || c == '\'') {
-                quote = c;
-            } else if (c == '\\') {
-                i++;
-            } else if (css.startsWith("/*", i)) {
-                int close = css.indexOf("*/", i + 2);
-                if (close < 0) {
+            if (c == '"' || c == '\'' || css.startsWith("/*", i)) {
+                i = c == '/' ? commentEnd(css, i) : stringEnd(css, i);
+                if (i < 0) {
                     return -1;
                 }
-                i = close + 1;
+            } else if (c == '\\') {
+                i++;
             } else if (c == '{') {
                 depth++;
             } else if (c == '}') {
@@ -354,19 +340,15 @@ final class UnusedStyleRules {
         return -1;
     }
 
-    /** The end of an at-rule: after its ';' or its block. */
+    /** The end of an at-rule: after its ';' or its block; -1 when it does not end. */
     private static int atRuleEnd(String css, int at) {
-        char quote = 0;
         for (int i = at; i < css.length(); i++) {
             char c = css.charAt(i);
-            if (quote != 0) {
-                if (c == '\\') {
-                    i++;
-                } else if (c == quote) {
-                    quote = 0;
+            if (c == '"' || c == '\'' || css.startsWith("/*", i)) {
+                i = c == '/' ? commentEnd(css, i) : stringEnd(css, i);
+                if (i < 0) {
+                    return -1;
                 }
-            } else if (c == '"' || c == '\'') {
-                quote = c;
             } else if (c == ';') {
                 return i + 1;
             } else if (c == '{') {
@@ -376,5 +358,30 @@ final class UnusedStyleRules {
             }
         }
         return -1;
+    }
+
+    /**
+     * The index of the quote closing the string that opens at {@code open}; -1 when the line or the
+     * sheet ends first (an unclosed string is left to the renderer's own recovery).
+     */
+    private static int stringEnd(String css, int open) {
+        char quote = css.charAt(open);
+        for (int i = open + 1; i < css.length(); i++) {
+            char c = css.charAt(i);
+            if (c == '\\') {
+                i++;
+            } else if (c == quote) {
+                return i;
+            } else if (c == '\n') {
+                return -1;
+            }
+        }
+        return -1;
+    }
+
+    /** The index of the '/' ending the comment that opens at {@code open}; -1 when it is not closed. */
+    private static int commentEnd(String css, int open) {
+        int close = css.indexOf("*/", open + 2);
+        return close < 0 ? -1 : close + 1;
     }
 }

@@ -75,6 +75,13 @@ class UnusedStyleRulesTest {
     }
 
     @Test
+    void bracesAndSemicolonsInStringsAndCommentsDoNotEndARule() {
+        String css = "@import /* ; } */ url(\"a;b.css\");\ntd { content: \"a\\\"}\" /* } */ }\ninput { content: '}' }\n";
+        assertEquals("@import /* ; } */ url(\"a;b.css\");\ntd { content: \"a\\\"}\" /* } */ }\n",
+                UnusedStyleRules.prune(css, TEXT_ONLY));
+    }
+
+    @Test
     void aSheetThatDoesNotScanIsLeftToTheRenderersOwnRecovery() {
         for (String css : new String[] {"input { color: red", "input { content: \"open\n}", "/* open", "input, td /* x */ { }",
             "input; td { }", "} input { }", "input, td.\\31 x { color: red }"}) {
