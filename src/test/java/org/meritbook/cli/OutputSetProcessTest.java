@@ -212,7 +212,10 @@ class OutputSetProcessTest {
         assertEquals(0, last.exitValue(), Files.readString(log));
         assertOnlyCompleteSets(out.resolve("study"), false);
         assertTrue(Files.isDirectory(out.resolve("study/rev4")));
-        assertTrue(finished < KILLS / 2, "most runs were killed (" + finished + " finished)");
+        // The kills are spread over one measured run; later runs may well be faster (that one ran cold,
+        // or beside other work), so only ask that the kills did happen: even runs twice as fast as the
+        // measured one are killed 6 times in 20 with this seed (17 at the measured speed).
+        assertTrue(KILLS - finished >= KILLS / 4, "at least a quarter of the runs were killed (" + finished + " finished)");
     }
 
     /** Every entry is the lock, a complete revision set, or (before the next run) a leftover. */
