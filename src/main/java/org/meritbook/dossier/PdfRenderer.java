@@ -69,7 +69,7 @@ final class PdfRenderer {
         b.withDiagnosticConsumer(PdfRenderer::report);
         fonts.register(b);
         if (pruneStyles) {
-            b.useNamespaceHandler(new PrunedStyleHandler(StyleVocabulary.of(dom)));
+            b.useNamespaceHandler(new PrunedStyleHandler(dom));
         }
         b.withW3cDocument(dom, BASE_URI);
         try (PdfBoxRenderer renderer = b.buildPdfRenderer()) {

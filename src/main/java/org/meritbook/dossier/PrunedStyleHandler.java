@@ -10,6 +10,7 @@ import java.io.StringReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import org.w3c.dom.Document;
+import org.w3c.dom.NodeList;
 
 /**
  * The renderer's XHTML handling with the style sheets cut to one page DOM ({@link UnusedStyleRules}):
@@ -17,17 +18,43 @@ import org.w3c.dom.Document;
  * for one document, from its vocabulary before the figures go in.
  */
 final class PrunedStyleHandler extends XhtmlNamespaceHandler {
-    private final StyleVocabulary words;
+    /**
+     * The renderer orders rules by a key that keeps only five digits of a selector's position, so from
+     * 100,000 selectors on, two may share a key and one is lost; which two depends on the positions,
+     * which a cut moves. Each selector takes at least two characters ("a,"): sheets of fewer
+     * characters than this, all told, cannot get there, and larger ones are left whole.
+     */
+    static final int MAX_SHEET_CHARS = 190_000;
 
-    PrunedStyleHandler(StyleVocabulary words) {
-        this.words = words;
+    private final StyleVocabulary words;
+    private final boolean cuts;
+
+    /** For this page DOM, as it is before the figures' drawings go in. */
+    PrunedStyleHandler(Document dom) {
+        this.words = StyleVocabulary.of(dom);
+        String defaults = DefaultSheet.TEXT;
+        this.cuts = defaults != null && defaults.length() + styleChars(dom) < MAX_SHEET_CHARS;
+    }
+
+    /** Whether the sheets are cut at all (not when they are too large to cut safely). */
+    boolean cuts() {
+        return cuts;
+    }
+
+    private static long styleChars(Document dom) {
+        long chars = 0;
+        NodeList styles = dom.getElementsByTagNameNS("*", "style");
+        for (int i = 0; i < styles.getLength(); i++) {
+            chars += styles.item(i).getTextContent().length();
+        }
+        return chars;
     }
 
     /** As the default handler's (same address, origin and media), with the unused rules taken out. */
     @Override
     public StylesheetInfo getDefaultStylesheet(StylesheetFactory factory) {
         String text = DefaultSheet.TEXT;
-        if (text == null || !getPathToDefaultStylesheet().equals(DefaultSheet.PATH)) {
+        if (!cuts || !getPathToDefaultStylesheet().equals(DefaultSheet.PATH)) {
             return super.getDefaultStylesheet(factory); // the renderer reports its own missing sheet
         }
         StylesheetInfo info = new StylesheetInfo();
@@ -42,6 +69,9 @@ final class PrunedStyleHandler extends XhtmlNamespaceHandler {
     @Override
     public StylesheetInfo[] getStylesheets(Document doc) {
         StylesheetInfo[] sheets = super.getStylesheets(doc);
+        if (!cuts) {
+            return sheets;
+        }
         for (StylesheetInfo s : sheets) {
             if (s.isInline() && s.getContent() != null) {
                 s.setContent(UnusedStyleRules.prune(s.getContent(), words));

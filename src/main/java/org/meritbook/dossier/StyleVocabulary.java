@@ -63,16 +63,29 @@ record StyleVocabulary(Set<String> elements, Set<String> classes, Set<String> id
             attributes.add(name);
             attributes.add(lower(a.getName()));
             if (name.equals("class")) {
-                for (String c : a.getValue().trim().split("\\s+")) {
-                    classes.add(lower(c));
-                }
+                classTokens(a.getValue(), classes);
             } else if (name.equals("id")) {
+                ids.add(lower(a.getValue()));
                 ids.add(lower(a.getValue().trim()));
             }
         }
         for (Node c = e.getFirstChild(); c != null; c = c.getNextSibling()) {
             if (c.getNodeType() == Node.ELEMENT_NODE) {
                 collect((Element) c, elements, classes, ids, attributes, figures);
+            }
+        }
+    }
+
+    /** The class names as the renderer tells them apart: split where Character.isWhitespace says. */
+    private static void classTokens(String value, Set<String> classes) {
+        int start = -1;
+        for (int i = 0; i <= value.length(); i++) {
+            boolean space = i == value.length() || Character.isWhitespace(value.charAt(i));
+            if (space && start >= 0) {
+                classes.add(lower(value.substring(start, i)));
+                start = -1;
+            } else if (!space && start < 0) {
+                start = i;
             }
         }
     }

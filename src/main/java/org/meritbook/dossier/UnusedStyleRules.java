@@ -20,6 +20,8 @@ final class UnusedStyleRules {
     private static final Set<String> PSEUDO_CLASSES = Set.of("first-child", "last-child", "link", "visited", "hover",
             "active", "focus");
     private static final Set<String> PSEUDO_ELEMENTS = Set.of("before", "after");
+    /** From {@link #skip}: a token not read here, so the sheet is left as it is. */
+    private static final int FAIL = -2;
 
     private UnusedStyleRules() {
     }
@@ -69,16 +71,16 @@ final class UnusedStyleRules {
         List<String> selectors = splitOnCommas(prelude);
         List<String> kept = new ArrayList<>();
         for (String s : selectors) {
-            Boolean may = mayMatch(s.strip(), words);
+            Boolean may = mayMatch(cssStrip(s), words);
             if (may == null) {
-                return prelude.strip();
+                return cssStrip(prelude);
             }
             if (may) {
-                kept.add(s.strip());
+                kept.add(cssStrip(s));
             }
         }
         if (kept.size() == selectors.size()) {
-            return prelude.strip();
+            return cssStrip(prelude);
         }
         return kept.isEmpty() ? null : String.join(", ", kept);
     }
@@ -172,10 +174,9 @@ final class UnusedStyleRules {
         int n = compound.length();
         if (compound.charAt(0) == '*') {
             i = 1;
-        } else if (identStart(compound.charAt(0))) {
-            int end = identEnd(compound, 0);
-            may = words.mayHaveElement(compound.substring(0, end));
-            i = end;
+        } else if (nameEnd(compound, 0) > 0) {
+            i = nameEnd(compound, 0);
+            may = words.mayHaveElement(compound.substring(0, i));
         }
         boolean pseudoElement = false;
         while (i < n) {
@@ -184,7 +185,7 @@ final class UnusedStyleRules {
                 return null; // nothing may follow a pseudo-element
             }
             if (c == '.' || c == '#') {
-                int end = identEnd(compound, i + 1);
+                int end = nameEnd(compound, i + 1);
                 if (end == i + 1) {
                     return null;
                 }
@@ -202,7 +203,7 @@ final class UnusedStyleRules {
             } else if (c == ':') {
                 boolean doubled = i + 1 < n && compound.charAt(i + 1) == ':';
                 int start = i + (doubled ? 2 : 1);
-                int end = identEnd(compound, start);
+                int end = nameEnd(compound, start);
                 String name = compound.substring(start, end).toLowerCase(Locale.ROOT);
                 if (PSEUDO_ELEMENTS.contains(name)) {
                     pseudoElement = true;
@@ -219,16 +220,16 @@ final class UnusedStyleRules {
 
     /** {@code name}, {@code name=value} and the like; the value is not looked at. */
     private static Boolean attributeMayMatch(String inside, StyleVocabulary words) {
-        String s = inside.strip();
-        int end = s.isEmpty() || !identStart(s.charAt(0)) ? -1 : identEnd(s, 0);
-        if (end < 0) {
+        String s = cssStrip(inside);
+        int end = nameEnd(s, 0);
+        if (end == 0) {
             return null;
         }
-        String rest = s.substring(end).strip();
+        String rest = cssStrip(s.substring(end));
         if (!rest.isEmpty()) {
             int valueAt = rest.startsWith("=") ? 1 : rest.length() > 1 && "~|^$*".indexOf(rest.charAt(0)) >= 0
                     && rest.charAt(1) == '=' ? 2 : -1;
-            if (valueAt < 0 || !plainValue(rest.substring(valueAt).strip())) {
+            if (valueAt < 0 || !plainValue(cssStrip(rest.substring(valueAt)))) {
                 return null;
             }
         }
@@ -239,19 +240,46 @@ final class UnusedStyleRules {
         if (v.length() >= 2 && (v.charAt(0) == '"' || v.charAt(0) == '\'') && v.charAt(v.length() - 1) == v.charAt(0)) {
             return v.indexOf(v.charAt(0), 1) == v.length() - 1;
         }
-        return !v.isEmpty() && identEnd(v, 0) == v.length();
+        return !v.isEmpty() && nameEnd(v, 0) == v.length();
     }
 
-    private static boolean identStart(char c) {
-        return c >= 'a' && c <= 'z' || c >= 'A' && c <= 'Z' || c == '_' || c == '-';
-    }
-
-    private static int identEnd(String s, int from) {
-        int i = from;
-        while (i < s.length() && (identStart(s.charAt(i)) || s.charAt(i) >= '0' && s.charAt(i) <= '9')) {
+    /**
+     * The end of the plain CSS name at {@code from}: a letter or '_' (after at most one '-'), then
+     * letters, digits, '_' and '-'; {@code from} when none starts there. No escapes, nothing beyond
+     * ASCII, no leading digit or "--": what is not such a name is not read, so a selector the
+     * renderer would refuse (and with it its whole rule) is never taken out of a list.
+     */
+    private static int nameEnd(String s, int from) {
+        int i = from < s.length() && s.charAt(from) == '-' ? from + 1 : from;
+        if (i >= s.length() || !nameStart(s.charAt(i))) {
+            return from;
+        }
+        i++;
+        while (i < s.length() && (nameStart(s.charAt(i)) || s.charAt(i) >= '0' && s.charAt(i) <= '9' || s.charAt(i) == '-')) {
             i++;
         }
         return i;
+    }
+
+    private static boolean nameStart(char c) {
+        return c >= 'a' && c <= 'z' || c >= 'A' && c <= 'Z' || c == '_';
+    }
+
+    /** CSS's white space, and only that: to the renderer U+3000 and the like are name characters. */
+    private static boolean cssSpace(char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f';
+    }
+
+    private static String cssStrip(String s) {
+        int start = 0;
+        int end = s.length();
+        while (start < end && cssSpace(s.charAt(start))) {
+            start++;
+        }
+        while (end > start && cssSpace(s.charAt(end - 1))) {
+            end--;
+        }
+        return s.substring(start, end);
     }
 
     private static List<String> splitOnCommas(String prelude) {
@@ -282,7 +310,7 @@ final class UnusedStyleRules {
     private static int skipSpaceAndComments(String css, int from) {
         int i = from;
         while (i < css.length()) {
-            if (Character.isWhitespace(css.charAt(i))) {
+            if (cssSpace(css.charAt(i))) {
                 i++;
             } else if (css.startsWith("/*", i)) {
                 int close = commentEnd(css, i);
@@ -297,7 +325,10 @@ final class UnusedStyleRules {
         return i;
     }
 
-    /** The index of the '{' opening a rule's block; -1 when a ';', '}', comment, escape or the end comes first. */
+    /**
+     * The index of the '{' opening a rule's block; -1 when a ';', '}', comment, escape, url( or the
+     * end comes first.
+     */
     private static int preludeEnd(String css, int from) {
         for (int i = from; i < css.length(); i++) {
             char c = css.charAt(i);
@@ -309,25 +340,23 @@ final class UnusedStyleRules {
                 i = close;
             } else if (c == '{') {
                 return i;
-            } else if (c == ';' || c == '}' || c == '\\' || css.startsWith("/*", i)) {
+            } else if (c == ';' || c == '}' || c == '\\' || css.startsWith("/*", i) || urlAt(css, i)) {
                 return -1;
             }
         }
         return -1;
     }
 
-    /** The index after the '}' that closes the block opened at {@code open}; -1 when it is not closed. */
+    /** The index after the '}' that closes the block opened at {@code open}; -1 when it is not closed or not read. */
     private static int blockEnd(String css, int open) {
         int depth = 0;
         for (int i = open; i < css.length(); i++) {
             char c = css.charAt(i);
-            if (c == '"' || c == '\'' || css.startsWith("/*", i)) {
-                i = c == '/' ? commentEnd(css, i) : stringEnd(css, i);
-                if (i < 0) {
-                    return -1;
-                }
-            } else if (c == '\\') {
-                i++;
+            int skipTo = skip(css, i);
+            if (skipTo == FAIL) {
+                return -1;
+            } else if (skipTo >= 0) {
+                i = skipTo;
             } else if (c == '{') {
                 depth++;
             } else if (c == '}') {
@@ -340,15 +369,15 @@ final class UnusedStyleRules {
         return -1;
     }
 
-    /** The end of an at-rule: after its ';' or its block; -1 when it does not end. */
+    /** The end of an at-rule: after its ';' or its block; -1 when it does not end or is not read. */
     private static int atRuleEnd(String css, int at) {
         for (int i = at; i < css.length(); i++) {
             char c = css.charAt(i);
-            if (c == '"' || c == '\'' || css.startsWith("/*", i)) {
-                i = c == '/' ? commentEnd(css, i) : stringEnd(css, i);
-                if (i < 0) {
-                    return -1;
-                }
+            int skipTo = skip(css, i);
+            if (skipTo == FAIL) {
+                return -1;
+            } else if (skipTo >= 0) {
+                i = skipTo;
             } else if (c == ';') {
                 return i + 1;
             } else if (c == '{') {
@@ -358,6 +387,56 @@ final class UnusedStyleRules {
             }
         }
         return -1;
+    }
+
+    /**
+     * What the renderer's lexer reads as one token from {@code i}: a string, a comment or an unquoted
+     * url(...), whose last index is returned; -1 when none starts there; {@link #FAIL} for what is not
+     * read here (an escape, an unclosed string or comment, a url(...) holding quotes, '(' or spaces).
+     */
+    private static int skip(String css, int i) {
+        char c = css.charAt(i);
+        if (c == '"' || c == '\'') {
+            int close = stringEnd(css, i);
+            return close < 0 ? FAIL : close;
+        }
+        if (css.startsWith("/*", i)) {
+            int close = commentEnd(css, i);
+            return close < 0 ? FAIL : close;
+        }
+        if (c == '\\') {
+            return FAIL;
+        }
+        if (urlAt(css, i)) {
+            int j = i + 4;
+            while (j < css.length() && cssSpace(css.charAt(j))) {
+                j++;
+            }
+            if (j < css.length() && (css.charAt(j) == '"' || css.charAt(j) == '\'')) {
+                return i + 3; // url("..."): a function holding a string, read on as such
+            }
+            int close = css.indexOf(')', j);
+            if (close < 0) {
+                return FAIL;
+            }
+            String inside = cssStrip(css.substring(j, close));
+            for (int k = 0; k < inside.length(); k++) {
+                if ("\"'(\\".indexOf(inside.charAt(k)) >= 0 || cssSpace(inside.charAt(k))) {
+                    return FAIL;
+                }
+            }
+            return close;
+        }
+        return -1;
+    }
+
+    /** Whether an unquoted-or-quoted url( token starts at {@code i} (not the end of a longer name). */
+    private static boolean urlAt(String css, int i) {
+        if (!css.regionMatches(true, i, "url(", 0, 4)) {
+            return false;
+        }
+        char before = i == 0 ? ' ' : css.charAt(i - 1);
+        return !(nameStart(before) || before >= '0' && before <= '9' || before == '-' || before > 127);
     }
 
     /**
@@ -372,7 +451,7 @@ final class UnusedStyleRules {
                 i++;
             } else if (c == quote) {
                 return i;
-            } else if (c == '\n') {
+            } else if (c == '\n' || c == '\r' || c == '\f') {
                 return -1;
             }
         }

@@ -82,6 +82,43 @@ class UnusedStyleRulesTest {
     }
 
     @Test
+    void whatTheRenderersLexerReadsOtherwiseIsKeptOrLeftWhole() {
+        // Found by review, each confirmed against the renderer's PDF bytes (cut against whole sheets).
+        // A CDC between rules is skipped by the renderer: "-->" is no element name here.
+        assertEquals("--> td { color: red }\n", UnusedStyleRules.prune("--> td { color: red }", TEXT_ONLY));
+        // Selectors the renderer refuses, dropping their whole rule: the list stays whole.
+        for (String prelude : new String[] {".1x, td", "--q, td", "-1q, td", "#1x, td", "[data-q=1], td"}) {
+            assertEquals(prelude + " { color: red }\n", UnusedStyleRules.prune(prelude + " { color: red }", TEXT_ONLY), prelude);
+        }
+        // An unquoted url(...) is one token, whatever it holds.
+        assertEquals("td { color: red }\n", UnusedStyleRules.prune(".nope { background: url(a/*) } td { color: red }", TEXT_ONLY));
+        assertEquals("", UnusedStyleRules.prune(".nope { background: url(x}td{color:red;x:y) }", TEXT_ONLY));
+        String quoted = "td { background: url(a\"b) } input { }";
+        assertEquals(quoted, UnusedStyleRules.prune(quoted, TEXT_ONLY));
+        // Only CSS's own white space separates: U+3000 is a name character to the renderer.
+        assertEquals("\u3000td { color: red }\n", UnusedStyleRules.prune("p { margin: 0 }\u3000td { color: red }", TEXT_ONLY));
+        assertEquals("td\u3000 { color: red }\n", UnusedStyleRules.prune("td\u3000{ color: red }", TEXT_ONLY));
+        // A carriage return ends a string, as a line feed does.
+        String cr = ".nope { content: \"a\r} td { color: red } x\"; }";
+        assertEquals(cr, UnusedStyleRules.prune(cr, TEXT_ONLY));
+    }
+
+    @Test
+    void classNamesAreSplitWhereTheRendererSplitsThem() {
+        StyleVocabulary words = StyleVocabulary.of(PdfRenderer.parse(
+                "<html xmlns=\"http://www.w3.org/1999/xhtml\"><body><p class=\"a\u3000b\tc\">x</p></body></html>"));
+        assertEquals(Set.of("a", "b", "c"), words.classes());
+    }
+
+    @Test
+    void sheetsTooLargeForTheRenderersOrderKeysAreLeftWhole() {
+        String page = "<html xmlns=\"http://www.w3.org/1999/xhtml\"><head><style>%s</style></head><body><p>x</p></body></html>";
+        assertTrue(new PrunedStyleHandler(PdfRenderer.parse(String.format(page, "input { color: red }"))).cuts());
+        String huge = "#f," .repeat(PrunedStyleHandler.MAX_SHEET_CHARS / 3) + "#f { color: blue }";
+        assertFalse(new PrunedStyleHandler(PdfRenderer.parse(String.format(page, huge))).cuts());
+    }
+
+    @Test
     void aSheetThatDoesNotScanIsLeftToTheRenderersOwnRecovery() {
         for (String css : new String[] {"input { color: red", "input { content: \"open\n}", "/* open", "input, td /* x */ { }",
             "input; td { }", "} input { }", "input, td.\\31 x { color: red }"}) {
