@@ -80,6 +80,11 @@ final class PrunedStyleHandler extends XhtmlNamespaceHandler {
         return sheets;
     }
 
+    /** The renderer's default sheet as its jar holds it; null when the jar lacks it. */
+    static String defaultSheet() {
+        return DefaultSheet.TEXT;
+    }
+
     /** The renderer's default sheet, read once from its jar; null when the jar lacks it. */
     private static final class DefaultSheet {
         static final String PATH = "/resources/css/XhtmlNamespaceHandler.css";

@@ -39,53 +39,55 @@ record StyleVocabulary(Set<String> elements, Set<String> classes, Set<String> id
 
     /** The vocabulary of a page DOM as it is now (before the figures' drawings go in). */
     static StyleVocabulary of(Document dom) {
-        Set<String> elements = new HashSet<>();
-        Set<String> classes = new HashSet<>();
-        Set<String> ids = new HashSet<>();
-        Set<String> attributes = new HashSet<>();
-        boolean[] figures = {false};
-        collect(dom.getDocumentElement(), elements, classes, ids, attributes, figures);
-        return new StyleVocabulary(elements, classes, ids, attributes, figures[0]);
+        Collector c = new Collector();
+        c.collect(dom.getDocumentElement());
+        return new StyleVocabulary(c.elements, c.classes, c.ids, c.attributes, c.figures);
     }
 
-    private static void collect(Element e, Set<String> elements, Set<String> classes, Set<String> ids,
-                                Set<String> attributes, boolean[] figures) {
-        String local = lower(e.getLocalName() != null ? e.getLocalName() : e.getNodeName());
-        elements.add(local);
-        elements.add(lower(e.getNodeName()));
-        if (local.equals("svg") || FigureArt.SVG_NS.equals(e.getNamespaceURI())) {
-            figures[0] = true;
-        }
-        NamedNodeMap attrs = e.getAttributes();
-        for (int i = 0; i < attrs.getLength(); i++) {
-            Attr a = (Attr) attrs.item(i);
-            String name = lower(a.getLocalName() != null ? a.getLocalName() : a.getName());
-            attributes.add(name);
-            attributes.add(lower(a.getName()));
-            if (name.equals("class")) {
-                classTokens(a.getValue(), classes);
-            } else if (name.equals("id")) {
-                ids.add(lower(a.getValue()));
-                ids.add(lower(a.getValue().trim()));
-            }
-        }
-        for (Node c = e.getFirstChild(); c != null; c = c.getNextSibling()) {
-            if (c.getNodeType() == Node.ELEMENT_NODE) {
-                collect((Element) c, elements, classes, ids, attributes, figures);
-            }
-        }
-    }
+    /** One walk over the elements, gathering names as they are and lower-cased. */
+    private static final class Collector {
+        final Set<String> elements = new HashSet<>();
+        final Set<String> classes = new HashSet<>();
+        final Set<String> ids = new HashSet<>();
+        final Set<String> attributes = new HashSet<>();
+        boolean figures;
 
-    /** The class names as the renderer tells them apart: split where Character.isWhitespace says. */
-    private static void classTokens(String value, Set<String> classes) {
-        int start = -1;
-        for (int i = 0; i <= value.length(); i++) {
-            boolean space = i == value.length() || Character.isWhitespace(value.charAt(i));
-            if (space && start >= 0) {
-                classes.add(lower(value.substring(start, i)));
-                start = -1;
-            } else if (!space && start < 0) {
-                start = i;
+        void collect(Element e) {
+            String local = lower(e.getLocalName() != null ? e.getLocalName() : e.getNodeName());
+            elements.add(local);
+            elements.add(lower(e.getNodeName()));
+            figures |= local.equals("svg") || FigureArt.SVG_NS.equals(e.getNamespaceURI());
+            NamedNodeMap attrs = e.getAttributes();
+            for (int i = 0; i < attrs.getLength(); i++) {
+                Attr a = (Attr) attrs.item(i);
+                String name = lower(a.getLocalName() != null ? a.getLocalName() : a.getName());
+                attributes.add(name);
+                attributes.add(lower(a.getName()));
+                if (name.equals("class")) {
+                    classTokens(a.getValue());
+                } else if (name.equals("id")) {
+                    ids.add(lower(a.getValue()));
+                    ids.add(lower(a.getValue().trim()));
+                }
+            }
+            for (Node c = e.getFirstChild(); c != null; c = c.getNextSibling()) {
+                if (c.getNodeType() == Node.ELEMENT_NODE) {
+                    collect((Element) c);
+                }
+            }
+        }
+
+        /** The class names as the renderer tells them apart: split where Character.isWhitespace says. */
+        private void classTokens(String value) {
+            int start = -1;
+            for (int i = 0; i <= value.length(); i++) {
+                boolean space = i == value.length() || Character.isWhitespace(value.charAt(i));
+                if (space && start >= 0) {
+                    classes.add(lower(value.substring(start, i)));
+                    start = -1;
+                } else if (!space && start < 0) {
+                    start = i;
+                }
             }
         }
     }

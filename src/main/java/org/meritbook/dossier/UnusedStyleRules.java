@@ -22,6 +22,8 @@ final class UnusedStyleRules {
     private static final Set<String> PSEUDO_ELEMENTS = Set.of("before", "after");
     /** From {@link #skip}: a token not read here, so the sheet is left as it is. */
     private static final int FAIL = -2;
+    /** What may stand between two compound selectors: white space, '>' and '+'. */
+    private static final String COMBINATOR = " \t\n\r\f>+";
 
     private UnusedStyleRules() {
     }
@@ -71,12 +73,13 @@ final class UnusedStyleRules {
         List<String> selectors = splitOnCommas(prelude);
         List<String> kept = new ArrayList<>();
         for (String s : selectors) {
-            Boolean may = mayMatch(cssStrip(s), words);
+            String selector = cssStrip(s);
+            Boolean may = mayMatch(selector, words);
             if (may == null) {
                 return cssStrip(prelude);
             }
             if (may) {
-                kept.add(cssStrip(s));
+                kept.add(selector);
             }
         }
         if (kept.size() == selectors.size()) {
@@ -96,12 +99,12 @@ final class UnusedStyleRules {
         boolean expectCompound = true;
         while (i < n) {
             char c = selector.charAt(i);
-            if (c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' || c == '>' || c == '+') {
-                if (expectCompound && (c == '>' || c == '+') || i == 0) {
+            if (COMBINATOR.indexOf(c) >= 0) {
+                if (expectCompound) {
                     return null; // a combinator with nothing before it
                 }
                 boolean sawSymbol = false;
-                while (i < n && " \t\n\r\f>+".indexOf(selector.charAt(i)) >= 0) {
+                while (i < n && COMBINATOR.indexOf(selector.charAt(i)) >= 0) {
                     if (selector.charAt(i) == '>' || selector.charAt(i) == '+') {
                         if (sawSymbol) {
                             return null;
@@ -136,7 +139,7 @@ final class UnusedStyleRules {
 
     private static int compoundEnd(String s, int from) {
         int i = from;
-        while (i < s.length() && " \t\n\r\f>+".indexOf(s.charAt(i)) < 0) {
+        while (i < s.length() && COMBINATOR.indexOf(s.charAt(i)) < 0) {
             if (s.charAt(i) == '[') {
                 int close = attributeEnd(s, i);
                 if (close < 0) {
@@ -150,13 +153,16 @@ final class UnusedStyleRules {
         return i;
     }
 
-    /** The index after the ']' closing the attribute selector at {@code open}, or -1. */
+    /**
+     * The index after the ']' closing the attribute selector at {@code open}, or -1. A prelude holds
+     * no backslash ({@link #preludeEnd}), so a string here ends at its next quote.
+     */
     private static int attributeEnd(String s, int open) {
         for (int i = open + 1; i < s.length(); i++) {
             char c = s.charAt(i);
             if (c == '"' || c == '\'') {
                 int close = s.indexOf(c, i + 1);
-                if (close < 0 || s.substring(i + 1, close).indexOf('\\') >= 0) {
+                if (close < 0) {
                     return -1;
                 }
                 i = close;
@@ -255,7 +261,7 @@ final class UnusedStyleRules {
             return from;
         }
         i++;
-        while (i < s.length() && (nameStart(s.charAt(i)) || s.charAt(i) >= '0' && s.charAt(i) <= '9' || s.charAt(i) == '-')) {
+        while (i < s.length() && nameChar(s.charAt(i))) {
             i++;
         }
         return i;
@@ -263,6 +269,10 @@ final class UnusedStyleRules {
 
     private static boolean nameStart(char c) {
         return c >= 'a' && c <= 'z' || c >= 'A' && c <= 'Z' || c == '_';
+    }
+
+    private static boolean nameChar(char c) {
+        return nameStart(c) || c >= '0' && c <= '9' || c == '-';
     }
 
     /** CSS's white space, and only that: to the renderer U+3000 and the like are name characters. */
@@ -350,20 +360,10 @@ final class UnusedStyleRules {
     /** The index after the '}' that closes the block opened at {@code open}; -1 when it is not closed or not read. */
     private static int blockEnd(String css, int open) {
         int depth = 0;
-        for (int i = open; i < css.length(); i++) {
-            char c = css.charAt(i);
-            int skipTo = skip(css, i);
-            if (skipTo == FAIL) {
-                return -1;
-            } else if (skipTo >= 0) {
-                i = skipTo;
-            } else if (c == '{') {
-                depth++;
-            } else if (c == '}') {
-                depth--;
-                if (depth == 0) {
-                    return i + 1;
-                }
+        for (int i = scanTo(css, open, "{}"); i >= 0; i = scanTo(css, i + 1, "{}")) {
+            depth += css.charAt(i) == '{' ? 1 : -1;
+            if (depth == 0) {
+                return i + 1;
             }
         }
         return -1;
@@ -371,19 +371,26 @@ final class UnusedStyleRules {
 
     /** The end of an at-rule: after its ';' or its block; -1 when it does not end or is not read. */
     private static int atRuleEnd(String css, int at) {
-        for (int i = at; i < css.length(); i++) {
-            char c = css.charAt(i);
+        int i = scanTo(css, at, ";{}");
+        if (i < 0 || css.charAt(i) == '}') {
+            return -1;
+        }
+        return css.charAt(i) == ';' ? i + 1 : blockEnd(css, i);
+    }
+
+    /**
+     * The index of the first of {@code stops} from {@code from} that is not inside a string, comment or
+     * url(...); -1 when the sheet ends first or holds a token not read here ({@link #skip}).
+     */
+    private static int scanTo(String css, int from, String stops) {
+        for (int i = from; i < css.length(); i++) {
             int skipTo = skip(css, i);
             if (skipTo == FAIL) {
                 return -1;
             } else if (skipTo >= 0) {
                 i = skipTo;
-            } else if (c == ';') {
-                return i + 1;
-            } else if (c == '{') {
-                return blockEnd(css, i);
-            } else if (c == '}') {
-                return -1;
+            } else if (stops.indexOf(css.charAt(i)) >= 0) {
+                return i;
             }
         }
         return -1;
@@ -436,7 +443,7 @@ final class UnusedStyleRules {
             return false;
         }
         char before = i == 0 ? ' ' : css.charAt(i - 1);
-        return !(nameStart(before) || before >= '0' && before <= '9' || before == '-' || before > 127);
+        return !(nameChar(before) || before > 127);
     }
 
     /**

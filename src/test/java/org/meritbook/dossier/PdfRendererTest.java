@@ -4,11 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import com.openhtmltopdf.simple.extend.XhtmlCssOnlyNamespaceHandler;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.Calendar;
 import java.util.GregorianCalendar;
@@ -51,7 +46,7 @@ class PdfRendererTest {
         StyleVocabulary words = StyleVocabulary.of(PdfRenderer.parse(String.format(PAGE, LAB_CSS, "")));
         assertEquals(".grid td.c-num { text-align: right }", UnusedStyleRules.prune(
                 ".grid td.c-num { text-align: right }\n.steps .src { color: #55616B }\ninput, form { margin: 4mm }", words).strip());
-        String defaults = defaultSheet();
+        String defaults = PrunedStyleHandler.defaultSheet();
         String cut = UnusedStyleRules.prune(defaults, words);
         assertTrue(cut.length() < defaults.length() * 3 / 4, cut);
         assertTrue(cut.contains("blockquote") && !cut.contains("textarea"), cut);
@@ -77,14 +72,5 @@ class PdfRendererTest {
         PdfAFinisher.Metadata meta = new PdfAFinisher.Metadata("t", "test", "test", "test", date, new byte[16]);
         return new PdfAFinisher().finish(new PdfRenderer(fonts, pruneStyles).render(String.format(PAGE, css, placeholder.html()),
                 art), meta, List.of());
-    }
-
-    private static String defaultSheet() {
-        try (InputStream in = XhtmlCssOnlyNamespaceHandler.class
-                .getResourceAsStream("/resources/css/XhtmlNamespaceHandler.css")) {
-            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
     }
 }
