@@ -8,8 +8,9 @@ import java.util.OptionalDouble;
 /**
  * The nominal (known) value behind each member of a section's per-member quantities, by the
  * member's label (the part after {@code :} in {@code deviation_percent:C5}): a calibration standard's
- * concentration, a QC sample's known value, the mean known value of an accuracy level. Acceptance
- * rules read it to set the lowest level (the LLOQ) apart, never the trail's input names.
+ * concentration, a QC sample's known value. The calibration's deviation rule reads it to set the
+ * lowest standard (the LLOQ) apart, and an unknowns section to find its QCs at that standard
+ * ({@link LloqLevels}), never from the trail's input names.
  *
  * @param byLabel nominal value by member label, in the order recorded
  */

@@ -106,13 +106,18 @@ public final class SectionBuilder {
 
     /**
      * The nominal value behind the members labelled {@code label} ({@code deviation_percent:<label>}),
-     * exported as {@link NominalValues} for the rules that set the lowest level apart.
+     * exported as {@link NominalValues} for the rules that set the lowest calibration standard apart.
      */
     public SectionBuilder nominal(String label, double value) {
         if (Double.isFinite(value)) {
             nominals.put(label, value);
         }
         return this;
+    }
+
+    /** The nominal values recorded so far by member label ({@link #nominal}), in the order recorded. */
+    public Map<String, Double> nominals() {
+        return java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(nominals));
     }
 
     /** A typed result later cells may use. */

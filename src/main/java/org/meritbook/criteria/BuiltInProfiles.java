@@ -81,7 +81,7 @@ public final class BuiltInProfiles {
 
     /**
      * Bioanalysis after ICH M10: calibration standards, QC samples, and the accuracy and precision of
-     * each QC level, ±15 % (20 % at the LLOQ, the level with the lowest nominal value of the section).
+     * each QC level, ±15 % (20 % at the LLOQ, as the section identifies it: {@link LevelRule}).
      */
     private static AcceptanceProfile bioanalysisM10() {
         String m10 = "ICH M10 (2022), sections on calibration curve and accuracy and precision (from memory); "

@@ -3,21 +3,23 @@ package org.meritbook.criteria;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
-import java.util.OptionalDouble;
+import org.meritbook.analysis.LloqLevel;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Verdict;
 import org.meritbook.study.AnalysisKind;
 
 /**
- * A limit on every level (or QC sample) of a family, with its own limit at the LLOQ: the level with
- * the lowest nominal value in the section ({@link NominalLevels}). ICH M10 writes its accuracy and
- * precision criteria this way (±15 %, ±20 % at the LLOQ). {@code magnitude} judges |value| (a %
- * error or deviation "within ±15 %"), otherwise the value (a CV "≤ 15 %"); the limit itself is
- * within. Each member gets one verdict; the family's overall value (the name without a level) is
- * judged only when the section reports no level, since the limits are per level. A section with a
- * single level has no LLOQ set apart, and a section whose levels give no nominal value is judged
- * by the general limit throughout (the stricter one), each said in the verdict.
+ * A limit on every level (or QC sample) of a family, with its own limit at the LLOQ. ICH M10 writes
+ * its accuracy and precision criteria this way (±15 %, ±20 % at the LLOQ). The LLOQ members are the
+ * ones the section identified ({@link LloqLevel}: named in the cell, or QCs at the calibration's
+ * lowest standard); a section that identified none is judged by the general limit (the stricter one)
+ * throughout, and a verdict the LLOQ's limit would have turned says so: the lowest level of a study is
+ * often a low QC, not the LLOQ.
+ * {@code magnitude} judges |value| (a % error or deviation "within ±15 %"), otherwise the value (a CV
+ * "≤ 15 %"); the limit itself is within. Each member gets one verdict; the family's overall value (the
+ * name without a level) is judged only when the section reports no level, since the limits are per
+ * level.
  *
  * @param kind           the analysis kind judged
  * @param characteristic what is judged, e.g. "Accuracy"
@@ -30,6 +32,10 @@ import org.meritbook.study.AnalysisKind;
  */
 public record LevelRule(AnalysisKind kind, String characteristic, String quantity, boolean magnitude, double limit,
                         double lowestLimit, String symbol, String source) implements Rule {
+    /** Told where the LLOQ's limit would have passed a value the general one fails: only there can it matter. */
+    private static final String NOT_IDENTIFIED =
+            "; LLOQ not identified (name it with 'lloq-level:' in the cell), general limit applied";
+
     public LevelRule {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(quantity, "quantity");
@@ -43,7 +49,7 @@ public record LevelRule(AnalysisKind kind, String characteristic, String quantit
         String unit = quantity.endsWith("_percent") ? " %" : "";
         String text = symbol + (magnitude ? " within " : " ") + bound(limit) + unit;
         return lowestLimit == limit ? text + " at each level"
-                : text + " (" + bound(lowestLimit) + unit + " at the LLOQ, the lowest level)";
+                : text + " (" + bound(lowestLimit) + unit + " at the LLOQ)";
     }
 
     private String bound(double l) {
@@ -64,21 +70,21 @@ public record LevelRule(AnalysisKind kind, String characteristic, String quantit
             }
             return List.of(verdict(overall, characteristic, limit, comparison, ""));
         }
-        List<OptionalDouble> nominal = members.stream().map(q -> NominalLevels.of(section, q)).toList();
-        boolean known = nominal.stream().allMatch(OptionalDouble::isPresent);
-        double lowest = known ? nominal.stream().mapToDouble(OptionalDouble::getAsDouble).min().orElseThrow() : 0;
-        boolean setApart = known && nominal.stream().mapToDouble(OptionalDouble::getAsDouble).distinct().count() > 1;
-        String note = known ? setApart ? "" : "; one level only, no LLOQ set apart"
-                : "; LLOQ not identified (no nominal value for every level), general limit applied";
+        LloqLevel lloq = section.export(LloqLevel.class).orElse(null);
         List<Verdict> verdicts = new ArrayList<>();
-        for (int i = 0; i < members.size(); i++) {
-            Quantity q = members.get(i);
-            boolean lloq = setApart && nominal.get(i).getAsDouble() == lowest;
+        for (Quantity q : members) {
             String member = q.name().substring(q.name().indexOf(':') + 1);
-            verdicts.add(verdict(q, characteristic + " (" + member + (lloq ? ", LLOQ" : "") + ")",
-                    lloq ? lowestLimit : limit, comparison, note));
+            boolean atLloq = lloq != null && lloq.contains(member);
+            String what = characteristic + " (" + member + (atLloq && !member.equalsIgnoreCase("LLOQ") ? ", LLOQ" : "") + ")";
+            verdicts.add(verdict(q, what, atLloq ? lowestLimit : limit, comparison,
+                    lloq == null && decidedByTheLloq(q, comparison) ? NOT_IDENTIFIED : ""));
         }
         return verdicts;
+    }
+
+    private boolean decidedByTheLloq(Quantity q, Comparison comparison) {
+        double judged = magnitude ? Math.abs(q.value()) : q.value();
+        return comparison.passes(judged, lowestLimit, false) != comparison.passes(judged, limit, false);
     }
 
     private Verdict verdict(Quantity q, String what, double applied, Comparison comparison, String note) {

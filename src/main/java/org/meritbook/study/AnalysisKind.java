@@ -30,12 +30,12 @@ public enum AnalysisKind {
             List.of("lod", "loq", "critical_value", "lowest_standard", "reporting_limit")),
     ACCURACY("accuracy",
             List.of("data", "measured", "known"),
-            List.of("level", "unspiked", "calibration", "exclude", "id", "role", "censored", "formulas", "hidden", "merged"),
+            List.of("level", "unspiked", "calibration", "lloq-level", "exclude", "id", "role", "censored", "formulas", "hidden", "merged"),
             List.of("recovery_percent", "error_percent", "recovery_ci_low", "recovery_ci_high", "bias_p", "n",
                     "recovery_sd", "row_recovery_percent", "read_back")),
     PRECISION("precision",
             List.of("data", "value"),
-            List.of("group", "level", "horwitz", "exclude", "id", "role", "censored", "formulas", "hidden", "merged"),
+            List.of("group", "level", "horwitz", "lloq-level", "exclude", "id", "role", "censored", "formulas", "hidden", "merged"),
             List.of("n", "mean", "sd", "cv_percent", "anova_f", "anova_p", "repeatability_sd", "between_sd", "intermediate_sd",
                     "repeatability_cv_percent", "intermediate_cv_percent", "repeatability_limit", "intermediate_limit",
                     "grubbs_g", "grubbs_means_g", "cochran_c", "horwitz_ratio")),
@@ -46,7 +46,7 @@ public enum AnalysisKind {
     UNKNOWNS("unknowns",
             List.of("calibration", "data", "y", "sample"),
             List.of("replicates", "mass", "volume", "dilution", "known", "result-unit", "limits", "internal-standard",
-                    "exclude", "id", "role", "censored", "formulas", "hidden", "merged"),
+                    "lloq-level", "exclude", "id", "role", "censored", "formulas", "hidden", "merged"),
             List.of("x0", "x0_se", "x0_ci_low", "x0_ci_high", "content", "content_se", "qc_deviation_percent"));
 
     private final String keyword;

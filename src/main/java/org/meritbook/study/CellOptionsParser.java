@@ -93,6 +93,10 @@ final class CellOptionsParser {
         if (kind == AnalysisKind.CALIBRATION && (name.equals("y") || name.equals("internal-standard")) && !value.isScalar()) {
             return checkColumnList(name, value);
         }
+        // The LLOQ level, or a list of them when several QC samples stand at the LLOQ.
+        if (name.equals(OptionRules.LLOQ_LEVEL) && !value.isScalar()) {
+            return checkLevelList(name, value);
+        }
         OptionRules.DataSet set = OptionRules.DATA_SETS.get(name);
         if (set != null) {
             return checkDataSet(name, set, value);
@@ -137,6 +141,16 @@ final class CellOptionsParser {
             problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "one column or a list of columns for '" + name + "'",
                     Problems.describe(value), "Write '" + name + ": Area' or, for replicates in columns, '"
                             + name + ": [B, C, D]'.");
+            return false;
+        }
+        return true;
+    }
+
+    private boolean checkLevelList(String name, OptionValue value) {
+        if (!(value.value() instanceof List<?>) || value.list().isEmpty()
+                || value.list().stream().anyMatch(v -> !v.isScalar() || v.text().isBlank())) {
+            problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "one level or a list of levels for '" + name + "'",
+                    Problems.describe(value), "Write '" + name + ": QC-LLOQ' or '" + name + ": [LLOQ-1, LLOQ-2]'.");
             return false;
         }
         return true;

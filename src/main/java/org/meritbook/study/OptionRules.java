@@ -42,6 +42,8 @@ final class OptionRules {
             List.of("blank", "response-sd", "mdl", "lob-lod", "prediction-band", "signal-noise");
 
     static final String EXCLUDE = "exclude";
+    /** accuracy, precision, unknowns: the level (or QC samples) at the LLOQ, one or a list. */
+    static final String LLOQ_LEVEL = "lloq-level";
     static final String ID = "id";
     static final String DATA = "data";
     static final String CALIBRATION = "calibration";

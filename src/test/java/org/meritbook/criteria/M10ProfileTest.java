@@ -12,6 +12,8 @@ import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meritbook.analysis.DataTable;
+import org.meritbook.analysis.Exported;
+import org.meritbook.analysis.LloqLevel;
 import org.meritbook.analysis.NominalValues;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
@@ -56,8 +58,12 @@ class M10ProfileTest {
                 List.of(new NominalValues(nominals)));
     }
 
-    /** An unknowns section of QC samples: name → {known ng/mL, deviation %}; the known value is a step input. */
-    private static SectionResult qcs(Map<String, double[]> samples) {
+    /**
+     * An unknowns section of QC samples: name → {known ng/mL, deviation %}; the known value is a step input.
+     * The samples named in {@code atLloq} are the ones the section identified at the LLOQ; none named: the
+     * section identified no LLOQ.
+     */
+    private static SectionResult qcs(Map<String, double[]> samples, String... atLloq) {
         List<Quantity> quantities = new ArrayList<>();
         List<Step> steps = new ArrayList<>();
         int row = 2;
@@ -73,7 +79,15 @@ class M10ProfileTest {
                     StepInput.number("known", known, "ng/mL", "Samples!D" + row++)), dev, "%", null));
         }
         return new SectionResult("u", AnalysisKind.UNKNOWNS, "QC samples", List.of(), quantities, steps,
-                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of(), List.of(new NominalValues(nominals)));
+                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of(), exports(nominals, atLloq));
+    }
+
+    private static List<Exported> exports(Map<String, Double> nominals, String... atLloq) {
+        List<Exported> exports = new ArrayList<>(List.of(new NominalValues(nominals)));
+        if (atLloq.length > 0) {
+            exports.add(new LloqLevel(List.of(atLloq), "named in the test"));
+        }
+        return exports;
     }
 
     private static List<Verdict> judged(SectionResult s) {
@@ -89,7 +103,7 @@ class M10ProfileTest {
 
     @Test
     void qcSamplesAtTheBoundaries() {
-        // LLOQ = 1 ng/mL, the lowest known value of the section; the others are judged at ±15 %.
+        // LLOQ = 1 ng/mL, the QCs the section identified there; the others are judged at ±15 %.
         Map<String, double[]> samples = new java.util.LinkedHashMap<>();
         samples.put("LLOQ-1", new double[] {1, 20.0});
         samples.put("LLOQ-2", new double[] {1, -20.1});
@@ -97,13 +111,30 @@ class M10ProfileTest {
         samples.put("L-2", new double[] {3, -15.0});
         samples.put("M-1", new double[] {50, 15.1});
         samples.put("H-1", new double[] {150, 20.0});
-        List<Verdict> v = judged(qcs(samples));
+        List<Verdict> v = judged(qcs(samples, "LLOQ-1", "LLOQ-2"));
         assertEquals(List.of(PASS, FAIL, PASS, PASS, FAIL, FAIL), outcomes(v), v.toString());
         assertEquals("QC samples (LLOQ-1, LLOQ)", v.get(0).characteristic());
         assertEquals("QC samples (L-1)", v.get(2).characteristic());
         assertEquals("QC deviation = −20.1 %, limit ±20 %", v.get(1).reason());
         assertEquals("QC deviation = 15.1 %, limit ±15 %", v.get(4).reason());
-        assertEquals("QC deviation within ±15 % (±20 % at the LLOQ, the lowest level)", v.get(0).rule());
+        assertEquals("QC deviation within ±15 % (±20 % at the LLOQ)", v.get(0).rule());
+    }
+
+    @Test
+    void theLowestQcIsNotTheLloqUnlessTheSectionIdentifiesIt() {
+        // A run's low QC sits at about three times the LLOQ and is held to ±15 % (ICH M10, from memory):
+        // without an identified LLOQ, +18 % at the lowest QC fails, and each verdict says why.
+        Map<String, double[]> samples = new java.util.LinkedHashMap<>();
+        samples.put("L-1", new double[] {3, 18.0});
+        samples.put("M-1", new double[] {50, 5.0});
+        List<Verdict> v = judged(qcs(samples));
+        assertEquals(List.of(FAIL, PASS), outcomes(v), v.toString());
+        assertEquals("QC samples (L-1)", v.get(0).characteristic());
+        assertEquals("QC deviation = 18 %, limit ±15 %; LLOQ not identified (name it with 'lloq-level:' in the cell), "
+                + "general limit applied", v.get(0).reason());
+        assertEquals("QC deviation = 5 %, limit ±15 %", v.get(1).reason(), "told only where the LLOQ's limit decides");
+        // identified, the same QC is judged at ±20 %
+        assertEquals(List.of(PASS, PASS), outcomes(judged(qcs(samples, "L-1"))));
     }
 
     @Test
@@ -144,10 +175,10 @@ class M10ProfileTest {
 
     /**
      * An accuracy section whose levels are text labels: error_percent:&lt;level&gt; → recovery_percent:&lt;level&gt;
-     * → row recoveries with their known value k, as AccuracyAnalysis records them, so the LLOQ is found
-     * through the section's nominal values, as AccuracyAnalysis exports them.
+     * → row recoveries with their known value k, as AccuracyAnalysis records them; {@code lloq} is the level
+     * the section identified at the LLOQ ({@code lloq-level:}).
      */
-    private static SectionResult accuracy(String[] levels, double[] known, double[] error) {
+    private static SectionResult accuracy(String[] levels, double[] known, double[] error, String lloq) {
         List<Quantity> quantities = new ArrayList<>();
         List<Step> steps = new ArrayList<>();
         Map<String, Double> nominals = new java.util.LinkedHashMap<>();
@@ -175,25 +206,25 @@ class M10ProfileTest {
         steps.add(new Step("a.error_percent", "error", "mean(R) − 100", List.of(), 30, "%", null));
         quantities.add(new Quantity("error_percent", "overall", 30, "%", "a.error_percent", null, false));
         return new SectionResult("a", AnalysisKind.ACCURACY, "Accuracy", List.of(), quantities, steps,
-                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of(), List.of(new NominalValues(nominals)));
+                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of(), exports(nominals, lloq));
     }
 
     @Test
-    void accuracyPerLevelWithTheLloqFoundThroughTheTrail() {
-        // The LLOQ label is listed last: the set-apart level is the lowest nominal value, not the first label.
+    void accuracyPerLevelWithTheLevelTheSectionIdentifiedAtTheLloq() {
+        // The LLOQ level is listed last: the set-apart level is the identified one, not the first label.
         SectionResult s = accuracy(new String[] {"QC-H", "QC-M", "QC-L", "QC-A"}, new double[] {150, 50, 3, 1},
-                new double[] {-15.0, 15.1, 14.9, 20.0});
+                new double[] {-15.0, 15.1, 14.9, 20.0}, "QC-A");
         List<Verdict> v = judged(s).stream().filter(x -> x.quantity().startsWith("error_percent")).toList();
         assertEquals(List.of("error_percent:QC-H", "error_percent:QC-M", "error_percent:QC-L", "error_percent:QC-A"),
                 v.stream().map(Verdict::quantity).toList(), "per level only: the overall 30 % is not an M10 criterion");
         assertEquals(List.of(PASS, FAIL, PASS, PASS), outcomes(v));
         assertEquals("Accuracy (QC-A, LLOQ)", v.get(3).characteristic());
-        SectionResult over = accuracy(new String[] {"QC-H", "QC-A"}, new double[] {150, 1}, new double[] {0, -20.1});
+        SectionResult over = accuracy(new String[] {"QC-H", "QC-A"}, new double[] {150, 1}, new double[] {0, -20.1}, "QC-A");
         assertEquals(FAIL, judged(over).get(1).outcome());
     }
 
     @Test
-    void precisionPerLevelWithoutNominalValuesSetsApartTheLevelWithTheLowestMean() {
+    void precisionPerLevelSetsApartTheIdentifiedLevelAndNeverGuessesFromTheMeans() {
         List<Quantity> qs = new ArrayList<>();
         List<Step> steps = new ArrayList<>();
         Object[][] levels = {{"QC-H", 148.0, 15.0}, {"QC-L", 3.1, 15.1}, {"QC-A", 1.02, 20.0}};
@@ -207,21 +238,30 @@ class M10ProfileTest {
             }
         }
         SectionResult p = new SectionResult("p", AnalysisKind.PRECISION, "Precision", List.of(), qs, steps,
-                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of());
+                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of(), List.of(
+                        new LloqLevel(List.of("QC-A"), "named in the test")));
         List<Verdict> v = judged(p);
         // three rules (within run, between runs, all results), three levels each
         assertEquals(9, v.size(), v.toString());
         assertEquals(List.of(PASS, FAIL, PASS), outcomes(v.subList(0, 3)));
         assertEquals("Precision, within run (QC-A, LLOQ)", v.get(2).characteristic());
         assertEquals("within-run CV = 20 %, limit ≤ 20 %", v.get(2).reason());
+        // not identified: the level with the lowest mean is not taken for the LLOQ
+        SectionResult unnamed = new SectionResult("p", AnalysisKind.PRECISION, "Precision", List.of(), qs, steps,
+                new DataTable(List.of(), List.of()), List.of(), List.of(), List.of());
+        List<Verdict> general = judged(unnamed);
+        assertEquals(List.of(PASS, FAIL, FAIL), outcomes(general.subList(0, 3)));
+        assertEquals("Precision, within run (QC-A)", general.get(2).characteristic());
     }
 
     @Test
-    void asingleLevelHasNoLloqSetApartAndAMissingFamilyIsNotEvaluable() {
+    void aSingleLevelIsAtTheLloqOnlyWhenIdentifiedAndAMissingFamilyIsNotEvaluable() {
         Map<String, double[]> one = Map.of("QC-1", new double[] {5, 18});
         Verdict v = judged(qcs(one)).get(0);
-        assertEquals(FAIL, v.outcome(), "one level: the general ±15 % applies");
-        assertTrue(v.reason().endsWith("; one level only, no LLOQ set apart"), v.reason());
+        assertEquals(FAIL, v.outcome(), "one level, no LLOQ identified: the general ±15 % applies");
+        assertTrue(v.reason().endsWith("; LLOQ not identified (name it with 'lloq-level:' in the cell), general limit "
+                + "applied"), v.reason());
+        assertEquals(PASS, judged(qcs(one, "QC-1")).get(0).outcome(), "a precision run at the LLOQ alone: ±20 %");
         SectionResult noQc = new SectionResult("u", AnalysisKind.UNKNOWNS, "Samples", List.of(), List.of(), List.of(),
                 new DataTable(List.of(), List.of()), List.of(), List.of(), List.of());
         assertEquals(Verdict.Outcome.NOT_EVALUABLE, judged(noQc).get(0).outcome());
@@ -237,10 +277,10 @@ class M10ProfileTest {
         samples.put("A", new double[] {1, 0});
         samples.put("B", new double[] {3, -15.04});
         samples.put("C", new double[] {50, 15.5});
-        List<Verdict> rounded = qc.judge(qcs(samples), Comparison.ROUNDED_TO_LIMIT);
+        List<Verdict> rounded = qc.judge(qcs(samples, "A"), Comparison.ROUNDED_TO_LIMIT);
         assertEquals(List.of(PASS, PASS, FAIL), outcomes(rounded));
         assertEquals("QC deviation = −15 % (rounded from −15.04 %), limit ±15 %", rounded.get(1).reason());
-        assertEquals(List.of(PASS, FAIL, FAIL), outcomes(qc.judge(qcs(samples), Comparison.AS_COMPUTED)));
+        assertEquals(List.of(PASS, FAIL, FAIL), outcomes(qc.judge(qcs(samples, "A"), Comparison.AS_COMPUTED)));
     }
 
     @Test

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Objects;
 import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.LloqLevels;
 import org.meritbook.analysis.ResultTable;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
@@ -40,6 +41,9 @@ public final class AccuracyAnalysis implements Analysis {
         section.setting("Levels", data.levelColumn() == null
                 ? "by known value in column '" + data.known().header() + "'"
                 : "by column '" + data.levelColumn().header() + "'");
+        LloqLevels.named(cell, context, data.levels(), data.levelColumn() == null
+                ? "levels (the known values in column '" + data.known().header() + "')"
+                : "levels in column '" + data.levelColumn().header() + "'").ifPresent(l -> LloqLevels.record(section, l));
         if (readBack != null) {
             section.setting("Measured values", "signals read back through calibration '" + readBack.line().cellId()
                     + "', " + readBack.formula() + (data.unspiked() == null ? "" : " (unspiked results too)"));

@@ -34,11 +34,6 @@ final class LevelSummary {
             rows.add(section.ref("R(" + g.row().label() + ")", g.stepId()));
         }
         int n = r.length;
-        if (!suffix.isEmpty()) {
-            // the level's nominal value, for rules that set the lowest level (the LLOQ) apart
-            section.nominal(suffix.substring(1), group.stream().mapToDouble(g -> g.row().knownValue()).average()
-                    .orElse(Double.NaN));
-        }
         String nId = section.quantity(QuantityDraft.of("n" + suffix, "Number of results (" + what + ")", "n", rows, n,
                 null).as(NumberKind.COUNT));
         if (n == 1) {

@@ -1,6 +1,8 @@
 package org.meritbook.analysis.calibration;
 
+import java.util.Arrays;
 import java.util.Objects;
+import java.util.OptionalDouble;
 import org.meritbook.analysis.Exported;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionResult;
@@ -35,6 +37,15 @@ public record CalibrationLine(String cellId, LineFit fit, String xUnit, String y
     /** Whether the response is a ratio to an internal standard. */
     public boolean ratio() {
         return internalStandard != null;
+    }
+
+    /**
+     * The lowest standard above zero in the fit: the line's lower end, or, when that is a zero
+     * calibrator, the next one up. ICH M10 calls it the LLOQ; an LOQ is compared with it, never with a
+     * blank standard. Empty when no standard lies above zero.
+     */
+    public OptionalDouble lowestStandardAboveZero() {
+        return xLow > 0 ? OptionalDouble.of(xLow) : Arrays.stream(fit.x()).filter(x -> x > 0).min();
     }
 
     /** What a later cell's message calls the result it needs. */

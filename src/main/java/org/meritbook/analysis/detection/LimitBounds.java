@@ -1,6 +1,5 @@
 package org.meritbook.analysis.detection;
 
-import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import org.meritbook.analysis.SectionBuilder;
@@ -72,8 +71,7 @@ final class LimitBounds {
      * calibrator, the next one up (an LOQ is never compared with a blank standard).
      */
     private static void lowestStandard(SectionBuilder s, CalibrationLine line, SectionResult calibration) {
-        double lowest = line.xLow() > 0 ? line.xLow()
-                : Arrays.stream(line.fit().x()).filter(x -> x > 0).min().orElse(Double.NaN);
+        double lowest = line.lowestStandardAboveZero().orElse(Double.NaN);
         if (!Double.isFinite(lowest)) {
             s.warning("No lowest calibration standard to compare the LOQ with: calibration " + line.cellId()
                     + " has no standard above zero.");

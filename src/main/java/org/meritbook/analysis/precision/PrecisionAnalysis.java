@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
+import org.meritbook.analysis.LloqLevels;
 import org.meritbook.analysis.ResultTable;
 import org.meritbook.analysis.SectionBuilder;
 import org.meritbook.analysis.SectionResult;
@@ -44,6 +45,9 @@ public final class PrecisionAnalysis implements Analysis {
                 ? "'" + data.levelColumn().header() + "' (column " + data.levelColumn().letter() + "): "
                         + String.join(", ", data.levels().stream().map(PrecisionData.Level::label).toList())
                 : "one level (all results)");
+        LloqLevels.named(cell, context, data.levelled() ? data.levels().stream().map(PrecisionData.Level::label).toList()
+                : List.of(), data.levelled() ? "levels in column '" + data.levelColumn().header() + "'"
+                : "levels of a 'level:' column").ifPresent(l -> LloqLevels.record(section, l));
         section.setting("Confidence level", "95 %");
         section.setting("Outlier screening", "Grubbs (single, two-sided) on the results"
                 + (data.grouped() ? " and on the group means, Cochran's C on the group variances" : "")

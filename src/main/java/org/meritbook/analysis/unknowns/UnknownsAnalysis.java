@@ -10,6 +10,8 @@ import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.DataTable;
 import org.meritbook.analysis.InternalStandard;
+import org.meritbook.analysis.LloqLevel;
+import org.meritbook.analysis.LloqLevels;
 import org.meritbook.analysis.MeasuredRows;
 import org.meritbook.analysis.Quantity;
 import org.meritbook.analysis.SectionBuilder;
@@ -81,7 +83,25 @@ public final class UnknownsAnalysis implements Analysis {
             g.rows().forEach(r -> groupOfRow.put(r.index(), g));
             notes.put(g.label(), readBack(section, g, line, calibration, units, loq, options, rows.columns()));
         }
+        lloq(cell, context, section, line, units).ifPresent(l -> LloqLevels.record(section, l));
         return section.build(table(rows, groupOfRow, notes, section, units));
+    }
+
+    /**
+     * The QC samples at the LLOQ: named in the cell, else those whose known value is the calibration's
+     * lowest standard above zero, when the QCs are compared in the calibration's own unit (a known value
+     * in the sample's unit is not a standard's concentration).
+     */
+    private static Optional<LloqLevel> lloq(AnalysisCell cell, AnalysisContext context, SectionBuilder section,
+                                            CalibrationLine line, Units units) {
+        Map<String, Double> qcs = section.nominals();
+        Optional<LloqLevel> named = LloqLevels.named(cell, context, qcs.keySet(), "QC samples read back (samples with a known value)");
+        if (named.isPresent() || qcs.isEmpty() || units.convert()) {
+            return named;
+        }
+        return line.lowestStandardAboveZero().stream().boxed().findFirst().map(lowest -> LloqLevels.atLowestStandard(qcs,
+                lowest, "the lowest standard above zero of calibration '" + line.cellId() + "' (" + plain(lowest)
+                        + unitSuffix(line.xUnit()) + ")"));
     }
 
     /** One sample as read back: its readings (used rows), preparation and known value. */

@@ -1,0 +1,84 @@
+package org.meritbook.analysis;
+
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.meritbook.error.ErrorKey;
+import org.meritbook.error.InputException;
+import org.meritbook.study.AnalysisCell;
+import org.meritbook.study.OptionValue;
+
+/**
+ * Finds the LLOQ level of an accuracy, precision or unknowns section ({@link LloqLevel}). ICH M10 makes
+ * the LLOQ the lowest calibration standard, and a QC "at the LLOQ" one of that concentration. The cell
+ * may name its LLOQ level(s) ({@code lloq-level:}); QC samples read back through a calibration in its
+ * own units are at the LLOQ when their known value is the calibration's lowest standard above zero.
+ * Nothing else is guessed: the lowest level of a study is often a low QC at about three times the
+ * LLOQ, which the general limit judges.
+ */
+public final class LloqLevels {
+    /** The cell option naming the LLOQ level, or a list of them. */
+    public static final String OPTION = "lloq-level";
+    /** Relative difference under which a known value is the standard's concentration (both typed numbers). */
+    private static final double SAME = 1e-9;
+
+    private LloqLevels() {
+    }
+
+    /**
+     * The levels the cell names with {@code lloq-level:}, each checked against the section's levels;
+     * empty when the cell names none.
+     *
+     * @param levels    the section's member labels, in order
+     * @param levelsAre what those labels are, for the message: "levels in column 'Level'"
+     */
+    public static Optional<LloqLevel> named(AnalysisCell cell, AnalysisContext context, Collection<String> levels,
+                                            String levelsAre) {
+        Optional<OptionValue> option = cell.option(OPTION);
+        if (option.isEmpty()) {
+            return Optional.empty();
+        }
+        OptionValue v = option.get(); // one level or a list of them (checked when the notebook was read)
+        List<String> named = v.isScalar() ? List.of(v.text().strip())
+                : v.list().stream().map(item -> item.text().strip()).toList();
+        if (levels.isEmpty()) {
+            throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(cell.lineOf(OPTION)),
+                    "'" + OPTION + ":' naming one of the " + levelsAre, "a section without such levels",
+                    "Remove '" + OPTION + ":', or give the cell the levels it names.");
+        }
+        for (String name : named) {
+            if (!levels.contains(name)) {
+                throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(cell.lineOf(OPTION)),
+                        "'" + OPTION + ":' naming one of the " + levelsAre + ": " + String.join(", ", levels),
+                        "'" + name + "'", "Write the level as the section shows it, or a list of them.");
+            }
+        }
+        return Optional.of(new LloqLevel(named, "named in the cell (" + OPTION + ": " + String.join(", ", named) + ")"));
+    }
+
+    /**
+     * The members whose known value is the calibration's lowest standard above zero.
+     *
+     * @param knownByLabel each member's known value, in the calibration's concentration unit
+     * @param lowest       the calibration's lowest standard above zero
+     * @param what         the standard as the basis names it: "the lowest standard above zero of calibration 'cal' (2 mg/L)"
+     */
+    public static LloqLevel atLowestStandard(Map<String, Double> knownByLabel, double lowest, String what) {
+        List<String> at = new ArrayList<>();
+        for (Map.Entry<String, Double> e : knownByLabel.entrySet()) {
+            if (Math.abs(e.getValue() - lowest) <= SAME * Math.max(Math.abs(e.getValue()), Math.abs(lowest))) {
+                at.add(e.getKey());
+            }
+        }
+        return new LloqLevel(at, (at.isEmpty() ? "no known value equals " : "known value equal to ") + what);
+    }
+
+    /** Shows the identified LLOQ among the section's settings and exports it for the acceptance rules. */
+    public static void record(SectionBuilder section, LloqLevel lloq) {
+        section.setting("LLOQ level", (lloq.labels().isEmpty() ? "none" : String.join(", ", lloq.labels())) + ": "
+                + lloq.basis());
+        section.export(lloq);
+    }
+}
