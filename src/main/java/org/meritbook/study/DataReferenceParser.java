@@ -62,7 +62,9 @@ final class DataReferenceParser {
         }
         if (after.isEmpty()) {
             if (!rest.startsWith("'") && isRange(target.toUpperCase(Locale.ROOT))) {
-                return bad(text, "a range with no sheet", "Name the sheet between the alias and the range: " + source + "!Sheet1!" + target + ".");
+                return bad(text, "a range with no sheet", "Name the sheet between the alias and the range: " + source + "!Sheet1!" + target
+                        + " (a .csv file's one sheet is named after the file: " + source + "!results!" + target
+                        + " for results.csv).");
             }
             return new Parsed(new DataReference(source, target, null, text, line), null, null);
         }
