@@ -46,16 +46,49 @@ public final class LloqLevels {
         if (levels.isEmpty()) {
             throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(cell.lineOf(OPTION)),
                     "'" + OPTION + ":' naming one of the " + levelsAre, "a section without such levels",
-                    "Remove '" + OPTION + ":', or give the cell the levels it names.");
+                    "Remove '" + OPTION + ":', or give the cell its levels (a precision cell: 'level: <column>').");
         }
+        List<String> labels = new ArrayList<>();
         for (String name : named) {
-            if (!levels.contains(name)) {
+            String label = levels.contains(name) ? name : sameNumber(name, levels);
+            if (label == null) {
                 throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(cell.lineOf(OPTION)),
                         "'" + OPTION + ":' naming one of the " + levelsAre + ": " + String.join(", ", levels),
                         "'" + name + "'", "Write the level as the section shows it, or a list of them.");
             }
+            if (!labels.contains(label)) {
+                labels.add(label);
+            }
         }
-        return Optional.of(new LloqLevel(named, "named in the cell (" + OPTION + ": " + String.join(", ", named) + ")"));
+        return Optional.of(new LloqLevel(labels, "named in the cell (" + OPTION + ": " + String.join(", ", named) + ")"));
+    }
+
+    /** The level whose label is the same number as {@code name} ("1.0" for a level labelled "1"), or null. */
+    private static String sameNumber(String name, Collection<String> levels) {
+        double v = number(name);
+        if (Double.isNaN(v)) {
+            return null;
+        }
+        return levels.stream().filter(l -> number(l) == v).findFirst().orElse(null);
+    }
+
+    private static double number(String text) {
+        try {
+            double v = Double.parseDouble(text.strip());
+            return Double.isFinite(v) ? v : Double.NaN;
+        } catch (NumberFormatException e) {
+            return Double.NaN; // a text label such as "QC-L": compared as written
+        }
+    }
+
+    /** The members of both, {@code first}'s in order, then the others; both bases said. */
+    public static LloqLevel union(LloqLevel first, LloqLevel second) {
+        List<String> labels = new ArrayList<>(first.labels());
+        second.labels().stream().filter(l -> !labels.contains(l)).forEach(labels::add);
+        if (labels.size() == first.labels().size()) {
+            return first;
+        }
+        return new LloqLevel(labels, first.basis() + "; " + second.basis());
     }
 
     /**

@@ -115,11 +115,6 @@ public final class SectionBuilder {
         return this;
     }
 
-    /** The nominal values recorded so far by member label ({@link #nominal}), in the order recorded. */
-    public Map<String, Double> nominals() {
-        return java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(nominals));
-    }
-
     /** A typed result later cells may use. */
     public SectionBuilder export(Exported result) {
         exports.add(result);

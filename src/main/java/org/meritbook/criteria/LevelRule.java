@@ -13,9 +13,9 @@ import org.meritbook.study.AnalysisKind;
  * A limit on every level (or QC sample) of a family, with its own limit at the LLOQ. ICH M10 writes
  * its accuracy and precision criteria this way (±15 %, ±20 % at the LLOQ). The LLOQ members are the
  * ones the section identified ({@link LloqLevel}: named in the cell, or QCs at the calibration's
- * lowest standard); a section that identified none is judged by the general limit (the stricter one)
- * throughout, and a verdict the LLOQ's limit would have turned says so: the lowest level of a study is
- * often a low QC, not the LLOQ.
+ * lowest standard); a section that identified none is judged by the general limit throughout, and a
+ * verdict the LLOQ's limit would have turned says so: the lowest level of a study is often a low QC,
+ * not the LLOQ.
  * {@code magnitude} judges |value| (a % error or deviation "within ±15 %"), otherwise the value (a CV
  * "≤ 15 %"); the limit itself is within. Each member gets one verdict; the family's overall value (the
  * name without a level) is judged only when the section reports no level, since the limits are per
@@ -32,7 +32,7 @@ import org.meritbook.study.AnalysisKind;
  */
 public record LevelRule(AnalysisKind kind, String characteristic, String quantity, boolean magnitude, double limit,
                         double lowestLimit, String symbol, String source) implements Rule {
-    /** Told where the LLOQ's limit would have passed a value the general one fails: only there can it matter. */
+    /** Told where the LLOQ's limit would have given the other outcome: only there can it matter. */
     private static final String NOT_IDENTIFIED =
             "; LLOQ not identified (name it with 'lloq-level:' in the cell), general limit applied";
 
@@ -77,7 +77,7 @@ public record LevelRule(AnalysisKind kind, String characteristic, String quantit
             boolean atLloq = lloq != null && lloq.contains(member);
             String what = characteristic + " (" + member + (atLloq && !member.equalsIgnoreCase("LLOQ") ? ", LLOQ" : "") + ")";
             verdicts.add(verdict(q, what, atLloq ? lowestLimit : limit, comparison,
-                    lloq == null && decidedByTheLloq(q, comparison) ? NOT_IDENTIFIED : ""));
+                    (lloq == null || lloq.labels().isEmpty()) && decidedByTheLloq(q, comparison) ? NOT_IDENTIFIED : ""));
         }
         return verdicts;
     }

@@ -149,8 +149,10 @@ final class CellOptionsParser {
     private boolean checkLevelList(String name, OptionValue value) {
         if (!(value.value() instanceof List<?>) || value.list().isEmpty()
                 || value.list().stream().anyMatch(v -> !v.isScalar() || v.text().isBlank())) {
+            String found = !(value.value() instanceof List<?>) ? Problems.describe(value)
+                    : value.list().isEmpty() ? "an empty list" : "a list holding a blank or nested value";
             problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "one level or a list of levels for '" + name + "'",
-                    Problems.describe(value), "Write '" + name + ": QC-LLOQ' or '" + name + ": [LLOQ-1, LLOQ-2]'.");
+                    found, "Write '" + name + ": QC-LLOQ' or '" + name + ": [LLOQ-1, LLOQ-2]'.");
             return false;
         }
         return true;

@@ -87,7 +87,7 @@ public final class CalibrationAnalysis implements Analysis {
                     section.stepId("n"));
             recordResiduals(section, data, fit);
             section.export(new CalibrationLine(cell.id(), fit, data.xUnit(), data.yUnit(), min(x), max(x),
-                    data.ratio() ? data.isColumns().get(0).header() : null));
+                    data.ratio() ? data.isColumns().get(0).header() : null, data.lowestPlannedAboveZero()));
         }
         BackCalculation.record(section, data, curve, inversion);
         flagResiduals(section, data, curve);

@@ -70,6 +70,12 @@ record CalibrationData(DataBlock block, Column xColumn, List<Column> yColumns, L
         return points.stream().filter(CalibrationPoint::used).toList();
     }
 
+    /** The lowest concentration above zero among all the standards, excluded ones included; NaN when none. */
+    double lowestPlannedAboveZero() {
+        return points.stream().mapToDouble(CalibrationPoint::x).filter(x -> Double.isFinite(x) && x > 0).min()
+                .orElse(Double.NaN);
+    }
+
     double[] usedX() {
         return used().stream().mapToDouble(CalibrationPoint::x).toArray();
     }

@@ -21,17 +21,14 @@ import org.meritbook.stats.regression.LineFit;
  * @param xHigh     highest concentration in the fit
  * @param internalStandard the header of the internal-standard column when the response is the ratio
  *                  A / A_IS (a cell reading back through this line must give its samples' ratio too), else null
+ * @param lowestPlannedAboveZero the lowest concentration above zero among all the cell's standards, those
+ *                  excluded from the fit included (NaN when none): the LLOQ the run was planned with
  */
 public record CalibrationLine(String cellId, LineFit fit, String xUnit, String yUnit, double xLow, double xHigh,
-                              String internalStandard) implements Exported {
+                              String internalStandard, double lowestPlannedAboveZero) implements Exported {
     public CalibrationLine {
         Objects.requireNonNull(cellId, "cellId");
         Objects.requireNonNull(fit, "fit");
-    }
-
-    /** A line whose response is the plain response (no internal standard). */
-    public CalibrationLine(String cellId, LineFit fit, String xUnit, String yUnit, double xLow, double xHigh) {
-        this(cellId, fit, xUnit, yUnit, xLow, xHigh, null);
     }
 
     /** Whether the response is a ratio to an internal standard. */
@@ -41,8 +38,10 @@ public record CalibrationLine(String cellId, LineFit fit, String xUnit, String y
 
     /**
      * The lowest standard above zero in the fit: the line's lower end, or, when that is a zero
-     * calibrator, the next one up. ICH M10 calls it the LLOQ; an LOQ is compared with it, never with a
-     * blank standard. Empty when no standard lies above zero.
+     * calibrator, the next one up. An LOQ is compared with it, never with a blank standard. Empty when
+     * no standard lies above zero. ICH M10 calls it the LLOQ only when it is also the lowest standard
+     * planned ({@link #lowestPlannedAboveZero}): a low QC does not become an LLOQ QC because the
+     * run's lowest standard was excluded.
      */
     public OptionalDouble lowestStandardAboveZero() {
         return xLow > 0 ? OptionalDouble.of(xLow) : Arrays.stream(fit.x()).filter(x -> x > 0).min();

@@ -1,11 +1,13 @@
 package org.meritbook.analysis.unknowns;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import org.meritbook.analysis.Analysis;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.DataTable;
@@ -36,7 +38,8 @@ import org.meritbook.workbook.Column;
  * "Linear range, unknowns and QC samples"). Readings of one sample and preparation are averaged
  * (m readings) and read back as x₀ = (ȳ₀ − a)/b with s(x₀) by the inverse-prediction formula of
  * {@link InversePrediction}; with mass, volume and dilution the result is also given in the
- * sample's units. A sample outside the calibrated span is flagged and not converted; with
+ * sample's units. A sample outside the calibrated span is flagged and not converted (a QC is flagged and
+ * still judged by its deviation); with
  * {@code limits:} a sample below the LOQ is reported as such.
  */
 public final class UnknownsAnalysis implements Analysis {
@@ -83,25 +86,37 @@ public final class UnknownsAnalysis implements Analysis {
             g.rows().forEach(r -> groupOfRow.put(r.index(), g));
             notes.put(g.label(), readBack(section, g, line, calibration, units, loq, options, rows.columns()));
         }
-        lloq(cell, context, section, line, units).ifPresent(l -> LloqLevels.record(section, l));
+        lloq(cell, context, groups.values(), line, units).ifPresent(l -> LloqLevels.record(section, l));
         return section.build(table(rows, groupOfRow, notes, section, units));
     }
 
     /**
      * The QC samples at the LLOQ: named in the cell, else those whose known value is the calibration's
      * lowest standard above zero, when the QCs are compared in the calibration's own unit (a known value
-     * in the sample's unit is not a standard's concentration).
+     * in the sample's unit is not a standard's concentration) and that standard is the lowest planned
+     * (with the run's lowest standard excluded, a low QC at the next one is not an LLOQ QC).
      */
-    private static Optional<LloqLevel> lloq(AnalysisCell cell, AnalysisContext context, SectionBuilder section,
+    private static Optional<LloqLevel> lloq(AnalysisCell cell, AnalysisContext context, Collection<Group> groups,
                                             CalibrationLine line, Units units) {
-        Map<String, Double> qcs = section.nominals();
-        Optional<LloqLevel> named = LloqLevels.named(cell, context, qcs.keySet(), "QC samples read back (samples with a known value)");
-        if (named.isPresent() || qcs.isEmpty() || units.convert()) {
+        Map<String, Double> qcs = new LinkedHashMap<>();
+        groups.stream().filter(g -> g.known() != null).forEach(g -> qcs.put(g.label(), g.known()));
+        Optional<LloqLevel> named = LloqLevels.named(cell, context, qcs.keySet(),
+                "QC samples (samples with a known value)");
+        OptionalDouble lowest = line.lowestStandardAboveZero();
+        if (qcs.isEmpty() || units.convert() || lowest.isEmpty()) {
             return named;
         }
-        return line.lowestStandardAboveZero().stream().boxed().findFirst().map(lowest -> LloqLevels.atLowestStandard(qcs,
-                lowest, "the lowest standard above zero of calibration '" + line.cellId() + "' (" + plain(lowest)
-                        + unitSuffix(line.xUnit()) + ")"));
+        String unit = unitSuffix(line.xUnit());
+        double planned = line.lowestPlannedAboveZero();
+        if (planned < lowest.getAsDouble()) {
+            return Optional.of(named.orElse(new LloqLevel(List.of(), "the lowest standard above zero of calibration '"
+                    + line.cellId() + "' (" + plain(planned) + unit + ") is excluded from its fit, so no QC is taken "
+                    + "for an LLOQ QC; name them with '" + LloqLevels.OPTION + ":' if the run's LLOQ stands")));
+        }
+        LloqLevel found = LloqLevels.atLowestStandard(qcs, lowest.getAsDouble(), "the lowest standard above zero of "
+                + "calibration '" + line.cellId() + "' (" + plain(lowest.getAsDouble()) + unit + ")");
+        // A QC at the LLOQ's concentration is an LLOQ QC whether or not the cell's list names it.
+        return Optional.of(named.map(n -> LloqLevels.union(n, found)).orElse(found));
     }
 
     /** One sample as read back: its readings (used rows), preparation and known value. */
@@ -224,19 +239,25 @@ public final class UnknownsAnalysis implements Analysis {
 
         List<String> notes = new ArrayList<>();
         boolean outside = ip.x0() < line.xLow() || ip.x0() > line.xHigh();
+        // A QC is judged by its deviation wherever it reads: an LLOQ QC a few % low reads below the lowest
+        // standard, and a QC far outside the span is a failed QC, never one left unjudged.
+        boolean qc = g.known() != null;
         if (outside) {
             boolean above = ip.x0() > line.xHigh();
-            section.warning(String.format(Locale.ROOT, "Sample %s reads %s%s, %s standard of '%s' (%s%s): it is "
-                            + "outside the calibrated span, so no result is reported from it (never extrapolated). %s",
-                    id, plain(ip.x0()), unitSuffix(line.xUnit()), above ? "above the highest" : "below the lowest",
-                    line.cellId(), plain(above ? line.xHigh() : line.xLow()), unitSuffix(line.xUnit()),
-                    above ? "Dilute it and run it again." : "Report it as below the lowest standard, or concentrate it."));
-            notes.add("outside the calibrated span: not reported");
+            String where = String.format(Locale.ROOT, "%s %s reads %s%s, %s standard of '%s' (%s%s): it is outside the "
+                            + "calibrated span", qc ? "QC" : "Sample", id, plain(ip.x0()), unitSuffix(line.xUnit()),
+                    above ? "above the highest" : "below the lowest", line.cellId(),
+                    plain(above ? line.xHigh() : line.xLow()), unitSuffix(line.xUnit()));
+            section.warning(qc ? where + "; as a QC it is still judged by its deviation from the known value, read "
+                    + "beyond the span. Check the run against its QC acceptance."
+                    : where + ", so no result is reported from it (never extrapolated). "
+                    + (above ? "Dilute it and run it again." : "Report it as below the lowest standard, or concentrate it."));
+            notes.add(qc ? "outside the calibrated span: judged as a QC" : "outside the calibrated span: not reported");
         }
         String resultId = x0Id;
         double result = ip.x0();
         String resultUnit = line.xUnit();
-        if (units.convert() && !outside) {
+        if (units.convert() && (!outside || qc)) {
             List<StepInput> in = new ArrayList<>(List.of(section.ref("x₀", x0Id),
                     StepInput.number("V", g.volume(), units.volume(), options.source(g, options.volume(), UnknownsOptions.VOLUME)),
                     StepInput.number("m", g.mass(), units.mass(), options.source(g, options.mass(), UnknownsOptions.MASS)),
@@ -263,7 +284,7 @@ public final class UnknownsAnalysis implements Analysis {
                 notes.add("below the LOQ (" + plain(limit.value()) + unitSuffix(limit.unit()) + ")");
             }
         }
-        if (g.known() != null && !outside) {
+        if (qc) {
             double known = g.known();
             section.quantity(QuantityDraft.of("qc_deviation_percent:" + id, "QC deviation from its known value, " + id,
                     "(result − known) / known × 100", List.of(section.ref("result", resultId),

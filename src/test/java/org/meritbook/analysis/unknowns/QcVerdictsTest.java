@@ -65,16 +65,25 @@ class QcVerdictsTest {
 
     /** The unknowns section of these QC rows (sample, reading, known) read through the 0-12 mg/L calibration. */
     private static SectionResult qcs(String[][] samples, String extra) {
+        return qcs(samples, "mg/L", "", extra);
+    }
+
+    /**
+     * @param knownUnit   the unit of the known values' column
+     * @param calibration lines added to the calibration cell (an exclusion)
+     * @param extra       lines added to the unknowns cell
+     */
+    private static SectionResult qcs(String[][] samples, String knownUnit, String calibration, String extra) {
         double[] x = {0, 2, 4, 6, 8, 10, 12};
         double[] y = {2.1, 5.0, 9.0, 12.6, 17.3, 21.0, 24.7};
         String[][] cal = new String[x.length][];
         for (int i = 0; i < x.length; i++) {
             cal[i] = new String[] {Double.toString(x[i]), Double.toString(y[i])};
         }
-        DataBlock calibration = block("Cal", new String[] {"Conc (mg/L)", "Signal (counts)"},
+        DataBlock standards = block("Cal", new String[] {"Conc (mg/L)", "Signal (counts)"},
                 new String[] {"Conc", "Signal"}, new String[] {"mg/L", "counts"}, cal);
-        DataBlock rows = block("Samples", new String[] {"Sample", "Signal (counts)", "Nominal (mg/L)"},
-                new String[] {"Sample", "Signal", "Nominal"}, new String[] {null, "counts", "mg/L"}, samples);
+        DataBlock rows = block("Samples", new String[] {"Sample", "Signal (counts)", "Nominal (" + knownUnit + ")"},
+                new String[] {"Sample", "Signal", "Nominal"}, new String[] {null, "counts", knownUnit}, samples);
         String text = """
                 ---
                 title: QC test
@@ -87,7 +96,7 @@ class QcVerdictsTest {
                 data: runs!Cal!A1:B8
                 x: Conc
                 y: Signal
-                ```
+                %s```
 
                 ```unknowns
                 calibration: cal
@@ -96,9 +105,9 @@ class QcVerdictsTest {
                 y: Signal
                 known: Nominal
                 %s```
-                """.formatted(samples.length + 1, extra);
+                """.formatted(calibration, samples.length + 1, extra);
         Study study = StudyParser.parse(text, Path.of("study.md"));
-        AnalysisContext context = new AnalysisContext(study, ref -> ref.target().equals("Cal") ? calibration : rows);
+        AnalysisContext context = new AnalysisContext(study, ref -> ref.target().equals("Cal") ? standards : rows);
         SectionResult c = new CalibrationAnalysis().run(study.cells().get(0), context);
         return new UnknownsAnalysis().run(study.cells().get(1), context.with(c));
     }
@@ -152,7 +161,70 @@ class QcVerdictsTest {
         InputException e = assertThrows(InputException.class, () -> qcs(new String[][] {
             {"QC-H", reading(10 * 0.95), "10"},
             {"S-1", reading(5), ""}}, "lloq-level: [S-1]\n"));
-        assertTrue(e.getMessage().contains("QC samples read back (samples with a known value): QC-H"), e.getMessage());
+        assertTrue(e.getMessage().contains("QC samples (samples with a known value): QC-H"), e.getMessage());
         assertTrue(e.getMessage().contains("'S-1'"), e.getMessage());
+    }
+
+    @Test
+    void anLloqQcReadingBelowTheLowestStandardIsStillJudged() {
+        // Without the zero calibrator the fit starts at 2 mg/L (a = 1.0133, b = 1.98857 on the other six
+        // standards, by hand): QC-LLOQ reads back at 1.904, about 4.8 % low, below the lowest standard, outside
+        // the calibrated span, and is judged at the LLOQ's ±20 % all the same (it used to get no verdict).
+        SectionResult u = qcs(new String[][] {
+            {"QC-LLOQ", reading(2 * 0.85), "2"},
+            {"QC-H", reading(10 * 0.95), "10"}}, "mg/L", exclusion("B2", "zero calibrator"), "");
+        assertTrue(u.warnings().stream().anyMatch(w -> w.startsWith("QC QC-LLOQ reads") && w.contains("below the lowest")
+                && w.contains("still judged by its deviation")), u.warnings().toString());
+        List<Verdict> v = judged(u);
+        assertEquals(List.of("QC samples (QC-LLOQ, LLOQ)", "QC samples (QC-H)"),
+                v.stream().map(Verdict::characteristic).toList(), v.toString());
+        assertEquals(List.of(Verdict.Outcome.PASS, Verdict.Outcome.PASS), v.stream().map(Verdict::outcome).toList());
+        double deviation = u.quantity("qc_deviation_percent:QC-LLOQ").orElseThrow().value();
+        assertEquals(-4.8, deviation, 0.05);
+    }
+
+    @Test
+    void withTheLowestStandardExcludedNoQcIsTakenForAnLloqQc() {
+        // 2 mg/L is the lowest standard planned; excluded, the fit starts at 4: QC-L at 4 mg/L is a low QC.
+        SectionResult u = qcs(new String[][] {
+            {"QC-L", reading(4 * 1.18), "4"},
+            {"QC-H", reading(10 * 0.95), "10"}}, "mg/L", exclusion("B3", "injection failed"), "");
+        assertTrue(u.settings().stream().anyMatch(s -> s.label().equals("LLOQ level") && s.value().startsWith(
+                "none: the lowest standard above zero of calibration 'cal' (2.000 mg/L) is excluded from its fit")),
+                u.settings().toString());
+        Verdict low = judged(u).get(0);
+        assertEquals(Verdict.Outcome.FAIL, low.outcome(), low.reason());
+        assertTrue(low.reason().endsWith("LLOQ not identified (name it with 'lloq-level:' in the cell), general limit "
+                + "applied"), low.reason());
+    }
+
+    @Test
+    void aQcAtTheLloqIsTakenBesideTheOnesTheCellNames() {
+        SectionResult u = qcs(new String[][] {
+            {"LLOQ-A", reading(2 * 1.18), "2"},
+            {"LLOQ-B", reading(2 * 0.85), "2"},
+            {"QC-H", reading(10 * 0.95), "10"}}, "lloq-level: LLOQ-B\n");
+        List<Verdict> v = judged(u);
+        assertEquals(List.of("QC samples (LLOQ-A, LLOQ)", "QC samples (LLOQ-B, LLOQ)", "QC samples (QC-H)"),
+                v.stream().map(Verdict::characteristic).toList(), v.toString());
+        assertTrue(u.settings().stream().anyMatch(s -> s.label().equals("LLOQ level") && s.value().equals(
+                "LLOQ-B, LLOQ-A: named in the cell (lloq-level: LLOQ-B); known value equal to the lowest standard above "
+                        + "zero of calibration 'cal' (2.000 mg/L)")), u.settings().toString());
+    }
+
+    @Test
+    void knownValuesInTheSamplesUnitTakeNoQcForTheLloq() {
+        // With mass and volume the known values are contents in mg/kg, not a standard's concentration in mg/L.
+        SectionResult u = qcs(new String[][] {
+            {"QC-LLOQ", reading(2 * 1.18), "20"},
+            {"QC-H", reading(10 * 0.95), "100"}}, "mg/kg", "", "mass: 5.00 g\nvolume: 50 mL\n");
+        assertTrue(u.settings().stream().noneMatch(s -> s.label().equals("LLOQ level")), u.settings().toString());
+        Verdict v = judged(u).get(0);
+        assertEquals("QC samples (QC-LLOQ)", v.characteristic());
+        assertEquals(Verdict.Outcome.FAIL, v.outcome(), v.reason());
+    }
+
+    private static String exclusion(String cell, String reason) {
+        return "exclude:\n  - cell: Cal!" + cell + "\n    reason: " + reason + "\n";
     }
 }
