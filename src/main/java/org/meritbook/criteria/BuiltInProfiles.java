@@ -80,8 +80,9 @@ public final class BuiltInProfiles {
     }
 
     /**
-     * Bioanalysis after ICH M10: calibration standards, QC samples, and the accuracy and precision of
-     * each QC level, ±15 % (20 % at the LLOQ, as the section identifies it: {@link LevelRule}).
+     * Bioanalysis after ICH M10: calibration standards; the run's QC samples, two thirds of them and half
+     * of each level within ±15 % ({@link QcRunRule}); the accuracy and precision of each QC level, ±15 %
+     * (20 % at the LLOQ, as the section identifies it: {@link LevelRule}).
      */
     private static AcceptanceProfile bioanalysisM10() {
         String m10 = "ICH M10 (2022), sections on calibration curve and accuracy and precision (from memory); "
@@ -90,8 +91,7 @@ public final class BuiltInProfiles {
                 "Bioanalytical method validation after ICH M10: standards, QCs, accuracy and precision per level.",
                 "built in", List.of(
                         new DeviationRule("Calibration standards", 15, 20, 0.75, 6, m10),
-                        new LevelRule(AnalysisKind.UNKNOWNS, "QC samples", "qc_deviation_percent", true, 15, 20,
-                                "QC deviation", m10),
+                        new QcRunRule("QC samples of the run", 15, 20, 2.0 / 3, 0.5, m10),
                         new LevelRule(AnalysisKind.ACCURACY, "Accuracy", "error_percent", true, 15, 20, "mean error",
                                 m10),
                         new LevelRule(AnalysisKind.PRECISION, "Precision, within run", "repeatability_cv_percent", false,

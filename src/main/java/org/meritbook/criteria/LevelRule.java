@@ -33,7 +33,7 @@ import org.meritbook.study.AnalysisKind;
 public record LevelRule(AnalysisKind kind, String characteristic, String quantity, boolean magnitude, double limit,
                         double lowestLimit, String symbol, String source) implements Rule {
     /** Told where the LLOQ's limit would have given the other outcome: only there can it matter. */
-    private static final String NOT_IDENTIFIED =
+    static final String NOT_IDENTIFIED =
             "; LLOQ not identified (name it with 'lloq-level:' in the cell), general limit applied";
 
     public LevelRule {

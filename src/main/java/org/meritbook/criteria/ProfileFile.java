@@ -39,6 +39,11 @@ import org.yaml.snakeyaml.error.YAMLException;
  *     quantity: error_percent
  *     within: 15                   # |value|; or at-most: with lowest-level-at-most:
  *     lowest-level-within: 20
+ *   - kind: unknowns               # the run's QCs together (QcRunRule)
+ *     quantity: qc_deviation_percent
+ *     within: 15
+ *     fraction: 0.667
+ *     fraction-per-level: 0.5
  *   - kind: detection-limit        # the limit is another quantity of the section (BoundRule)
  *     quantity: loq
  *     not-above: reporting_limit   # or not-below:
@@ -47,7 +52,8 @@ import org.yaml.snakeyaml.error.YAMLException;
 final class ProfileFile {
     private static final Set<String> TOP = Set.of("name", "description", "compare", "exclusions-record", "rules");
     private static final Set<String> RULE = Set.of("kind", "quantity", "at-least", "at-most", "within",
-            "lowest-level-within", "lowest-level-at-most", "fraction", "minimum-levels", "not-above", "not-below",
+            "lowest-level-within", "lowest-level-at-most", "fraction", "fraction-per-level", "minimum-levels", "not-above",
+            "not-below",
             "characteristic", "source", "model");
     /** The keys that give a rule its limit; a rule has exactly one. */
     private static final List<String> LIMITS = List.of("at-least", "at-most", "within", "not-above", "not-below");
@@ -129,10 +135,22 @@ final class ProfileFile {
             double fraction = r.containsKey("fraction") ? number(r, "fraction", where, which) : 1.0;
             return new DeviationRule(characteristic, within, lowest, fraction, levels(r, where, which), source);
         }
-        for (String only : List.of("fraction", "minimum-levels")) {
+        if (q.equals("qc_deviation_percent") && kind == AnalysisKind.UNKNOWNS
+                && (r.containsKey("fraction") || r.containsKey("fraction-per-level"))) {
+            double within = number(r, "within", where, which);
+            double lowest = r.containsKey("lowest-level-within") ? number(r, "lowest-level-within", where, which) : within;
+            double fraction = r.containsKey("fraction") ? number(r, "fraction", where, which) : 1.0;
+            double perLevel = r.containsKey("fraction-per-level") ? number(r, "fraction-per-level", where, which) : 0;
+            if (!(fraction > 0 && fraction <= 1 && perLevel >= 0 && perLevel <= 1)) {
+                throw bad(where, which + ": 'fraction:' in (0, 1] and 'fraction-per-level:' in [0, 1]",
+                        "fraction " + Limits.text(fraction) + ", fraction-per-level " + Limits.text(perLevel));
+            }
+            return new QcRunRule(characteristic, within, lowest, fraction, perLevel, source);
+        }
+        for (String only : List.of("fraction", "minimum-levels", "fraction-per-level")) {
             if (r.containsKey(only)) {
-                throw bad(where, which + ": '" + only + ":' only in a rule on deviation_percent", "'" + only
-                        + ":' on " + q);
+                throw bad(where, which + ": '" + only + ":' only in a rule on deviation_percent (or, 'fraction:' and "
+                        + "'fraction-per-level:', on an unknowns cell's qc_deviation_percent)", "'" + only + ":' on " + q);
             }
         }
         List<String> given = LIMITS.stream().filter(r::containsKey).toList();

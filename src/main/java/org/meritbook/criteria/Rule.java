@@ -5,7 +5,7 @@ import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.Verdict;
 
 /** One acceptance rule of a profile: it judges the sections it applies to. */
-public sealed interface Rule permits QuantityRule, DeviationRule, LevelRule, BoundRule {
+public sealed interface Rule permits QuantityRule, DeviationRule, LevelRule, BoundRule, QcRunRule {
     /** The rule as the dossier states it, e.g. "r² ≥ 0.995". */
     String text();
 

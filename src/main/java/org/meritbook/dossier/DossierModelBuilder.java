@@ -39,6 +39,8 @@ final class DossierModelBuilder {
     static final String CAUTION = "The computations in this dossier support, and do not replace, the laboratory's "
             + "own review under its procedures and the regulations that apply to it.";
     static final String NO_CRITERION = "no criterion set";
+    /** The criterion of a result one verdict judges with others (a run's QCs), stated there. */
+    static final String TOGETHER = "judged with the others, below";
 
     private final DisplayFormatter format = new DisplayFormatter();
     private final NarrativeRenderer narrative = new NarrativeRenderer();
@@ -202,7 +204,14 @@ final class DossierModelBuilder {
                 }
                 DisplayFormatter.Formatted v = format.quantity(q);
                 List<Verdict> judged = r.verdicts().stream().filter(x -> q.name().equals(x.quantity())).toList();
-                if (judged.isEmpty()) {
+                // a member of a family one verdict judges together (a run's QCs): pointed to that verdict
+                String family = q.name().contains(":") ? q.name().substring(0, q.name().indexOf(':')) : null;
+                Optional<Verdict> together = judged.isEmpty() && family != null
+                        ? r.verdicts().stream().filter(x -> family.equals(x.quantity())).findFirst() : Optional.empty();
+                if (together.isPresent()) {
+                    rows.add(new SummaryRow(section, anchor, q.label(), v.withUnit(), v.uncertainty(), TOGETHER,
+                            Verdicts.together(together.get())));
+                } else if (judged.isEmpty()) {
                     rows.add(new SummaryRow(section, anchor, q.label(), v.withUnit(), v.uncertainty(), NO_CRITERION,
                             Verdicts.NONE));
                     none++;

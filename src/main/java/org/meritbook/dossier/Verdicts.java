@@ -17,6 +17,11 @@ final class Verdicts {
         return view(v, false);
     }
 
+    /** A result judged together with others by one verdict (a run's QCs): not a verdict of its own. */
+    static VerdictView together(Verdict v) {
+        return new VerdictView("Judged together", "↓", "none", "in '" + v.characteristic() + "' below");
+    }
+
     /** The verdict, with the note that it does not count when its cell is a supporting one. */
     static VerdictView view(Verdict v, boolean supporting) {
         String given = v.reason() == null ? "" : v.reason();

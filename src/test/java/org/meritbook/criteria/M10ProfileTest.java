@@ -29,7 +29,8 @@ import org.meritbook.trail.StepInput;
  * The built-in bioanalysis-m10 profile on constructed runs with exactly the boundary cases. ICH M10
  * (2022), sections on calibration curve and accuracy and precision (from memory): standards and QCs
  * within ±15 % of nominal, ±20 % at the LLOQ; at least 75 % of the standards, at a minimum of six
- * levels; accuracy and precision (CV) 15 %, 20 % at the LLOQ. "Within ±15 %" includes 15.0 %: a value
+ * levels; accuracy and precision (CV) 15 %, 20 % at the LLOQ; analytical run acceptance, two thirds of
+ * the QCs and half of each level within their limits. "Within ±15 %" includes 15.0 %: a value
  * exactly at the limit passes, anything above it (15.1 %, and as computed even 15.0000001 %) fails.
  */
 class M10ProfileTest {
@@ -98,6 +99,10 @@ class M10ProfileTest {
         return vs.stream().map(Verdict::outcome).toList();
     }
 
+    /** ICH M10's limits on each QC (±15 %, ±20 % at the LLOQ; from memory), as a lab profile writes them. */
+    private static final LevelRule PER_QC = new LevelRule(AnalysisKind.UNKNOWNS, "QC samples", "qc_deviation_percent",
+            true, 15, 20, "QC deviation", "test");
+
     private static final Verdict.Outcome PASS = Verdict.Outcome.PASS;
     private static final Verdict.Outcome FAIL = Verdict.Outcome.FAIL;
 
@@ -111,7 +116,7 @@ class M10ProfileTest {
         samples.put("L-2", new double[] {3, -15.0});
         samples.put("M-1", new double[] {50, 15.1});
         samples.put("H-1", new double[] {150, 20.0});
-        List<Verdict> v = judged(qcs(samples, "LLOQ-1", "LLOQ-2"));
+        List<Verdict> v = PER_QC.judge(qcs(samples, "LLOQ-1", "LLOQ-2"));
         assertEquals(List.of(PASS, FAIL, PASS, PASS, FAIL, FAIL), outcomes(v), v.toString());
         assertEquals("QC samples (LLOQ-1, LLOQ)", v.get(0).characteristic());
         assertEquals("QC samples (L-1)", v.get(2).characteristic());
@@ -127,14 +132,49 @@ class M10ProfileTest {
         Map<String, double[]> samples = new java.util.LinkedHashMap<>();
         samples.put("L-1", new double[] {3, 18.0});
         samples.put("M-1", new double[] {50, 5.0});
-        List<Verdict> v = judged(qcs(samples));
+        List<Verdict> v = PER_QC.judge(qcs(samples));
         assertEquals(List.of(FAIL, PASS), outcomes(v), v.toString());
         assertEquals("QC samples (L-1)", v.get(0).characteristic());
         assertEquals("QC deviation = 18 %, limit ±15 %; LLOQ not identified (name it with 'lloq-level:' in the cell), "
                 + "general limit applied", v.get(0).reason());
         assertEquals("QC deviation = 5 %, limit ±15 %", v.get(1).reason(), "told only where the LLOQ's limit decides");
         // identified, the same QC is judged at ±20 %
-        assertEquals(List.of(PASS, PASS), outcomes(judged(qcs(samples, "L-1"))));
+        assertEquals(List.of(PASS, PASS), outcomes(PER_QC.judge(qcs(samples, "L-1"))));
+        // the profile's run rule: one of two QCs within is less than two thirds, and it says why
+        Verdict run = judged(qcs(samples)).get(0);
+        assertEquals(FAIL, run.outcome(), run.reason());
+        assertEquals("1 of 2 QCs within their limit; by known value 3: 0 of 1, 50: 1 of 1; outside: L-1 (18 %); LLOQ not "
+                + "identified (name it with 'lloq-level:' in the cell), general limit applied", run.reason());
+        assertEquals("2 of 2 QCs within their limit; by known value 3 (LLOQ): 1 of 1, 50: 1 of 1",
+                judged(qcs(samples, "L-1")).get(0).reason());
+    }
+
+    @Test
+    void aRunPassesWithTwoThirdsOfItsQcsAndHalfAtEachLevel() {
+        // ICH M10 (2022), analytical run acceptance (from memory): at least 2/3 of all QCs and at least 50 % at
+        // each concentration level within ±15 %. Here 4 of 6, and one of two at the low and the high level.
+        Map<String, double[]> samples = new java.util.LinkedHashMap<>();
+        samples.put("L-1", new double[] {3, 5.0});
+        samples.put("L-2", new double[] {3, 16.0});
+        samples.put("M-1", new double[] {50, 3.0});
+        samples.put("M-2", new double[] {50, -4.0});
+        samples.put("H-1", new double[] {150, 2.0});
+        samples.put("H-2", new double[] {150, -17.0});
+        Verdict run = judged(qcs(samples)).get(0);
+        assertEquals(PASS, run.outcome(), run.reason());
+        assertEquals("QC samples of the run", run.characteristic());
+        assertEquals("4 of 6 QCs within their limit; by known value 3: 1 of 2, 50: 2 of 2, 150: 1 of 2; outside: L-2 (16 %), "
+                + "H-2 (−17 %)", run.reason());
+        // a third QC outside: 3 of 6 is less than two thirds
+        samples.put("M-2", new double[] {50, -15.5});
+        assertEquals(FAIL, judged(qcs(samples)).get(0).outcome());
+        // 4 of 6 overall, but none of the low level: fewer than half at a level
+        samples.put("M-2", new double[] {50, -4.0});
+        samples.put("L-1", new double[] {3, 15.2});
+        samples.put("H-2", new double[] {150, 2.0});
+        Verdict level = judged(qcs(samples)).get(0);
+        assertEquals(FAIL, level.outcome(), level.reason());
+        assertTrue(level.reason().startsWith("4 of 6 QCs within their limit; by known value 3: 0 of 2,"), level.reason());
     }
 
     @Test
@@ -257,11 +297,11 @@ class M10ProfileTest {
     @Test
     void aSingleLevelIsAtTheLloqOnlyWhenIdentifiedAndAMissingFamilyIsNotEvaluable() {
         Map<String, double[]> one = Map.of("QC-1", new double[] {5, 18});
-        Verdict v = judged(qcs(one)).get(0);
+        Verdict v = PER_QC.judge(qcs(one)).get(0);
         assertEquals(FAIL, v.outcome(), "one level, no LLOQ identified: the general ±15 % applies");
         assertTrue(v.reason().endsWith("; LLOQ not identified (name it with 'lloq-level:' in the cell), general limit "
                 + "applied"), v.reason());
-        assertEquals(PASS, judged(qcs(one, "QC-1")).get(0).outcome(), "a precision run at the LLOQ alone: ±20 %");
+        assertEquals(PASS, PER_QC.judge(qcs(one, "QC-1")).get(0).outcome(), "a run of LLOQ QCs alone: ±20 %");
         SectionResult noQc = new SectionResult("u", AnalysisKind.UNKNOWNS, "Samples", List.of(), List.of(), List.of(),
                 new DataTable(List.of(), List.of()), List.of(), List.of(), List.of());
         assertEquals(Verdict.Outcome.NOT_EVALUABLE, judged(noQc).get(0).outcome());
@@ -304,8 +344,15 @@ class M10ProfileTest {
                   - kind: detection-limit
                     quantity: loq
                     not-above: lowest_standard
+                  - kind: unknowns
+                    quantity: qc_deviation_percent
+                    characteristic: Run QCs
+                    within: 15
+                    fraction: 0.667
+                    fraction-per-level: 0.5
                 """);
         List<Rule> rules = ProfileFile.read(file, "lab.yaml").rules();
+        assertEquals(new QcRunRule("Run QCs", 15, 15, 0.667, 0.5, "laboratory profile"), rules.get(4));
         assertEquals(new DeviationRule("deviation_percent", 15, 20, 0.75, 6, "laboratory profile"), rules.get(0));
         assertEquals(new LevelRule(AnalysisKind.UNKNOWNS, "qc_deviation_percent", "qc_deviation_percent", true, 15, 20,
                 "qc_deviation_percent", "laboratory profile"), rules.get(1));
@@ -331,6 +378,15 @@ class M10ProfileTest {
                 + "    lowest-level-within: 20\n");
         assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
                 .contains("'lowest-level-within:' only beside 'within:'"));
+        Files.writeString(file, "rules:\n  - kind: precision\n    quantity: cv_percent\n    at-most: 15\n"
+                + "    fraction-per-level: 0.5\n");
+        assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
+                .contains("'fraction-per-level:' only in a rule on deviation_percent (or, 'fraction:' and "
+                        + "'fraction-per-level:', on an unknowns cell's qc_deviation_percent)"));
+        Files.writeString(file, "rules:\n  - kind: unknowns\n    quantity: qc_deviation_percent\n    within: 15\n"
+                + "    fraction: 1.5\n");
+        assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
+                .contains("'fraction:' in (0, 1] and 'fraction-per-level:' in [0, 1]"));
         Files.writeString(file, "rules:\n  - quantity: r_squared\n    at-least: 0.99\n    at-most: 1\n");
         assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
                 .contains("found at-least, at-most"));

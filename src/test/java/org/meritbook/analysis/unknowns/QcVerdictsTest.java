@@ -4,16 +4,26 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.SectionResult;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
 import org.meritbook.analysis.Verdict;
 import org.meritbook.criteria.BuiltInProfiles;
+import org.meritbook.criteria.LevelRule;
+import org.meritbook.dossier.DossierRenderer;
+import org.meritbook.pipeline.StudyResults;
 import org.meritbook.error.InputException;
+import org.meritbook.study.AnalysisKind;
 import org.meritbook.study.Study;
 import org.meritbook.study.StudyParser;
 import org.meritbook.workbook.CellRef;
@@ -22,9 +32,11 @@ import org.meritbook.workbook.Column;
 import org.meritbook.workbook.DataBlock;
 
 /**
- * QC samples read back through a calibration and judged by the bioanalysis-m10 profile (issue 11):
- * ±15 % of the known value, ±20 % at the LLOQ, the calibration's lowest standard above zero; a low QC
- * above it is held to ±15 % (ICH M10 (2022), calibration curve and accuracy and precision, from memory). Calibration: Miller &amp; Miller's fluorescence example
+ * QC samples read back through a calibration and judged with ICH M10's limits (ICH M10 (2022),
+ * calibration curve, accuracy and precision, and analytical run acceptance, from memory): each QC
+ * within ±15 % of the known value, ±20 % at the LLOQ, the calibration's lowest standard above zero (a
+ * low QC above it is held to ±15 %); the bioanalysis-m10 profile accepts the run when two thirds of its
+ * QCs, and half of those at each level, are within their limits. Calibration: Miller &amp; Miller's fluorescence example
  * (handbook worked example, ch. 5, from memory), a ≈ 1.518, b ≈ 1.930; each QC's reading is
  * a + b·x₀ for an intended x₀, far enough from the limits (±18 %, −5 %) that the fit's last digits
  * do not matter.
@@ -74,6 +86,14 @@ class QcVerdictsTest {
      * @param extra       lines added to the unknowns cell
      */
     private static SectionResult qcs(String[][] samples, String knownUnit, String calibration, String extra) {
+        return run(Path.of("study.md"), samples, knownUnit, calibration, extra).unknowns();
+    }
+
+    /** The study as parsed from {@code notebook}, its calibration and its unknowns section. */
+    private record Run(Study study, SectionResult calibration, SectionResult unknowns) {
+    }
+
+    private static Run run(Path notebook, String[][] samples, String knownUnit, String calibration, String extra) {
         double[] x = {0, 2, 4, 6, 8, 10, 12};
         double[] y = {2.1, 5.0, 9.0, 12.6, 17.3, 21.0, 24.7};
         String[][] cal = new String[x.length][];
@@ -106,14 +126,25 @@ class QcVerdictsTest {
                 known: Nominal
                 %s```
                 """.formatted(calibration, samples.length + 1, extra);
-        Study study = StudyParser.parse(text, Path.of("study.md"));
+        if (!notebook.equals(Path.of("study.md"))) {
+            try {
+                Files.writeString(notebook, text, StandardCharsets.UTF_8); // the dossier attaches it
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        }
+        Study study = StudyParser.parse(text, notebook);
         AnalysisContext context = new AnalysisContext(study, ref -> ref.target().equals("Cal") ? standards : rows);
         SectionResult c = new CalibrationAnalysis().run(study.cells().get(0), context);
-        return new UnknownsAnalysis().run(study.cells().get(1), context.with(c));
+        return new Run(study, c, new UnknownsAnalysis().run(study.cells().get(1), context.with(c)));
     }
 
+    /** One verdict per QC, with ICH M10's limits (±15 %, ±20 % at the LLOQ; from memory), as a lab profile writes it. */
+    private static final LevelRule PER_QC = new LevelRule(AnalysisKind.UNKNOWNS, "QC samples", "qc_deviation_percent",
+            true, 15, 20, "QC deviation", "ICH M10 (2022), from memory");
+
     private static List<Verdict> judged(SectionResult u) {
-        return BuiltInProfiles.all().get("bioanalysis-m10").judge(u).verdicts();
+        return PER_QC.judge(u);
     }
 
     @Test
@@ -132,6 +163,42 @@ class QcVerdictsTest {
         assertTrue(u.settings().stream().anyMatch(s -> s.label().equals("LLOQ level") && s.value().equals(
                 "QC-LLOQ: known value equal to the lowest standard above zero of calibration 'cal' (2.000 mg/L)")),
                 u.settings().toString());
+    }
+
+    @Test
+    void theM10ProfileJudgesTheRunByItsQcsTogether() {
+        // The same three QCs: two of three within their limits is two thirds, but the 6 mg/L level has none.
+        SectionResult u = qcs(new String[][] {
+            {"QC-H", reading(10 * 0.95), "10"},
+            {"QC-LLOQ", reading(2 * 1.18), "2"},
+            {"QC-M", reading(6 * 1.18), "6"}}, "");
+        List<Verdict> v = BuiltInProfiles.all().get("bioanalysis-m10").judge(u).verdicts();
+        assertEquals(1, v.size(), v.toString());
+        assertEquals("QC samples of the run", v.get(0).characteristic());
+        assertEquals("QCs within ±15 % of their known value (±20 % at the LLOQ), at least two thirds of them and 50 % at "
+                + "each level", v.get(0).rule());
+        assertEquals(Verdict.Outcome.FAIL, v.get(0).outcome(), v.get(0).reason());
+        assertTrue(v.get(0).reason().startsWith("2 of 3 QCs within their limit; by known value 2 (LLOQ): 1 of 1, 6: 0 of 1, "
+                + "10: 1 of 1; outside: QC-M ("), v.get(0).reason());
+    }
+
+    @Test
+    void theDossierSummaryPointsEachQcToTheRunVerdict(@TempDir Path dir) {
+        Run r = run(dir.resolve("study.md"), new String[][] {
+            {"QC-H", reading(10 * 0.95), "10"},
+            {"QC-M", reading(6 * 1.18), "6"}}, "mg/L", "", "");
+        SectionResult judged = r.unknowns().withVerdicts(BuiltInProfiles.all().get("bioanalysis-m10").judge(r.unknowns())
+                .verdicts());
+        StudyResults results = new StudyResults(r.study(), List.of(), List.of(r.calibration(), judged),
+                List.of(new StudyResults.SoftwareComponent("meritbook", "test")));
+        String html = new String(new DossierRenderer(Optional.empty()).renderHtml(results,
+                "{}".getBytes(StandardCharsets.UTF_8)), StandardCharsets.UTF_8);
+        int row = html.lastIndexOf("<tr", html.indexOf("judged with the others, below"));
+        String summary = html.substring(row, html.indexOf("</tr>", row));
+        assertTrue(summary.contains("QC deviation from its known value, QC-H"), summary);
+        assertTrue(summary.contains("judged with the others, below") && summary.contains("Judged together"), summary);
+        assertTrue(summary.contains("in &#39;QC samples of the run&#39; below"), summary); // HTML-escaped quotes
+        assertTrue(html.contains("QC samples of the run"), "the run's own verdict row");
     }
 
     @Test
