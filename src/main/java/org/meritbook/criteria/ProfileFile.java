@@ -130,21 +130,21 @@ final class ProfileFile {
         String characteristic = r.get("characteristic") == null ? q : String.valueOf(r.get("characteristic"));
         String source = r.get("source") == null ? "laboratory profile" : String.valueOf(r.get("source"));
         if (q.equals("deviation_percent")) {
-            double within = number(r, "within", where, which);
-            double lowest = r.containsKey("lowest-level-within") ? number(r, "lowest-level-within", where, which) : within;
-            double fraction = r.containsKey("fraction") ? number(r, "fraction", where, which) : 1.0;
+            onlyKeys(r, Set.of("within", "lowest-level-within", "fraction", "minimum-levels"),
+                    "a rule on a calibration's deviation_percent", where, which);
+            double within = positive(r, "within", where, which);
+            double lowest = r.containsKey("lowest-level-within") ? positive(r, "lowest-level-within", where, which) : within;
+            double fraction = r.containsKey("fraction") ? fraction(r, "fraction", false, where, which) : 1.0;
             return new DeviationRule(characteristic, within, lowest, fraction, levels(r, where, which), source);
         }
         if (q.equals("qc_deviation_percent") && kind == AnalysisKind.UNKNOWNS
                 && (r.containsKey("fraction") || r.containsKey("fraction-per-level"))) {
-            double within = number(r, "within", where, which);
-            double lowest = r.containsKey("lowest-level-within") ? number(r, "lowest-level-within", where, which) : within;
-            double fraction = r.containsKey("fraction") ? number(r, "fraction", where, which) : 1.0;
-            double perLevel = r.containsKey("fraction-per-level") ? number(r, "fraction-per-level", where, which) : 0;
-            if (!(fraction > 0 && fraction <= 1 && perLevel >= 0 && perLevel <= 1)) {
-                throw bad(where, which + ": 'fraction:' in (0, 1] and 'fraction-per-level:' in [0, 1]",
-                        "fraction " + Limits.text(fraction) + ", fraction-per-level " + Limits.text(perLevel));
-            }
+            onlyKeys(r, Set.of("within", "lowest-level-within", "fraction", "fraction-per-level"),
+                    "a rule on a run's QCs together (fraction: or fraction-per-level: on qc_deviation_percent)", where, which);
+            double within = positive(r, "within", where, which);
+            double lowest = r.containsKey("lowest-level-within") ? positive(r, "lowest-level-within", where, which) : within;
+            double fraction = r.containsKey("fraction") ? fraction(r, "fraction", false, where, which) : 1.0;
+            double perLevel = r.containsKey("fraction-per-level") ? fraction(r, "fraction-per-level", true, where, which) : 0;
             return new QcRunRule(characteristic, within, lowest, fraction, perLevel, source);
         }
         for (String only : List.of("fraction", "minimum-levels", "fraction-per-level")) {
@@ -235,6 +235,48 @@ final class ProfileFile {
         String w = String.valueOf(written);
         return Comparison.fromWord(w).orElseThrow(() -> bad(where, "'compare:' one of " + String.join(", ", Comparison.words()),
                 "'" + w + "'" + Suggestion.hint(w, Comparison.words())));
+    }
+
+    /** The limit keys and qualifiers besides those of every rule: any other is refused, never ignored. */
+    private static void onlyKeys(Map<?, ?> r, Set<String> allowed, String what, String where, String which) {
+        Set<String> common = Set.of("kind", "quantity", "characteristic", "source");
+        List<String> other = r.keySet().stream().map(String::valueOf).filter(k -> !common.contains(k) && !allowed.contains(k))
+                .sorted().toList();
+        if (!other.isEmpty()) {
+            throw bad(where, which + ": in " + what + " only " + allowed.stream().sorted().map(k -> "'" + k + ":'").toList(),
+                    other.stream().map(k -> "'" + k + ":'").toList().toString());
+        }
+        if (!r.containsKey("within")) {
+            throw bad(where, which + ": 'within:' (the allowed |% deviation|) in " + what, "none");
+        }
+    }
+
+    private static double positive(Map<?, ?> r, String key, String where, String which) {
+        double v = number(r, key, where, which);
+        if (v <= 0) {
+            throw bad(where, which + ": a positive number for '" + key + "'", "'" + r.get(key) + "'");
+        }
+        return v;
+    }
+
+    /**
+     * A share: a number in (0, 1] ([0, 1] when {@code zeroAllowed}), or a ratio written as such ("2/3"), so
+     * that two thirds is exactly two thirds: 0.667 of 6 QCs would ask for 4.002 of them.
+     */
+    private static double fraction(Map<?, ?> r, String key, boolean zeroAllowed, String where, String which) {
+        Object v = r.get(key);
+        double f = Double.NaN;
+        if (v instanceof Number n) {
+            f = n.doubleValue();
+        } else if (v instanceof String text && text.matches("\\s*[0-9]+\\s*/\\s*[1-9][0-9]*\\s*")) {
+            String[] parts = text.split("/");
+            f = Double.parseDouble(parts[0].strip()) / Double.parseDouble(parts[1].strip());
+        }
+        if (!(f <= 1 && (zeroAllowed ? f >= 0 : f > 0))) {
+            throw bad(where, which + ": for '" + key + "' a share in " + (zeroAllowed ? "[0, 1]" : "(0, 1]")
+                    + ", as a number (0.75) or a ratio (2/3)", "'" + v + "'");
+        }
+        return f;
     }
 
     private static double number(Map<?, ?> r, String key, String where, String which) {

@@ -3,7 +3,7 @@ package org.meritbook.criteria;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeMap;
+import java.util.function.Predicate;
 import org.meritbook.analysis.LloqLevel;
 import org.meritbook.analysis.NominalValues;
 import org.meritbook.analysis.Quantity;
@@ -17,7 +17,8 @@ import org.meritbook.study.AnalysisKind;
  * (half), within ±tolerance % of their known value, ±lloqTolerance % for the QCs the section
  * identifies at the LLOQ ({@link LloqLevel}). One QC outside its limit does not fail the run by
  * itself; the rule gives one verdict for the section's QCs, counting them and naming those outside.
- * A level is the QCs' known value ({@link NominalValues}).
+ * A level is the QCs' known value ({@link NominalValues}); a QC that could not be read back counts as
+ * outside. Each QC sample counts once (the unknowns cell averages the readings of one sample name).
  *
  * @param characteristic       what is judged, e.g. "QC samples of the run"
  * @param tolerance            allowed |% deviation| from the known value
@@ -32,6 +33,8 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
     /** The family judged, named in the verdict: the dossier's summary points its members to it. */
     static final String FAMILY = "qc_deviation_percent";
     static final String PREFIX = FAMILY + ":";
+    /** Known values this close (relative) are one concentration level, as in {@code LloqLevels}. */
+    private static final double SAME_LEVEL = 1e-9;
     /** Slack for a share compared with its minimum: 4 of 6 is two thirds although 6 · 2/3 is not exactly 4. */
     private static final double SHARE_SLACK = 1e-9;
 
@@ -60,47 +63,88 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
         if (section.kind() != AnalysisKind.UNKNOWNS) {
             return List.of();
         }
-        List<Quantity> qcs = section.quantities().stream().filter(q -> q.name().startsWith(PREFIX)).toList();
-        if (qcs.isEmpty()) {
+        // Every QC the section has, read back or not: one that could not be read back counts as outside.
+        Map<String, Double> knownByQc = section.export(NominalValues.class).map(NominalValues::byLabel).orElse(Map.of());
+        if (knownByQc.isEmpty()) {
             return List.of(new Verdict(characteristic, FAMILY, text(), Verdict.Outcome.NOT_EVALUABLE,
-                    "no QC sample (a sample with a known value) read back"));
+                    "no QC sample (a sample with a known value) in the section"));
         }
         LloqLevel lloq = section.export(LloqLevel.class).orElse(null);
         boolean identified = lloq != null && !lloq.labels().isEmpty();
-        Map<Double, int[]> byLevel = new TreeMap<>(); // known value → {within, all, at the LLOQ}
-        List<String> outside = new ArrayList<>();
-        boolean lloqWouldTurn = false;
-        for (Quantity q : qcs) {
-            String label = q.name().substring(PREFIX.length());
-            double known = NominalValues.of(section, q.name()).orElseThrow(() -> new IllegalStateException(
-                    "unknowns section " + section.id() + " exports no known value for " + q.name()));
-            boolean atLloq = identified && lloq.contains(label);
-            double limit = atLloq ? lloqTolerance : tolerance;
-            int[] counts = byLevel.computeIfAbsent(known, k -> new int[3]);
-            counts[1]++;
-            counts[2] += atLloq ? 1 : 0;
-            double size = Math.abs(q.value());
-            if (comparison.passes(size, limit, false)) {
-                counts[0]++;
-            } else {
-                // the size is compared with the limit; the sign is printed as computed
-                outside.add(label + " (" + (q.value() < 0 ? "−" : "") + comparison.text(size, limit) + " %)");
+        List<Qc> qcs = new ArrayList<>();
+        for (Map.Entry<String, Double> e : knownByQc.entrySet()) {
+            Double deviation = section.quantity(PREFIX + e.getKey()).map(Quantity::value).orElse(null);
+            qcs.add(new Qc(e.getKey(), e.getValue(), deviation, identified && lloq.contains(e.getKey())));
+        }
+        List<Double> levels = levels(qcs);
+        Tally tally = tally(qcs, levels, comparison, qc -> qc.atLloq());
+        String reason = tally.within() + " of " + qcs.size() + " QCs within their limit; by known value "
+                + String.join(", ", tally.byLevel()) + (tally.outside().isEmpty() ? "" : "; outside: "
+                + String.join(", ", tally.outside()));
+        if (!tally.pass() && !identified && lloqTolerance != tolerance) {
+            // said only where it would turn the run: the lowest level's QCs, were they at the LLOQ
+            double lowest = levels.get(0);
+            if (tally(qcs, levels, comparison, qc -> sameLevel(qc.known(), lowest)).pass()) {
+                reason += LevelRule.NOT_IDENTIFIED;
             }
-            lloqWouldTurn |= !identified && comparison.passes(size, lloqTolerance, false) != comparison.passes(size,
-                    tolerance, false);
         }
-        int within = qcs.size() - outside.size();
-        boolean pass = within >= minimumFraction * qcs.size() - SHARE_SLACK;
-        List<String> levels = new ArrayList<>();
-        for (Map.Entry<Double, int[]> e : byLevel.entrySet()) {
-            int[] c = e.getValue();
-            pass &= c[0] >= minimumLevelFraction * c[1] - SHARE_SLACK;
-            levels.add(Limits.text(e.getKey()) + (c[2] > 0 ? " (LLOQ)" : "") + ": " + c[0] + " of " + c[1]);
+        return List.of(new Verdict(characteristic, FAMILY, text(),
+                tally.pass() ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL, reason));
+    }
+
+    /** One QC sample: its known value, its % deviation (null when it was not read back), whether at the LLOQ. */
+    private record Qc(String label, double known, Double deviation, boolean atLloq) {
+    }
+
+    private record Tally(boolean pass, int within, List<String> byLevel, List<String> outside) {
+    }
+
+    /** The distinct known values, ascending; values within a relative 1e-9 are one level (as typed numbers are). */
+    private static List<Double> levels(List<Qc> qcs) {
+        List<Double> levels = new ArrayList<>();
+        qcs.stream().map(Qc::known).sorted().forEach(k -> {
+            if (levels.isEmpty() || !sameLevel(levels.get(levels.size() - 1), k)) {
+                levels.add(k);
+            }
+        });
+        return levels;
+    }
+
+    private static boolean sameLevel(double a, double b) {
+        return Math.abs(a - b) <= SAME_LEVEL * Math.max(Math.abs(a), Math.abs(b));
+    }
+
+    private Tally tally(List<Qc> qcs, List<Double> levels, Comparison comparison, Predicate<Qc> atLloq) {
+        int within = 0;
+        boolean pass = true;
+        List<String> byLevel = new ArrayList<>();
+        List<String> outside = new ArrayList<>();
+        for (double level : levels) {
+            int in = 0;
+            int all = 0;
+            boolean lloqHere = false;
+            for (Qc qc : qcs) {
+                if (!sameLevel(qc.known(), level)) {
+                    continue;
+                }
+                all++;
+                lloqHere |= atLloq.test(qc);
+                double limit = atLloq.test(qc) ? lloqTolerance : tolerance;
+                if (qc.deviation() == null) {
+                    outside.add(qc.label() + " (not read back)");
+                } else if (comparison.passes(Math.abs(qc.deviation()), limit, false)) {
+                    in++;
+                } else {
+                    // the size is compared with the limit; the sign is printed as computed
+                    outside.add(qc.label() + " (" + (qc.deviation() < 0 ? "−" : "")
+                            + comparison.text(Math.abs(qc.deviation()), limit) + " %)");
+                }
+            }
+            pass &= in >= minimumLevelFraction * all - SHARE_SLACK;
+            within += in;
+            byLevel.add(Limits.text(level) + (lloqHere ? " (LLOQ)" : "") + ": " + in + " of " + all);
         }
-        String reason = within + " of " + qcs.size() + " QCs within their limit; by known value " + String.join(", ", levels)
-                + (outside.isEmpty() ? "" : "; outside: " + String.join(", ", outside))
-                + (!pass && lloqWouldTurn ? LevelRule.NOT_IDENTIFIED : ""); // said only where it may turn the run
-        return List.of(new Verdict(characteristic, FAMILY, text(), pass ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL,
-                reason));
+        pass &= within >= minimumFraction * qcs.size() - SHARE_SLACK;
+        return new Tally(pass, within, byLevel, outside);
     }
 }

@@ -175,6 +175,14 @@ class M10ProfileTest {
         Verdict level = judged(qcs(samples)).get(0);
         assertEquals(FAIL, level.outcome(), level.reason());
         assertTrue(level.reason().startsWith("4 of 6 QCs within their limit; by known value 3: 0 of 2,"), level.reason());
+        // known values that differ only in the last digits of a typed number are one level
+        Map<String, double[]> close = new java.util.LinkedHashMap<>();
+        close.put("L-1", new double[] {3, 16.0});
+        close.put("L-2", new double[] {3.0000000000001, 1.0});
+        close.put("M-1", new double[] {50, 1.0});
+        Verdict one = judged(qcs(close)).get(0);
+        assertEquals(PASS, one.outcome(), one.reason());
+        assertTrue(one.reason().startsWith("2 of 3 QCs within their limit; by known value 3: 1 of 2, 50: 1 of 1"), one.reason());
     }
 
     @Test
@@ -348,11 +356,20 @@ class M10ProfileTest {
                     quantity: qc_deviation_percent
                     characteristic: Run QCs
                     within: 15
-                    fraction: 0.667
+                    fraction: 2/3
                     fraction-per-level: 0.5
                 """);
         List<Rule> rules = ProfileFile.read(file, "lab.yaml").rules();
-        assertEquals(new QcRunRule("Run QCs", 15, 15, 0.667, 0.5, "laboratory profile"), rules.get(4));
+        assertEquals(new QcRunRule("Run QCs", 15, 15, 2.0 / 3, 0.5, "laboratory profile"), rules.get(4));
+        // two thirds written as a ratio is two thirds: 4 of 6 QCs within pass (0.667 would ask for 4.002)
+        Map<String, double[]> run = new java.util.LinkedHashMap<>();
+        run.put("L-1", new double[] {3, 5.0});
+        run.put("L-2", new double[] {3, 16.0});
+        run.put("M-1", new double[] {50, 3.0});
+        run.put("M-2", new double[] {50, 17.0});
+        run.put("H-1", new double[] {150, 2.0});
+        run.put("H-2", new double[] {150, -1.0});
+        assertEquals(PASS, rules.get(4).judge(qcs(run)).get(0).outcome());
         assertEquals(new DeviationRule("deviation_percent", 15, 20, 0.75, 6, "laboratory profile"), rules.get(0));
         assertEquals(new LevelRule(AnalysisKind.UNKNOWNS, "qc_deviation_percent", "qc_deviation_percent", true, 15, 20,
                 "qc_deviation_percent", "laboratory profile"), rules.get(1));
@@ -386,7 +403,15 @@ class M10ProfileTest {
         Files.writeString(file, "rules:\n  - kind: unknowns\n    quantity: qc_deviation_percent\n    within: 15\n"
                 + "    fraction: 1.5\n");
         assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
-                .contains("'fraction:' in (0, 1] and 'fraction-per-level:' in [0, 1]"));
+                .contains("for 'fraction' a share in (0, 1], as a number (0.75) or a ratio (2/3) but found '1.5'"));
+        Files.writeString(file, "rules:\n  - kind: unknowns\n    quantity: qc_deviation_percent\n    within: 0\n"
+                + "    fraction: 2/3\n");
+        assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
+                .contains("a positive number for 'within' but found '0'"), "an input error, not a crash");
+        Files.writeString(file, "rules:\n  - kind: unknowns\n    quantity: qc_deviation_percent\n    at-most: 15\n"
+                + "    fraction: 2/3\n");
+        assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
+                .contains("but found ['at-most:']"), "a limit key the rule would ignore is refused");
         Files.writeString(file, "rules:\n  - quantity: r_squared\n    at-least: 0.99\n    at-most: 1\n");
         assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
                 .contains("found at-least, at-most"));

@@ -84,6 +84,9 @@ public final class UnknownsAnalysis implements Analysis {
         Map<String, String> notes = new LinkedHashMap<>();
         for (Group g : groups.values()) {
             g.rows().forEach(r -> groupOfRow.put(r.index(), g));
+            if (g.known() != null) {
+                section.nominal(g.label(), g.known()); // every QC, read back or not: a run's QCs are counted from it
+            }
             notes.put(g.label(), readBack(section, g, line, calibration, units, loq, options, rows.columns()));
         }
         lloq(cell, context, groups.values(), line, units).ifPresent(l -> LloqLevels.record(section, l));
@@ -290,7 +293,6 @@ public final class UnknownsAnalysis implements Analysis {
                     "(result − known) / known × 100", List.of(section.ref("result", resultId),
                             StepInput.number("known", known, units.known(), options.knownSource(g))),
                     (result - known) / known * 100.0, "%").inSummary());
-            section.nominal(id, known);
             if (units.known() != null && resultUnit != null && !units.known().equals(resultUnit)) {
                 throw new IllegalStateException("known and result units were checked to agree");
             }

@@ -202,6 +202,22 @@ class QcVerdictsTest {
     }
 
     @Test
+    void aQcThatCannotBeReadBackCountsAsOutsideInTheRun() {
+        // 1/x gives no weight at x₀ ≤ 0, so QC-L1 (a response below the intercept) is not read back. Counted as
+        // outside, the run has 2 of 4 within, less than two thirds; dropped, it would have passed with 2 of 3.
+        SectionResult u = qcs(new String[][] {
+            {"QC-L1", reading(-1), "3"},
+            {"QC-L2", reading(3 * 1.02), "3"},
+            {"QC-M1", reading(6 * 0.97), "6"},
+            {"QC-M2", reading(6 * 1.18), "6"}}, "mg/L", "weighting: 1/x\n" + exclusion("B2", "zero calibrator"), "");
+        assertTrue(u.warnings().stream().anyMatch(w -> w.startsWith("Sample QC-L1: not read back")), u.warnings().toString());
+        Verdict run = BuiltInProfiles.all().get("bioanalysis-m10").judge(u).verdicts().get(0);
+        assertEquals(Verdict.Outcome.FAIL, run.outcome(), run.reason());
+        assertTrue(run.reason().startsWith("2 of 4 QCs within their limit; by known value 3: 1 of 2, 6: 1 of 2; outside: "
+                + "QC-L1 (not read back), QC-M2 ("), run.reason());
+    }
+
+    @Test
     void aLowQcAboveTheLowestStandardIsHeldToTheGeneralLimit() {
         // QC-L at 3 mg/L is a low QC, not the LLOQ (2 mg/L): +18 % fails, where taking the lowest QC for the
         // LLOQ would have passed it.
