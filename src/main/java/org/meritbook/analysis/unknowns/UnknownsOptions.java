@@ -57,6 +57,14 @@ final class UnknownsOptions {
                     "both 'mass:' and 'volume:' to give the result in the sample's units", "no '" + missing + ":'",
                     "Add '" + missing + ":' (a column or a value with its unit), or remove the other.");
         }
+        if (dilution != null && volume == null) {
+            // x₀ is the measured solution's concentration; only the content in the sample is scaled by D
+            throw new InputException(ErrorKey.MISSING_OPTION, context.where(cell.lineOf("dilution")),
+                    "'mass:' and 'volume:' beside 'dilution:' (the dilution scales the content in the sample, "
+                            + "c = x₀ · V · D / m)", "'dilution:' without them, which would leave every result and QC "
+                            + "deviation unscaled", "Add the test portion's mass and the extract's volume, or remove "
+                            + "'dilution:' and read the samples back as measured (x₀, the solution's concentration).");
+        }
         if (resultUnit != null && !SampleUnits.isResultUnit(resultUnit)) {
             throw new InputException(ErrorKey.BAD_OPTION_VALUE, context.where(cell.lineOf("result-unit")),
                     "result-unit: one of " + SampleUnits.resultUnits(), "'" + resultUnit + "'",

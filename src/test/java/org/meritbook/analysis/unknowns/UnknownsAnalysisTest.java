@@ -212,6 +212,12 @@ class UnknownsAnalysisTest {
         InputException onlyMass = assertThrows(InputException.class, () -> run("none", "mass: Mass\n", cal,
                 samples(new String[][] {{"A", "2.9", "5"}})));
         assertEquals(ErrorKey.MISSING_OPTION, onlyMass.key());
+        // a dilution alone would scale nothing: x₀ is the measured solution's, and a QC's deviation would be off by D
+        InputException onlyDilution = assertThrows(InputException.class, () -> run("none", "dilution: Dilution\n", cal,
+                samples(new String[][] {{"A", "2.9", "5", "2"}})));
+        assertEquals(ErrorKey.MISSING_OPTION, onlyDilution.key());
+        assertTrue(onlyDilution.getMessage().startsWith("study.md line 20: expected 'mass:' and 'volume:' beside "
+                + "'dilution:'"), onlyDilution.getMessage());
         InputException unit = assertThrows(InputException.class, () -> run("none", "mass: Mass\nvolume: 50 gallons\n",
                 cal, samples(new String[][] {{"A", "2.9", "5"}})));
         assertEquals(ErrorKey.BAD_OPTION_VALUE, unit.key());
