@@ -16,6 +16,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.meritbook.analysis.AnalysisContext;
 import org.meritbook.analysis.SectionResult;
+import org.meritbook.analysis.Setting;
 import org.meritbook.analysis.calibration.CalibrationAnalysis;
 import org.meritbook.analysis.Verdict;
 import org.meritbook.criteria.BuiltInProfiles;
@@ -147,6 +148,12 @@ class QcVerdictsTest {
         return PER_QC.judge(u);
     }
 
+    /** The section's "LLOQ level" setting: which QCs stand at the LLOQ, and how they were found. */
+    private static String lloqSetting(SectionResult u) {
+        return u.settings().stream().filter(s -> s.label().equals("LLOQ level")).map(Setting::value).findFirst()
+                .orElse("(no LLOQ level setting)");
+    }
+
     @Test
     void eachQcIsJudgedWithTheLloqLevelSetApart() {
         // The lowest standard above zero is 2 mg/L (the 0 standard is a zero calibrator): QC-LLOQ stands there.
@@ -160,9 +167,8 @@ class QcVerdictsTest {
         // +18 % passes at the LLOQ (±20 %) and fails at the mid level (±15 %)
         assertEquals(List.of(Verdict.Outcome.PASS, Verdict.Outcome.PASS, Verdict.Outcome.FAIL),
                 v.stream().map(Verdict::outcome).toList(), v.toString());
-        assertTrue(u.settings().stream().anyMatch(s -> s.label().equals("LLOQ level") && s.value().equals(
-                "QC-LLOQ: known value equal to the lowest standard above zero of calibration 'cal' (2.000 mg/L)")),
-                u.settings().toString());
+        assertEquals(
+                "QC-LLOQ: known value equal to the lowest standard above zero of calibration 'cal' (2.000 mg/L)", lloqSetting(u));
     }
 
     @Test
@@ -228,9 +234,8 @@ class QcVerdictsTest {
         assertEquals(List.of("QC samples (QC-L)", "QC samples (QC-H)"), v.stream().map(Verdict::characteristic).toList());
         assertEquals(List.of(Verdict.Outcome.FAIL, Verdict.Outcome.PASS), v.stream().map(Verdict::outcome).toList(),
                 v.toString());
-        assertTrue(u.settings().stream().anyMatch(s -> s.label().equals("LLOQ level") && s.value().equals(
-                "none: no known value equals the lowest standard above zero of calibration 'cal' (2.000 mg/L)")),
-                u.settings().toString());
+        assertEquals(
+                "none: no known value equals the lowest standard above zero of calibration 'cal' (2.000 mg/L)", lloqSetting(u));
         // named in the cell, the same QC is judged at the LLOQ's ±20 %
         List<Verdict> named = judged(qcs(new String[][] {
             {"QC-L", reading(3 * 1.18), "3"},
@@ -272,9 +277,8 @@ class QcVerdictsTest {
         SectionResult u = qcs(new String[][] {
             {"QC-L", reading(4 * 1.18), "4"},
             {"QC-H", reading(10 * 0.95), "10"}}, "mg/L", exclusion("B3", "injection failed"), "");
-        assertTrue(u.settings().stream().anyMatch(s -> s.label().equals("LLOQ level") && s.value().startsWith(
-                "none: the lowest standard above zero of calibration 'cal' (2.000 mg/L) is excluded from its fit")),
-                u.settings().toString());
+        assertTrue(lloqSetting(u).startsWith("none: the lowest standard above zero of calibration 'cal' (2.000 mg/L) is "
+                + "excluded from its fit"), lloqSetting(u));
         Verdict low = judged(u).get(0);
         assertEquals(Verdict.Outcome.FAIL, low.outcome(), low.reason());
         assertTrue(low.reason().endsWith("LLOQ not identified (name it with 'lloq-level:' in the cell), general limit "
@@ -290,9 +294,9 @@ class QcVerdictsTest {
         List<Verdict> v = judged(u);
         assertEquals(List.of("QC samples (LLOQ-A, LLOQ)", "QC samples (LLOQ-B, LLOQ)", "QC samples (QC-H)"),
                 v.stream().map(Verdict::characteristic).toList(), v.toString());
-        assertTrue(u.settings().stream().anyMatch(s -> s.label().equals("LLOQ level") && s.value().equals(
+        assertEquals(
                 "LLOQ-B, LLOQ-A: named in the cell (lloq-level: LLOQ-B); known value equal to the lowest standard above "
-                        + "zero of calibration 'cal' (2.000 mg/L)")), u.settings().toString());
+                        + "zero of calibration 'cal' (2.000 mg/L)", lloqSetting(u));
     }
 
     @Test
