@@ -91,9 +91,10 @@ public final class BuiltInProfiles {
                 "Bioanalytical method validation after ICH M10: standards, QCs, accuracy and precision per level.",
                 "built in", List.of(
                         new DeviationRule("Calibration standards", 15, 20, 0.75, 6, m10),
-                        new QcRunRule("QC samples of the run", 15, 20, 2.0 / 3, 0.5, "ICH M10 (2022), analytical run "
-                                + "acceptance: two thirds of the QCs and half at each level within ±15 % (from memory); "
-                                + "a default to confirm locally"),
+                        new QcRunRule("QC samples of the run", 15, 20, 2.0 / 3, 0.5, new QcRunRule.Design(3, 2),
+                                "ICH M10 (2022), analytical run acceptance: QCs at three levels (low, medium, high) at "
+                                        + "least in duplicate, two thirds of them and half at each level within ±15 % "
+                                        + "(from memory); a default to confirm locally"),
                         new LevelRule(AnalysisKind.ACCURACY, "Accuracy", "error_percent", true, 15, 20, "mean error",
                                 m10),
                         new LevelRule(AnalysisKind.PRECISION, "Precision, within run", "repeatability_cv_percent", false,

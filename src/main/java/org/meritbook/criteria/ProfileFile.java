@@ -42,8 +42,10 @@ import org.yaml.snakeyaml.error.YAMLException;
  *   - kind: unknowns               # the run's QCs together (QcRunRule)
  *     quantity: qc_deviation_percent
  *     within: 15
- *     fraction: 0.667
+ *     fraction: 2/3
  *     fraction-per-level: 0.5
+ *     minimum-levels: 3            # the run's QC design: 3 levels, 2 QCs each
+ *     minimum-per-level: 2
  *   - kind: detection-limit        # the limit is another quantity of the section (BoundRule)
  *     quantity: loq
  *     not-above: reporting_limit   # or not-below:
@@ -52,9 +54,13 @@ import org.yaml.snakeyaml.error.YAMLException;
 final class ProfileFile {
     private static final Set<String> TOP = Set.of("name", "description", "compare", "exclusions-record", "rules");
     private static final Set<String> RULE = Set.of("kind", "quantity", "at-least", "at-most", "within",
-            "lowest-level-within", "lowest-level-at-most", "fraction", "fraction-per-level", "minimum-levels", "not-above",
+            "lowest-level-within", "lowest-level-at-most", "fraction", "fraction-per-level", "minimum-levels",
+            "minimum-per-level", "not-above",
             "not-below",
             "characteristic", "source", "model");
+    /** The keys that make a rule judge several members at once: a calibration's standards or a run's QCs. */
+    private static final List<String> RUN_KEYS = List.of("fraction", "fraction-per-level", "minimum-levels",
+            "minimum-per-level");
     /** The keys that give a rule its limit; a rule has exactly one. */
     private static final List<String> LIMITS = List.of("at-least", "at-most", "within", "not-above", "not-below");
 
@@ -137,20 +143,21 @@ final class ProfileFile {
             double fraction = r.containsKey("fraction") ? fraction(r, "fraction", false, where, which) : 1.0;
             return new DeviationRule(characteristic, within, lowest, fraction, levels(r, where, which), source);
         }
-        if (q.equals("qc_deviation_percent") && kind == AnalysisKind.UNKNOWNS
-                && (r.containsKey("fraction") || r.containsKey("fraction-per-level"))) {
-            onlyKeys(r, Set.of("within", "lowest-level-within", "fraction", "fraction-per-level"),
-                    "a rule on a run's QCs together (fraction: or fraction-per-level: on qc_deviation_percent)", where, which);
+        if (q.equals("qc_deviation_percent") && kind == AnalysisKind.UNKNOWNS && RUN_KEYS.stream().anyMatch(r::containsKey)) {
+            onlyKeys(r, Set.of("within", "lowest-level-within", "fraction", "fraction-per-level", "minimum-levels",
+                    "minimum-per-level"), "a rule on a run's QCs together", where, which);
             double within = positive(r, "within", where, which);
             double lowest = r.containsKey("lowest-level-within") ? positive(r, "lowest-level-within", where, which) : within;
             double fraction = r.containsKey("fraction") ? fraction(r, "fraction", false, where, which) : 1.0;
             double perLevel = r.containsKey("fraction-per-level") ? fraction(r, "fraction-per-level", true, where, which) : 0;
-            return new QcRunRule(characteristic, within, lowest, fraction, perLevel, source);
+            QcRunRule.Design design = new QcRunRule.Design(whole(r, "minimum-levels", where, which),
+                    whole(r, "minimum-per-level", where, which));
+            return new QcRunRule(characteristic, within, lowest, fraction, perLevel, design, source);
         }
-        for (String only : List.of("fraction", "minimum-levels", "fraction-per-level")) {
+        for (String only : RUN_KEYS) {
             if (r.containsKey(only)) {
-                throw bad(where, which + ": '" + only + ":' only in a rule on deviation_percent (or, 'fraction:' and "
-                        + "'fraction-per-level:', on an unknowns cell's qc_deviation_percent)", "'" + only + ":' on " + q);
+                throw bad(where, which + ": '" + only + ":' only in a rule on a calibration's deviation_percent or on a "
+                        + "run's QCs (an unknowns cell's qc_deviation_percent)", "'" + only + ":' on " + q);
             }
         }
         List<String> given = LIMITS.stream().filter(r::containsKey).toList();
@@ -193,12 +200,17 @@ final class ProfileFile {
 
     /** {@code minimum-levels:}, a whole number, 0 when absent. */
     private static int levels(Map<?, ?> r, String where, String which) {
-        if (!r.containsKey("minimum-levels")) {
+        return whole(r, "minimum-levels", where, which);
+    }
+
+    /** A count the rule asks for; 0 when the key is absent. */
+    private static int whole(Map<?, ?> r, String key, String where, String which) {
+        if (!r.containsKey(key)) {
             return 0;
         }
-        double n = number(r, "minimum-levels", where, which);
+        double n = number(r, key, where, which);
         if (n != Math.rint(n) || n > Integer.MAX_VALUE) {
-            throw bad(where, which + ": a whole number for 'minimum-levels'", "'" + r.get("minimum-levels") + "'");
+            throw bad(where, which + ": a whole number for '" + key + "'", "'" + r.get(key) + "'");
         }
         return (int) n;
     }

@@ -26,10 +26,32 @@ import org.meritbook.study.AnalysisKind;
  * @param minimumFraction      fraction of all QCs that must be within their limit, in (0, 1]
  * @param minimumLevelFraction fraction of the QCs of each level that must be within their limit, in [0, 1]
  *                             (0: no rule per level)
+ * @param design               the fewest levels, and QCs at each, a run must have to be judged at all; short of
+ *                             it, a second verdict fails the run's QC design
  * @param source               where the limits come from
  */
 public record QcRunRule(String characteristic, double tolerance, double lloqTolerance, double minimumFraction,
-                        double minimumLevelFraction, String source) implements Rule {
+                        double minimumLevelFraction, Design design, String source) implements Rule {
+    /**
+     * The QCs a run must carry (ICH M10, from memory: low, medium and high QCs, at least in duplicate).
+     *
+     * @param levels   the fewest distinct known values (0: no minimum)
+     * @param perLevel the fewest QCs at each of them (0: no minimum)
+     */
+    public record Design(int levels, int perLevel) {
+        public static final Design NONE = new Design(0, 0);
+
+        public Design {
+            if (levels < 0 || perLevel < 0) {
+                throw new IllegalArgumentException("a QC design counts levels and QCs: not negative");
+            }
+        }
+
+        boolean any() {
+            return levels > 0 || perLevel > 0;
+        }
+    }
+
     /** The family judged, named in the verdict: the dossier's summary points its members to it. */
     static final String FAMILY = "qc_deviation_percent";
     static final String PREFIX = FAMILY + ":";
@@ -39,6 +61,7 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
     private static final double SHARE_SLACK = 1e-9;
 
     public QcRunRule {
+        java.util.Objects.requireNonNull(design, "design");
         if (!(tolerance > 0 && lloqTolerance > 0 && minimumFraction > 0 && minimumFraction <= 1
                 && minimumLevelFraction >= 0 && minimumLevelFraction <= 1)) {
             throw new IllegalArgumentException("QC limits must be positive, the fraction in (0, 1] and the fraction "
@@ -46,12 +69,20 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
         }
     }
 
+    /** A rule without a minimum QC design. */
+    public QcRunRule(String characteristic, double tolerance, double lloqTolerance, double minimumFraction,
+                     double minimumLevelFraction, String source) {
+        this(characteristic, tolerance, lloqTolerance, minimumFraction, minimumLevelFraction, Design.NONE, source);
+    }
+
     @Override
     public String text() {
         return "QCs within ±" + Limits.text(tolerance) + " % of their known value"
                 + (lloqTolerance == tolerance ? "" : " (±" + Limits.text(lloqTolerance) + " % at the LLOQ)")
                 + ", at least " + share(minimumFraction) + " of them"
-                + (minimumLevelFraction > 0 ? " and " + share(minimumLevelFraction) + " at each level" : "");
+                + (minimumLevelFraction > 0 ? " and " + share(minimumLevelFraction) + " at each level" : "")
+                + (design.any() ? "; QCs at " + design.levels() + " or more levels, " + design.perLevel()
+                        + " or more at each" : "");
     }
 
     private static String share(double f) {
@@ -88,8 +119,18 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
                 reason += LevelRule.NOT_IDENTIFIED;
             }
         }
-        return List.of(new Verdict(characteristic, FAMILY, text(),
-                tally.pass() ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL, reason));
+        Verdict run = new Verdict(characteristic, FAMILY, text(), tally.pass() ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL,
+                reason);
+        int fewest = levels.stream().mapToInt(l -> (int) qcs.stream().filter(q -> sameLevel(q.known(), l)).count()).min()
+                .orElse(0);
+        if (levels.size() >= design.levels() && fewest >= design.perLevel()) {
+            return List.of(run);
+        }
+        // short of the design the count above cannot accept the run: said as a verdict of its own
+        return List.of(run, new Verdict(characteristic + ": QC design", FAMILY, text(), Verdict.Outcome.FAIL,
+                "QCs at " + levels.size() + (levels.size() == 1 ? " level" : " levels") + ", " + fewest
+                        + " at the level with fewest; the rule asks for " + design.levels() + " or more levels with "
+                        + design.perLevel() + " or more QCs each"));
     }
 
     /** One QC sample: its known value, its % deviation (null when it was not read back), whether at the LLOQ. */

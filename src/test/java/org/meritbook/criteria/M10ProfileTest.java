@@ -160,7 +160,9 @@ class M10ProfileTest {
         samples.put("M-2", new double[] {50, -4.0});
         samples.put("H-1", new double[] {150, 2.0});
         samples.put("H-2", new double[] {150, -17.0});
-        Verdict run = judged(qcs(samples)).get(0);
+        List<Verdict> verdicts = judged(qcs(samples));
+        assertEquals(1, verdicts.size(), "three levels in duplicate: the design is met, no verdict on it");
+        Verdict run = verdicts.get(0);
         assertEquals(PASS, run.outcome(), run.reason());
         assertEquals("QC samples of the run", run.characteristic());
         assertEquals("4 of 6 QCs within their limit; by known value 3: 1 of 2, 50: 2 of 2, 150: 1 of 2; outside: L-2 (16 %), "
@@ -358,9 +360,11 @@ class M10ProfileTest {
                     within: 15
                     fraction: 2/3
                     fraction-per-level: 0.5
+                    minimum-per-level: 2
                 """);
         List<Rule> rules = ProfileFile.read(file, "lab.yaml").rules();
-        assertEquals(new QcRunRule("Run QCs", 15, 15, 2.0 / 3, 0.5, "laboratory profile"), rules.get(4));
+        assertEquals(new QcRunRule("Run QCs", 15, 15, 2.0 / 3, 0.5, new QcRunRule.Design(0, 2), "laboratory profile"),
+                rules.get(4));
         // two thirds written as a ratio is two thirds: 4 of 6 QCs within pass (0.667 would ask for 4.002)
         Map<String, double[]> run = new java.util.LinkedHashMap<>();
         run.put("L-1", new double[] {3, 5.0});
@@ -398,8 +402,8 @@ class M10ProfileTest {
         Files.writeString(file, "rules:\n  - kind: precision\n    quantity: cv_percent\n    at-most: 15\n"
                 + "    fraction-per-level: 0.5\n");
         assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()
-                .contains("'fraction-per-level:' only in a rule on deviation_percent (or, 'fraction:' and "
-                        + "'fraction-per-level:', on an unknowns cell's qc_deviation_percent)"));
+                .contains("'fraction-per-level:' only in a rule on a calibration's deviation_percent or on a run's QCs "
+                        + "(an unknowns cell's qc_deviation_percent)"));
         Files.writeString(file, "rules:\n  - kind: unknowns\n    quantity: qc_deviation_percent\n    within: 15\n"
                 + "    fraction: 1.5\n");
         assertTrue(assertThrows(InputException.class, () -> ProfileFile.read(file, "lab.yaml")).getMessage()

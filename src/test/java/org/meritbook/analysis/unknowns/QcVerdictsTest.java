@@ -179,10 +179,15 @@ class QcVerdictsTest {
             {"QC-LLOQ", reading(2 * 1.18), "2"},
             {"QC-M", reading(6 * 1.18), "6"}}, "");
         List<Verdict> v = BuiltInProfiles.all().get("bioanalysis-m10").judge(u).verdicts();
-        assertEquals(1, v.size(), v.toString());
+        assertEquals(2, v.size(), v.toString());
         assertEquals("QC samples of the run", v.get(0).characteristic());
         assertEquals("QCs within ±15 % of their known value (±20 % at the LLOQ), at least two thirds of them and 50 % at "
-                + "each level", v.get(0).rule());
+                + "each level; QCs at 3 or more levels, 2 or more at each", v.get(0).rule());
+        // one QC per level is short of ICH M10's duplicates (from memory): a verdict of its own
+        assertEquals("QC samples of the run: QC design", v.get(1).characteristic());
+        assertEquals(Verdict.Outcome.FAIL, v.get(1).outcome());
+        assertEquals("QCs at 3 levels, 1 at the level with fewest; the rule asks for 3 or more levels with 2 or more QCs "
+                + "each", v.get(1).reason());
         assertEquals(Verdict.Outcome.FAIL, v.get(0).outcome(), v.get(0).reason());
         assertTrue(v.get(0).reason().startsWith("2 of 3 QCs within their limit; by known value 2 (LLOQ): 1 of 1, 6: 0 of 1, "
                 + "10: 1 of 1; outside: QC-M ("), v.get(0).reason());
