@@ -21,8 +21,6 @@ import org.meritbook.study.OptionValue;
 public final class LloqLevels {
     /** The cell option naming the LLOQ level, or a list of them. */
     public static final String OPTION = "lloq-level";
-    /** Relative difference under which a known value is the standard's concentration (both typed numbers). */
-    private static final double SAME = 1e-9;
 
     private LloqLevels() {
     }
@@ -101,7 +99,7 @@ public final class LloqLevels {
     public static LloqLevel atLowestStandard(Map<String, Double> knownByLabel, double lowest, String what) {
         List<String> at = new ArrayList<>();
         for (Map.Entry<String, Double> e : knownByLabel.entrySet()) {
-            if (Math.abs(e.getValue() - lowest) <= SAME * Math.max(Math.abs(e.getValue()), Math.abs(lowest))) {
+            if (NominalValues.sameLevel(e.getValue(), lowest)) {
                 at.add(e.getKey());
             }
         }

@@ -25,6 +25,14 @@ public record NominalValues(Map<String, Double> byLabel) implements Exported {
         }
     }
 
+    /** Relative difference under which two typed nominal values are one level (3 and 3.0000000000001). */
+    private static final double SAME_LEVEL = 1e-9;
+
+    /** Whether two nominal values are the same level: typed numbers that differ only in their last digits. */
+    public static boolean sameLevel(double a, double b) {
+        return Math.abs(a - b) <= SAME_LEVEL * Math.max(Math.abs(a), Math.abs(b));
+    }
+
     /** The nominal value of one member, when the section records one. */
     public OptionalDouble of(String label) {
         Double v = byLabel.get(label);

@@ -136,7 +136,7 @@ final class ProfileFile {
         String characteristic = r.get("characteristic") == null ? q : String.valueOf(r.get("characteristic"));
         String source = r.get("source") == null ? "laboratory profile" : String.valueOf(r.get("source"));
         if (q.equals("deviation_percent")) {
-            onlyKeys(r, Set.of("within", "lowest-level-within", "fraction", "minimum-levels"),
+            checkGroupRule(r, Set.of("within", "lowest-level-within", "fraction", "minimum-levels"),
                     "a rule on a calibration's deviation_percent", where, which);
             double within = positive(r, "within", where, which);
             double lowest = r.containsKey("lowest-level-within") ? positive(r, "lowest-level-within", where, which) : within;
@@ -144,7 +144,7 @@ final class ProfileFile {
             return new DeviationRule(characteristic, within, lowest, fraction, levels(r, where, which), source);
         }
         if (q.equals("qc_deviation_percent") && kind == AnalysisKind.UNKNOWNS && RUN_KEYS.stream().anyMatch(r::containsKey)) {
-            onlyKeys(r, Set.of("within", "lowest-level-within", "fraction", "fraction-per-level", "minimum-levels",
+            checkGroupRule(r, Set.of("within", "lowest-level-within", "fraction", "fraction-per-level", "minimum-levels",
                     "minimum-per-level"), "a rule on a run's QCs together", where, which);
             double within = positive(r, "within", where, which);
             double lowest = r.containsKey("lowest-level-within") ? positive(r, "lowest-level-within", where, which) : within;
@@ -249,8 +249,11 @@ final class ProfileFile {
                 "'" + w + "'" + Suggestion.hint(w, Comparison.words())));
     }
 
-    /** The limit keys and qualifiers besides those of every rule: any other is refused, never ignored. */
-    private static void onlyKeys(Map<?, ?> r, Set<String> allowed, String what, String where, String which) {
+    /**
+     * A rule that judges several members at once: only {@code allowed} beside the keys of every rule (any
+     * other is refused, never ignored), and {@code within:} among them.
+     */
+    private static void checkGroupRule(Map<?, ?> r, Set<String> allowed, String what, String where, String which) {
         Set<String> common = Set.of("kind", "quantity", "characteristic", "source");
         List<String> other = r.keySet().stream().map(String::valueOf).filter(k -> !common.contains(k) && !allowed.contains(k))
                 .sorted().toList();

@@ -55,8 +55,6 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
     /** The family judged, named in the verdict: the dossier's summary points its members to it. */
     static final String FAMILY = "qc_deviation_percent";
     static final String PREFIX = FAMILY + ":";
-    /** Known values this close (relative) are one concentration level, as in {@code LloqLevels}. */
-    private static final double SAME_LEVEL = 1e-9;
     /** Slack for a share compared with its minimum: 4 of 6 is two thirds although 6 · 2/3 is not exactly 4. */
     private static final double SHARE_SLACK = 1e-9;
 
@@ -115,14 +113,13 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
         if (!tally.pass() && !identified && lloqTolerance != tolerance) {
             // said only where it would turn the run: the lowest level's QCs, were they at the LLOQ
             double lowest = levels.get(0);
-            if (tally(qcs, levels, comparison, qc -> sameLevel(qc.known(), lowest)).pass()) {
+            if (tally(qcs, levels, comparison, qc -> NominalValues.sameLevel(qc.known(), lowest)).pass()) {
                 reason += LevelRule.NOT_IDENTIFIED;
             }
         }
         Verdict run = new Verdict(characteristic, FAMILY, text(), tally.pass() ? Verdict.Outcome.PASS : Verdict.Outcome.FAIL,
                 reason);
-        int fewest = levels.stream().mapToInt(l -> (int) qcs.stream().filter(q -> sameLevel(q.known(), l)).count()).min()
-                .orElse(0);
+        int fewest = tally.fewest();
         if (levels.size() >= design.levels() && fewest >= design.perLevel()) {
             return List.of(run);
         }
@@ -137,26 +134,24 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
     private record Qc(String label, double known, Double deviation, boolean atLloq) {
     }
 
-    private record Tally(boolean pass, int within, List<String> byLevel, List<String> outside) {
+    /** The count: whether the run passes, QCs within, each level's line, those outside, the fewest QCs at a level. */
+    private record Tally(boolean pass, int within, List<String> byLevel, List<String> outside, int fewest) {
     }
 
     /** The distinct known values, ascending; values within a relative 1e-9 are one level (as typed numbers are). */
     private static List<Double> levels(List<Qc> qcs) {
         List<Double> levels = new ArrayList<>();
         qcs.stream().map(Qc::known).sorted().forEach(k -> {
-            if (levels.isEmpty() || !sameLevel(levels.get(levels.size() - 1), k)) {
+            if (levels.isEmpty() || !NominalValues.sameLevel(levels.get(levels.size() - 1), k)) {
                 levels.add(k);
             }
         });
         return levels;
     }
 
-    private static boolean sameLevel(double a, double b) {
-        return Math.abs(a - b) <= SAME_LEVEL * Math.max(Math.abs(a), Math.abs(b));
-    }
-
     private Tally tally(List<Qc> qcs, List<Double> levels, Comparison comparison, Predicate<Qc> atLloq) {
         int within = 0;
+        int fewest = Integer.MAX_VALUE;
         boolean pass = true;
         List<String> byLevel = new ArrayList<>();
         List<String> outside = new ArrayList<>();
@@ -165,12 +160,13 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
             int all = 0;
             boolean lloqHere = false;
             for (Qc qc : qcs) {
-                if (!sameLevel(qc.known(), level)) {
+                if (!NominalValues.sameLevel(qc.known(), level)) {
                     continue;
                 }
                 all++;
-                lloqHere |= atLloq.test(qc);
-                double limit = atLloq.test(qc) ? lloqTolerance : tolerance;
+                boolean lloq = atLloq.test(qc);
+                lloqHere |= lloq;
+                double limit = lloq ? lloqTolerance : tolerance;
                 if (qc.deviation() == null) {
                     outside.add(qc.label() + " (not read back)");
                 } else if (comparison.passes(Math.abs(qc.deviation()), limit, false)) {
@@ -183,9 +179,10 @@ public record QcRunRule(String characteristic, double tolerance, double lloqTole
             }
             pass &= in >= minimumLevelFraction * all - SHARE_SLACK;
             within += in;
+            fewest = Math.min(fewest, all);
             byLevel.add(Limits.text(level) + (lloqHere ? " (LLOQ)" : "") + ": " + in + " of " + all);
         }
         pass &= within >= minimumFraction * qcs.size() - SHARE_SLACK;
-        return new Tally(pass, within, byLevel, outside);
+        return new Tally(pass, within, byLevel, outside, fewest);
     }
 }

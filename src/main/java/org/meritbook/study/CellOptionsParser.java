@@ -136,8 +136,7 @@ final class CellOptionsParser {
 
     /** Replicate response columns side by side: {@code y: [B, C, D]}, each a header or a letter. */
     private boolean checkColumnList(String name, OptionValue value) {
-        if (!(value.value() instanceof List<?>) || value.list().isEmpty()
-                || value.list().stream().anyMatch(v -> !v.isScalar() || v.text().isBlank())) {
+        if (!isListOfWords(value)) {
             problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "one column or a list of columns for '" + name + "'",
                     Problems.describe(value), "Write '" + name + ": Area' or, for replicates in columns, '"
                             + name + ": [B, C, D]'.");
@@ -146,9 +145,9 @@ final class CellOptionsParser {
         return true;
     }
 
+    /** The LLOQ levels: {@code lloq-level: [LLOQ-1, LLOQ-2]}, each as the section shows it. */
     private boolean checkLevelList(String name, OptionValue value) {
-        if (!(value.value() instanceof List<?>) || value.list().isEmpty()
-                || value.list().stream().anyMatch(v -> !v.isScalar() || v.text().isBlank())) {
+        if (!isListOfWords(value)) {
             String found = !(value.value() instanceof List<?>) ? Problems.describe(value)
                     : value.list().isEmpty() ? "an empty list" : "a list holding a blank or nested value";
             problems.add(ErrorKey.BAD_OPTION_VALUE, value.line(), "one level or a list of levels for '" + name + "'",
@@ -156,6 +155,12 @@ final class CellOptionsParser {
             return false;
         }
         return true;
+    }
+
+    /** A non-empty list whose items are all written, none a list or a map. */
+    private static boolean isListOfWords(OptionValue value) {
+        return value.value() instanceof List<?> && !value.list().isEmpty()
+                && value.list().stream().allMatch(v -> v.isScalar() && !v.text().isBlank());
     }
 
     private boolean checkMethods(OptionValue value) {

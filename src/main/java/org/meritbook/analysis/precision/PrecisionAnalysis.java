@@ -41,12 +41,12 @@ public final class PrecisionAnalysis implements Analysis {
                 ? "'" + data.groupColumn().header() + "' (column " + data.groupColumn().letter()
                         + "): one-way ANOVA, repeatability within and intermediate precision across groups"
                 : "none: all results of a level are replicates under repeatability conditions");
+        List<String> levels = data.levelled() ? data.levels().stream().map(PrecisionData.Level::label).toList() : List.of();
         section.setting("Levels", data.levelled()
                 ? "'" + data.levelColumn().header() + "' (column " + data.levelColumn().letter() + "): "
-                        + String.join(", ", data.levels().stream().map(PrecisionData.Level::label).toList())
+                        + String.join(", ", levels)
                 : "one level (all results)");
-        LloqLevels.named(cell, context, data.levelled() ? data.levels().stream().map(PrecisionData.Level::label).toList()
-                : List.of(), data.levelled() ? "levels in column '" + data.levelColumn().header() + "'"
+        LloqLevels.named(cell, context, levels, data.levelled() ? "levels in column '" + data.levelColumn().header() + "'"
                 : "levels of a 'level:' column").ifPresent(l -> LloqLevels.record(section, l));
         section.setting("Confidence level", "95 %");
         section.setting("Outlier screening", "Grubbs (single, two-sided) on the results"

@@ -1,7 +1,6 @@
 package org.meritbook.analysis.unknowns;
 
 import java.util.ArrayList;
-import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -82,14 +81,16 @@ public final class UnknownsAnalysis implements Analysis {
         Map<String, Group> groups = groups(rows, options, context, cell);
         Map<Integer, Group> groupOfRow = new LinkedHashMap<>();
         Map<String, String> notes = new LinkedHashMap<>();
+        Map<String, Double> qcs = new LinkedHashMap<>(); // known value by QC sample
         for (Group g : groups.values()) {
             g.rows().forEach(r -> groupOfRow.put(r.index(), g));
             if (g.known() != null) {
+                qcs.put(g.label(), g.known());
                 section.nominal(g.label(), g.known()); // every QC, read back or not: a run's QCs are counted from it
             }
             notes.put(g.label(), readBack(section, g, line, calibration, units, loq, options, rows.columns()));
         }
-        lloq(cell, context, groups.values(), line, units).ifPresent(l -> LloqLevels.record(section, l));
+        lloq(cell, context, qcs, line, units).ifPresent(l -> LloqLevels.record(section, l));
         return section.build(table(rows, groupOfRow, notes, section, units));
     }
 
@@ -99,10 +100,8 @@ public final class UnknownsAnalysis implements Analysis {
      * in the sample's unit is not a standard's concentration) and that standard is the lowest planned
      * (with the run's lowest standard excluded, a low QC at the next one is not an LLOQ QC).
      */
-    private static Optional<LloqLevel> lloq(AnalysisCell cell, AnalysisContext context, Collection<Group> groups,
+    private static Optional<LloqLevel> lloq(AnalysisCell cell, AnalysisContext context, Map<String, Double> qcs,
                                             CalibrationLine line, Units units) {
-        Map<String, Double> qcs = new LinkedHashMap<>();
-        groups.stream().filter(g -> g.known() != null).forEach(g -> qcs.put(g.label(), g.known()));
         Optional<LloqLevel> named = LloqLevels.named(cell, context, qcs.keySet(),
                 "QC samples (samples with a known value)");
         OptionalDouble lowest = line.lowestStandardAboveZero();
